@@ -1,0 +1,51 @@
+import { Command, CommanderError } from "commander";
+import type { CommandContext } from "./command-context.js";
+import { EXIT_CODES } from "./exit-codes.js";
+import { UsageError } from "./usage-error.js";
+import { registerCommands } from "./register-commands.js";
+
+const CAUTION =
+  "Estimates for early feasibility studies only: not a zoning determination. Local codes and licensed professionals decide.";
+
+/**
+ * Runs the `floorcast` command line.
+ * @param argv - process.argv-style arguments (node, script, ...args).
+ * @param io - streams to use; defaults to the process's own.
+ * @returns the exit status: 0 success, 1 some inputs failed, 2 usage error.
+ */
+export async function main(argv: readonly string[], io?: Partial<CommandContext>): Promise<number> {
+  let exitCode: number = EXIT_CODES.success;
+  const ctx: CommandContext = {
+    stdin: io?.stdin ?? process.stdin,
+    stdout: io?.stdout ?? process.stdout,
+    stderr: io?.stderr ?? process.stderr,
+    setExitCode(code: number) {
+      exitCode = Math.max(exitCode, code);
+    },
+  };
+  const program = new Command("floorcast")
+    .description(
+      `Fast, validated surrogates of an exact floor-area (massing) calculation.\n${CAUTION}`,
+    )
+    .exitOverride()
+    .configureOutput({
+      writeOut: (s) => ctx.stdout.write(s),
+      writeErr: (s) => ctx.stderr.write(s),
+    });
+  registerCommands(program, ctx);
+  try {
+    await program.parseAsync(argv as string[]);
+  } catch (error) {
+    if (error instanceof CommanderError) {
+      if (error.exitCode === 0) return EXIT_CODES.success;
+      return EXIT_CODES.usage;
+    }
+    if (error instanceof UsageError || error instanceof RangeError || error instanceof TypeError) {
+      ctx.stderr.write(`floorcast: ${error.message}\n`);
+      return EXIT_CODES.usage;
+    }
+    ctx.stderr.write(`floorcast: ${error instanceof Error ? error.message : String(error)}\n`);
+    return EXIT_CODES.someFailed;
+  }
+  return exitCode;
+}

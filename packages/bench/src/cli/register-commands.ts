@@ -1,0 +1,11 @@
+import type { Command } from "commander";
+import type { CommandContext } from "./command-context.js";
+
+/**
+ * Adds every subcommand to the program. Each command lives in its own file under `commands/`
+ * and exports a `register…Command(program, ctx)` function called here.
+ */
+export function registerCommands(program: Command, ctx: CommandContext): void {
+  void program;
+  void ctx;
+}

@@ -1,0 +1,70 @@
+/**
+ * Kind of a parcel edge. `street` is a street-facing side line of a corner lot.
+ */
+export type LotLine = "front" | "side" | "rear" | "street";
+
+/** A point in metres, `[x, y]`. */
+export type Point = readonly [number, number];
+
+/** A parcel: a simple convex polygon and the kind of each of its edges. */
+export interface Parcel {
+  /** Vertices in either orientation; edge i runs from vertex i to vertex (i + 1) mod n. */
+  readonly vertices: readonly Point[];
+  /** `lotLines[i]` is the kind of edge i. */
+  readonly lotLines: readonly LotLine[];
+}
+
+/** Required yard depths in metres, measured at right angles to each lot line. */
+export interface Setbacks {
+  readonly front: number;
+  readonly side: number;
+  readonly rear: number;
+  /** Street-side yard of a corner lot; defaults to `front`. */
+  readonly street?: number;
+}
+
+/** A sky exposure plane: starts `startHeight` above the street lot lines and rises `ratio` m per metre back. */
+export interface SkyPlane {
+  readonly startHeight: number;
+  readonly ratio: number;
+}
+
+/** Everything the massing rule needs for one parcel (units: metres). */
+export interface MassingInput {
+  readonly parcel: Parcel;
+  readonly setbacks: Setbacks;
+  /** Floor-to-floor height, > 0. */
+  readonly floorHeight: number;
+  /** Height limit, > 0. */
+  readonly maxHeight: number;
+  /** Floor area ratio cap, > 0; no cap when absent. */
+  readonly maxFar?: number;
+  /** Lot coverage cap in (0, 1]; 1 when absent. */
+  readonly maxCoverage?: number;
+  readonly skyPlane?: SkyPlane;
+  /** Least width of a floor plate, ≥ 0. */
+  readonly minPlateWidth?: number;
+  /** Least area of a floor plate, ≥ 0. */
+  readonly minPlateArea?: number;
+}
+
+/** Why the next floor was not built. */
+export type LimitedBy = "height" | "plate" | "far" | "setbacks";
+
+/** The exact result of the massing rule for one input. */
+export interface MassingResult {
+  readonly lotArea: number;
+  readonly buildableArea: number;
+  readonly footprintArea: number;
+  readonly floors: number;
+  readonly height: number;
+  readonly gfa: number;
+  readonly far: number;
+  readonly coverage: number;
+  readonly openSpace: number;
+  readonly facadeLength: number;
+  readonly limitedBy: LimitedBy;
+  readonly coverageCapped: boolean;
+  /** Floor plates, floor by floor, only when asked for. */
+  readonly plates?: readonly (readonly Point[])[];
+}

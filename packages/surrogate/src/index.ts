@@ -1,0 +1,1 @@
+export type { Prediction, Surrogate, SurrogateTrainer, TrainingData } from "./surrogate-types.js";
