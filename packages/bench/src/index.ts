@@ -1,1 +1,31 @@
 export { main } from "./cli/main.js";
+// Optimisers (packages/bench/src/optimise/)
+export type {
+  CategoricalVariable,
+  CommonOptions,
+  ContinuousVariable,
+  Design,
+  EvaluatedDesign,
+  Evaluator,
+  IntegerVariable,
+  Objective,
+  OptimisationProblem,
+  OptimisationResult,
+  OptimisationVariable,
+  OutputConstraint,
+  OutputGradient,
+  Outputs,
+} from "./optimise/optimisation-problem.js";
+export { scoreOutputs } from "./optimise/evaluation-session.js";
+export { compareFeasibility, objectiveLoss } from "./optimise/feasibility-rules.js";
+export { dominates, nonDominatedIndices } from "./optimise/pareto-dominance.js";
+export { gridAxes, gridSearch } from "./optimise/grid-search.js";
+export type { GridSearchOptions } from "./optimise/grid-search.js";
+export { randomSearch } from "./optimise/random-search.js";
+export type { RandomSearchOptions } from "./optimise/random-search.js";
+export { patternSearch } from "./optimise/pattern-search.js";
+export type { PatternSearchOptions } from "./optimise/pattern-search.js";
+export { geneticAlgorithm } from "./optimise/genetic-algorithm.js";
+export type { GeneticAlgorithmOptions } from "./optimise/genetic-algorithm.js";
+export { particleSwarm } from "./optimise/particle-swarm.js";
+export type { ParticleSwarmOptions } from "./optimise/particle-swarm.js";

@@ -1,0 +1,142 @@
+/**
+ * The optimisation interface shared by every optimiser in `@floorcast/bench`.
+ *
+ * A problem is pure data ({@link OptimisationProblem}): variables, objectives and constraints on
+ * outputs. The function being optimised is a separate {@link Evaluator} (the exact massing
+ * evaluator, a surrogate, or a published test function), so the same problem runs on either.
+ * Every optimiser has the shape `optimiser(problem, evaluator, options) => Promise<OptimisationResult>`
+ * and records how many designs it evaluated and how many times it called the evaluator.
+ */
+
+/** A continuous variable on [min, max]; with `step`, only min + k·step (k = 0, 1, …) are legal values. */
+export interface ContinuousVariable {
+  readonly kind: "continuous";
+  readonly name: string;
+  readonly min: number;
+  readonly max: number;
+  /** Optional lattice step (> 0), e.g. a yard depth in 0.5 m steps. */
+  readonly step?: number;
+}
+
+/** An integer variable taking every integer in [min, max] (min, max integers). */
+export interface IntegerVariable {
+  readonly kind: "integer";
+  readonly name: string;
+  readonly min: number;
+  readonly max: number;
+}
+
+/** A categorical variable taking one of `levels` (unordered; at least one level, no duplicates). */
+export interface CategoricalVariable {
+  readonly kind: "categorical";
+  readonly name: string;
+  readonly levels: readonly (string | number)[];
+}
+
+/** A design variable. */
+export type OptimisationVariable = ContinuousVariable | IntegerVariable | CategoricalVariable;
+
+/** One design: variable name → value (a number, or a categorical level). */
+export type Design = Readonly<Record<string, number | string>>;
+
+/** The outputs of one evaluated design: output name → value (NaN or a missing key means "could not evaluate"). */
+export type Outputs = Readonly<Record<string, number>>;
+
+/** An objective: maximise or minimise one named output. */
+export interface Objective {
+  readonly output: string;
+  readonly sense: "max" | "min";
+}
+
+/**
+ * A constraint on one output: `output op value`, e.g. `{ output: "height", op: "<=", value: 45 }`.
+ * The g(x) ≤ 0 form is `{ output: "g", op: "<=", value: 0 }` with the evaluator returning g.
+ */
+export interface OutputConstraint {
+  readonly output: string;
+  readonly op: "<=" | ">=";
+  readonly value: number;
+}
+
+/** An optimisation problem: what to vary, what to optimise, what must hold. */
+export interface OptimisationProblem {
+  /** At least one variable; names unique. */
+  readonly variables: readonly OptimisationVariable[];
+  /** At least one objective. Single-objective optimisers require exactly one. */
+  readonly objectives: readonly Objective[];
+  /** Constraints on outputs; a design violating any is infeasible. */
+  readonly constraints?: readonly OutputConstraint[];
+}
+
+/**
+ * Partial derivatives of outputs with respect to numeric variables at one design:
+ * `gradient[output][variable]`. Categorical variables are omitted.
+ */
+export type OutputGradient = Readonly<Record<string, Readonly<Record<string, number>>>>;
+
+/**
+ * The function being optimised. `evaluate` receives a batch of designs and resolves to their
+ * outputs in the same order (it may be exact or a surrogate, synchronous work wrapped in a
+ * promise or truly asynchronous, e.g. a worker pool). A design whose outputs contain NaN, or
+ * lack an objective or constraint output, is treated as infeasible and counted in
+ * {@link OptimisationResult.invalid}; it is never reported as an optimum.
+ * `gradient` (optional, e.g. from a surrogate) returns d output / d variable per design; the
+ * gradient optimiser falls back to central finite differences without it.
+ */
+export interface Evaluator {
+  evaluate(batch: readonly Design[]): Promise<readonly Outputs[]>;
+  gradient?(batch: readonly Design[]): Promise<readonly OutputGradient[]>;
+}
+
+/** One evaluated design, as the optimisers record it. */
+export interface EvaluatedDesign {
+  readonly design: Design;
+  readonly outputs: Outputs;
+  /** Objective values in the problem's order, as the evaluator returned them (not sign-flipped). */
+  readonly objectives: readonly number[];
+  /** Total constraint violation Σ max(0, gᵢ)/max(1, |valueᵢ|); Infinity when invalid. */
+  readonly violation: number;
+  /** True when every constraint holds and every objective and constraint output is a finite number. */
+  readonly feasible: boolean;
+  /** False when an objective or constraint output is NaN, ±Infinity or missing. */
+  readonly valid: boolean;
+}
+
+/** Options every optimiser accepts. */
+export interface CommonOptions {
+  /** Maximum number of designs evaluated (≥ 0; 0 evaluates nothing). */
+  readonly maxEvaluations?: number;
+  /** Seed for every random draw (seedrandom). Deterministic methods ignore it. */
+  readonly seed?: number | string;
+  /** Keep every evaluated design in `history` (default false). */
+  readonly keepHistory?: boolean;
+  /** Called after each evaluator call with designs evaluated so far and the planned total (or the budget). */
+  readonly onProgress?: (done: number, total: number) => void;
+}
+
+/** What every optimiser returns. */
+export interface OptimisationResult {
+  /** Method name, e.g. "grid", "particle-swarm". */
+  readonly method: string;
+  /**
+   * Best feasible design for the first objective (Deb's feasibility rules), or null when no
+   * feasible design was evaluated. For multi-objective runs, the first objective's best.
+   */
+  readonly best: EvaluatedDesign | null;
+  /** Feasible non-dominated designs (for one objective: the best, or empty). */
+  readonly front: readonly EvaluatedDesign[];
+  /** Designs evaluated (sum of batch sizes). */
+  readonly evaluations: number;
+  /** Calls to `evaluator.evaluate`. */
+  readonly evaluatorCalls: number;
+  /** Calls to `evaluator.gradient`. */
+  readonly gradientCalls: number;
+  /** Designs whose outputs were NaN/missing (treated as infeasible). */
+  readonly invalid: number;
+  /** Best feasible first-objective value after each evaluation (NaN until the first feasible one). */
+  readonly trace: readonly number[];
+  /** Why the run ended. */
+  readonly stopped: "budget" | "complete" | "converged";
+  /** Every evaluated design, in order, when `keepHistory` was set. */
+  readonly history?: readonly EvaluatedDesign[];
+}
