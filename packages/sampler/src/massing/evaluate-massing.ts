@@ -1,0 +1,192 @@
+import { clipHalfPlanes } from "../geometry/clip-half-planes.js";
+import { convexPolygonProblem } from "../geometry/convex-polygon-problem.js";
+import { makeCounterClockwise } from "../geometry/make-counter-clockwise.js";
+import { signedArea } from "../geometry/polygon-area.js";
+import { polygonPerimeter } from "../geometry/polygon-perimeter.js";
+import { polygonWidth } from "../geometry/polygon-width.js";
+import type { LimitedBy, MassingInput, MassingResult, Point } from "./massing-types.js";
+import { MassingWorkspace } from "./massing-workspace.js";
+import { skyPlaneCut } from "./sky-plane-cut.js";
+import { solveCoverageInset } from "./solve-coverage-inset.js";
+import { validateMassingInput } from "./validate-massing-input.js";
+
+/** Options of {@link evaluateMassing}. */
+export interface EvaluateMassingOptions {
+  /** Include the floor plates, floor by floor (default false). */
+  readonly plates?: boolean;
+}
+
+/** Relative tolerance of the rule: areas to 1e-9 × lot area, widths to 1e-9 × √(lot area). */
+const REL = 1e-9;
+/** Absolute tolerance of the height test, metres. */
+const HEIGHT_TOL = 1e-9;
+
+const ws = new MassingWorkspace();
+
+function toPoints(xy: Float64Array, m: number): Point[] {
+  const pts: Point[] = new Array<Point>(m);
+  for (let i = 0; i < m; i++) pts[i] = [xy[2 * i]!, xy[2 * i + 1]!];
+  return pts;
+}
+
+/**
+ * Evaluates the massing rule (version 1) exactly: yards as half-planes at each lot line's setback,
+ * the lot-coverage cap as an inner parallel polygon of the buildable area, then floors stacked
+ * under the height limit, the sky exposure plane (a cut at (z − startHeight) / ratio from every
+ * street lot line), the plate limits and the FAR cap. The rule is written out in the README
+ * ("The massing rule (version 1)"); yard depths are measured at right angles to the lot line, as
+ * zoning ordinances define yards. Estimates for early feasibility studies, not a zoning determination.
+ * @param input - parcel, setbacks, heights and caps in metres (validated).
+ * @param options - `plates: true` adds the floor plates to the result.
+ * @returns areas, floors, height, GFA, FAR, coverage, open space, facade length, the reason the
+ *   next floor was not built (`limitedBy`) and whether the coverage cap shrank the footprint.
+ * @throws TypeError for a wrong type, RangeError for a bad value; messages start
+ *   `evaluateMassing: <field path>`.
+ */
+export function evaluateMassing(input: MassingInput, options?: EvaluateMassingOptions): MassingResult {
+  validateMassingInput(input);
+  let wantPlates = false;
+  if (options !== undefined) {
+    if (typeof options !== "object" || options === null) {
+      throw new TypeError(`evaluateMassing: options must be an object, got ${String(options)}`);
+    }
+    if (options.plates !== undefined && typeof options.plates !== "boolean") {
+      throw new TypeError(`evaluateMassing: options.plates must be a boolean, got ${typeof options.plates}`);
+    }
+    wantPlates = options.plates === true;
+  }
+  const { parcel, setbacks, floorHeight, maxHeight, skyPlane } = input;
+  const vertices = parcel.vertices;
+  const lotLines = parcel.lotLines;
+  const n = vertices.length;
+  ws.ensure(n);
+  const xy = ws.parcel;
+  for (let i = 0; i < n; i++) {
+    const v = vertices[i]!;
+    xy[2 * i] = v[0];
+    xy[2 * i + 1] = v[1];
+  }
+  const problem = convexPolygonProblem(xy, n);
+  if (problem !== null) throw new RangeError(`evaluateMassing: parcel.vertices ${problem}`);
+  const orient = signedArea(xy, n) > 0 ? 1 : -1;
+  const streetSetback = setbacks.street ?? setbacks.front;
+
+  // Yards: for edge i, the half-plane of points at distance ≥ setback from its line, parcel side.
+  let yards = 0;
+  let streets = 0;
+  for (let i = 0; i < n; i++) {
+    const j = i + 1 === n ? 0 : i + 1;
+    const px = xy[2 * i]!;
+    const py = xy[2 * i + 1]!;
+    const dx = xy[2 * j]! - px;
+    const dy = xy[2 * j + 1]! - py;
+    const len = Math.hypot(dx, dy);
+    const a = (-orient * dy) / len;
+    const b = (orient * dx) / len;
+    const c = a * px + b * py;
+    const kind = lotLines[i]!;
+    const s =
+      kind === "front" ? setbacks.front : kind === "side" ? setbacks.side : kind === "rear" ? setbacks.rear : streetSetback;
+    if (s > 0) {
+      ws.yardPlanes[3 * yards] = a;
+      ws.yardPlanes[3 * yards + 1] = b;
+      ws.yardPlanes[3 * yards + 2] = c + s;
+      yards++;
+    }
+    if (skyPlane !== undefined && (kind === "front" || kind === "street")) {
+      ws.streetPlanes[3 * streets] = a;
+      ws.streetPlanes[3 * streets + 1] = b;
+      ws.streetPlanes[3 * streets + 2] = c;
+      streets++;
+    }
+  }
+  makeCounterClockwise(xy, n);
+  const lotArea = Math.abs(signedArea(xy, n));
+  const areaTol = REL * lotArea;
+  const widthTol = REL * Math.sqrt(lotArea);
+
+  // Step 1: the buildable area B.
+  const mB = clipHalfPlanes(xy, n, ws.yardPlanes, yards, ws.buildable, ws.scratch);
+  const buildableArea = mB > 0 ? Math.max(0, signedArea(ws.buildable, mB)) : 0;
+
+  // Step 2: lot coverage.
+  const coverageTarget = (input.maxCoverage ?? 1) * lotArea;
+  let base = ws.buildable;
+  let mBase = mB;
+  let baseArea = buildableArea;
+  let coverageCapped = false;
+  if (buildableArea > areaTol && buildableArea > coverageTarget + areaTol) {
+    mBase = solveCoverageInset(ws, mB, coverageTarget, areaTol, widthTol * 1e-3);
+    base = ws.base;
+    baseArea = mBase > 0 ? signedArea(base, mBase) : 0;
+    coverageCapped = true;
+  }
+
+  // Step 3: floors.
+  const minArea = input.minPlateArea ?? 0;
+  const minWidth = input.minPlateWidth ?? 0;
+  const farCap = input.maxFar === undefined ? Infinity : input.maxFar * lotArea + areaTol;
+  const plates: Point[][] | undefined = wantPlates ? [] : undefined;
+  let baseFails: boolean | undefined;
+  let floors = 0;
+  let gfa = 0;
+  let footprintArea = 0;
+  let facadeLength = 0;
+  let limitedBy: LimitedBy;
+  for (let k = 1; ; k++) {
+    const z = k * floorHeight;
+    if (z > maxHeight + HEIGHT_TOL) {
+      limitedBy = "height";
+      break;
+    }
+    if (buildableArea <= areaTol) {
+      limitedBy = "setbacks";
+      break;
+    }
+    let plate = base;
+    let m = mBase;
+    let area = baseArea;
+    let fails: boolean;
+    if (skyPlane !== undefined && z > skyPlane.startHeight) {
+      const d = (z - skyPlane.startHeight) / skyPlane.ratio;
+      m = skyPlaneCut(ws, base, mBase, streets, d);
+      plate = ws.plate;
+      area = m > 0 ? signedArea(plate, m) : 0;
+      fails = area <= areaTol || area < minArea - areaTol || (minWidth > 0 && polygonWidth(plate, m) < minWidth - widthTol);
+    } else {
+      baseFails ??=
+        area <= areaTol || area < minArea - areaTol || (minWidth > 0 && polygonWidth(plate, m) < minWidth - widthTol);
+      fails = baseFails;
+    }
+    if (fails) {
+      limitedBy = "plate";
+      break;
+    }
+    if (gfa + area > farCap) {
+      limitedBy = "far";
+      break;
+    }
+    gfa += area;
+    floors = k;
+    if (k === 1) {
+      footprintArea = area;
+      facadeLength = polygonPerimeter(plate, m);
+    }
+    if (plates !== undefined) plates.push(toPoints(plate, m));
+  }
+  const result: MassingResult = {
+    lotArea,
+    buildableArea,
+    footprintArea,
+    floors,
+    height: floors * floorHeight,
+    gfa,
+    far: gfa / lotArea,
+    coverage: footprintArea / lotArea,
+    openSpace: lotArea - footprintArea,
+    facadeLength,
+    limitedBy,
+    coverageCapped,
+  };
+  return plates === undefined ? result : { ...result, plates };
+}

@@ -1,0 +1,60 @@
+import { clipHalfPlanes } from "../geometry/clip-half-planes.js";
+import { edgeHalfPlanes } from "../geometry/edge-half-planes.js";
+import { polygonPerimeter } from "../geometry/polygon-perimeter.js";
+import { polygonWidth } from "../geometry/polygon-width.js";
+import { signedArea } from "../geometry/polygon-area.js";
+import type { MassingWorkspace } from "./massing-workspace.js";
+
+const MAX_ITERATIONS = 200;
+
+/**
+ * Finds the inner parallel polygon of the buildable area B (every edge moved inward by the same δ)
+ * whose area equals `target`, to within `tolerance`, and writes it to `ws.base`.
+ *
+ * A(δ) is continuous, decreasing and convex (A′(δ) = −P(δ), the inset's perimeter, which shrinks
+ * as δ grows; derived), so Newton steps δ ← δ + (A(δ) − target) / P(δ) approach the root from
+ * below without overshooting; each step is kept inside a bisection bracket [lo, hi] with
+ * hi = width(B) / 2 (the inset is empty there), so the solve always converges.
+ * @param ws - workspace holding B in `ws.buildable`.
+ * @param m - number of vertices of B (counter-clockwise, convex, area > target).
+ * @param target - wanted area (> 0).
+ * @param tolerance - allowed |area − target|.
+ * @param minEdge - edges of B this short or shorter are ignored (no reliable direction).
+ * @returns the number of vertices of the inset in `ws.base`.
+ */
+export function solveCoverageInset(
+  ws: MassingWorkspace,
+  m: number,
+  target: number,
+  tolerance: number,
+  minEdge: number,
+): number {
+  const src = ws.buildable;
+  const k = edgeHalfPlanes(src, m, 0, ws.planes, minEdge);
+  const planes = ws.planes;
+  const shifted = ws.shifted;
+  let lo = 0;
+  let hi = polygonWidth(src, m) / 2;
+  let delta = 0;
+  let f = signedArea(src, m) - target;
+  let perimeter = polygonPerimeter(src, m);
+  let count = 0;
+  for (let iter = 0; iter < MAX_ITERATIONS; iter++) {
+    let next = perimeter > 0 ? delta + f / perimeter : NaN;
+    if (!(next > lo && next < hi)) next = (lo + hi) / 2;
+    for (let j = 0; j < k; j++) {
+      shifted[3 * j] = planes[3 * j]!;
+      shifted[3 * j + 1] = planes[3 * j + 1]!;
+      shifted[3 * j + 2] = planes[3 * j + 2]! + next;
+    }
+    count = clipHalfPlanes(src, m, shifted, k, ws.base, ws.scratch);
+    const area = count > 0 ? signedArea(ws.base, count) : 0;
+    f = area - target;
+    delta = next;
+    if (Math.abs(f) <= tolerance) return count;
+    if (f > 0) lo = next;
+    else hi = next;
+    perimeter = count > 0 ? polygonPerimeter(ws.base, count) : 0;
+  }
+  return count;
+}
