@@ -2,6 +2,8 @@
 export interface Prediction {
   readonly mean: number[][];
   readonly sd?: number[][];
+  /** Conformal wrappers only: interval bounds (rows × targets) with the stated coverage. */
+  readonly interval?: { readonly lower: number[][]; readonly upper: number[][]; readonly coverage: number };
 }
 
 /**

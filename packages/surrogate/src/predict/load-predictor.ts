@@ -1,0 +1,50 @@
+import type { ModelFileShape } from "./model-file-shape.js";
+import type { Predictor } from "./predictor.js";
+import { objectField } from "./predictor-checks.js";
+import { createMlpPredictor } from "./mlp-predictor.js";
+import { createEnsemblePredictor } from "./ensemble-predictor.js";
+import { createConformalPredictor } from "./conformal-predictor.js";
+
+const FN = "loadPredictor";
+
+function names(label: string, v: unknown): string[] {
+  if (!Array.isArray(v) || v.length === 0 || !v.every((s) => typeof s === "string")) {
+    throw new TypeError(`${FN}: ${label} must be a non-empty array of names`);
+  }
+  return v as string[];
+}
+
+/**
+ * Loads a floorcast model file (a parsed object or its JSON text) into a dependency-free predictor:
+ * plain typed-array arithmetic for "gp", "mlp", "ensemble" and "conformal" files, importing nothing
+ * outside this directory, so it also runs in a browser.
+ * @param modelJson - the model file, as an object or a JSON string.
+ * @returns `{ modelType, inputs, targets, predict(x) }`; predict takes rows × inputs in original
+ *   units and gives `mean` (and `sd`, and for conformal files `interval`) as rows × targets.
+ * @throws TypeError / RangeError naming the faulty field (wrong kind, unsupported format version, bad payload).
+ */
+export function loadPredictor(modelJson: unknown): Predictor {
+  const raw = typeof modelJson === "string" ? (JSON.parse(modelJson) as unknown) : modelJson;
+  const file = objectField(FN, "model file", raw);
+  if (file.kind !== "floorcast.surrogate") {
+    throw new RangeError(`${FN}: kind must be "floorcast.surrogate", got ${JSON.stringify(file.kind)}`);
+  }
+  if (file.formatVersion !== 1) {
+    throw new RangeError(`${FN}: formatVersion ${JSON.stringify(file.formatVersion)} is not supported (this predictor reads 1)`);
+  }
+  names("inputs", file.inputs);
+  names("targets", file.targets);
+  objectField(FN, "inputScaling", file.inputScaling);
+  objectField(FN, "outputScaling", file.outputScaling);
+  const shaped = file as unknown as ModelFileShape;
+  switch (file.modelType) {
+    case "mlp":
+      return createMlpPredictor(shaped);
+    case "ensemble":
+      return createEnsemblePredictor(shaped, loadPredictor);
+    case "conformal":
+      return createConformalPredictor(shaped, loadPredictor);
+    default:
+      throw new RangeError(`${FN}: modelType must be gp, mlp, ensemble or conformal, got ${JSON.stringify(file.modelType)}`);
+  }
+}

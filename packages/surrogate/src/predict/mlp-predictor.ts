@@ -1,0 +1,107 @@
+import { denseLayer, type ActivationCode } from "./dense-layer.js";
+import type { ModelFileShape } from "./model-file-shape.js";
+import type { Predictor, PredictorOutput } from "./predictor.js";
+import { finiteVector, objectField, packRows, unpackRows } from "./predictor-checks.js";
+
+const FN = "loadPredictor";
+const BLOCK = 256;
+const ACTIVATIONS: Record<string, ActivationCode> = { relu: 1, tanh: 2, elu: 3 };
+
+/** A plain-arithmetic MLP predictor that can also fill caller-owned buffers. */
+export interface MlpPredictor extends Predictor {
+  /**
+   * Predicts `rows` rows from a row-major Float64Array (rows × inputs) into `out` (rows × targets,
+   * original units), without allocating. Inputs are not checked.
+   */
+  predictInto(x: Float64Array, rows: number, out: Float64Array): void;
+}
+
+/**
+ * Builds a dependency-free predictor from an "mlp" model file (payload described in mlp-payload.ts):
+ * inputs mapped from bounds to [-1, 1], dense layers with the hidden activation, a linear output
+ * layer, then de-standardised targets. Runs blocks of 256 rows through preallocated Float64Arrays.
+ * @param file - a model file whose modelType is "mlp" (structure checked here; zod validation is the loader's).
+ * @returns the predictor.
+ * @throws TypeError / RangeError naming the faulty field.
+ */
+export function createMlpPredictor(file: ModelFileShape): MlpPredictor {
+  const payload = objectField(FN, "payload", file.payload);
+  const act = ACTIVATIONS[String(payload.activation)];
+  if (act === undefined) throw new RangeError(`${FN}: payload.activation must be relu, tanh or elu, got ${String(payload.activation)}`);
+  if (!Array.isArray(payload.layers) || payload.layers.length === 0) {
+    throw new RangeError(`${FN}: payload.layers must be a non-empty array`);
+  }
+  const nIn = file.inputs.length;
+  const nOut = file.targets.length;
+  const lower = finiteVector(FN, "inputScaling.lower", file.inputScaling.lower, nIn);
+  const upper = finiteVector(FN, "inputScaling.upper", file.inputScaling.upper, nIn);
+  const yMean = finiteVector(FN, "outputScaling.mean", file.outputScaling.mean, nOut);
+  const yStd = finiteVector(FN, "outputScaling.std", file.outputScaling.std, nOut);
+  const scale = new Float64Array(nIn);
+  const shift = new Float64Array(nIn);
+  for (let j = 0; j < nIn; j++) {
+    const w = upper[j]! - lower[j]!;
+    scale[j] = w > 0 ? 2 / w : 0;
+    shift[j] = w > 0 ? -1 - scale[j]! * lower[j]! : 0;
+  }
+  const dims: number[] = [nIn];
+  const wts: Float64Array[] = [];
+  const biases: Float64Array[] = [];
+  (payload.layers as unknown[]).forEach((raw, l) => {
+    const layer = objectField(FN, `payload.layers[${l}]`, raw);
+    const shape = layer.shape;
+    const din = dims[l]!;
+    if (!Array.isArray(shape) || shape.length !== 2 || shape[0] !== din || !Number.isInteger(shape[1]) || (shape[1] as number) < 1) {
+      throw new RangeError(`${FN}: payload.layers[${l}].shape must be [${din}, width ≥ 1], got ${JSON.stringify(shape)}`);
+    }
+    const dout = shape[1] as number;
+    const w = finiteVector(FN, `payload.layers[${l}].weights`, layer.weights, din * dout);
+    const wt = new Float64Array(din * dout);
+    for (let k = 0; k < din; k++) for (let j = 0; j < dout; j++) wt[j * din + k] = w[k * dout + j]!;
+    wts.push(wt);
+    biases.push(finiteVector(FN, `payload.layers[${l}].bias`, layer.bias, dout));
+    dims.push(dout);
+  });
+  if (dims[dims.length - 1] !== nOut) {
+    throw new RangeError(`${FN}: the last layer must have ${nOut} outputs (one per target), got ${dims[dims.length - 1]}`);
+  }
+  const widest = Math.max(...dims);
+  const bufA = new Float64Array(BLOCK * widest);
+  const bufB = new Float64Array(BLOCK * widest);
+  const nLayers = wts.length;
+
+  function predictInto(x: Float64Array, rows: number, out: Float64Array): void {
+    for (let start = 0; start < rows; start += BLOCK) {
+      const m = Math.min(BLOCK, rows - start);
+      const base = start * nIn;
+      for (let i = 0; i < m; i++) {
+        for (let j = 0; j < nIn; j++) bufA[i * nIn + j] = scale[j]! * x[base + i * nIn + j]! + shift[j]!;
+      }
+      let src = bufA;
+      let dst = bufB;
+      for (let l = 0; l < nLayers; l++) {
+        denseLayer(src, m, dims[l]!, wts[l]!, biases[l]!, dims[l + 1]!, dst, l === nLayers - 1 ? 0 : act!);
+        const t = src;
+        src = dst;
+        dst = t;
+      }
+      const o = start * nOut;
+      for (let i = 0; i < m; i++) {
+        for (let j = 0; j < nOut; j++) out[o + i * nOut + j] = yMean[j]! + yStd[j]! * src[i * nOut + j]!;
+      }
+    }
+  }
+
+  return {
+    modelType: "mlp",
+    inputs: [...file.inputs],
+    targets: [...file.targets],
+    predictInto,
+    predict(x: readonly (readonly number[])[]): PredictorOutput {
+      const packed = packRows("predict", x, nIn);
+      const out = new Float64Array(x.length * nOut);
+      predictInto(packed, x.length, out);
+      return { mean: unpackRows(out, x.length, nOut) };
+    },
+  };
+}
