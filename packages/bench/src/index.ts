@@ -36,3 +36,6 @@ export { nsga2 } from "./optimise/nsga2.js";
 export type { Nsga2Options } from "./optimise/nsga2.js";
 export { projectedGradient } from "./optimise/projected-gradient.js";
 export type { ProjectedGradientOptions } from "./optimise/projected-gradient.js";
+export { expectedImprovement, probabilityOfFeasibility } from "./optimise/expected-improvement.js";
+export { bayesianOptimisation } from "./optimise/bayesian-optimisation.js";
+export type { AcquisitionModel, BayesianOptimisationOptions } from "./optimise/bayesian-optimisation.js";

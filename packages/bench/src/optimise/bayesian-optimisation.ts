@@ -1,0 +1,155 @@
+import { fitGaussianProcess, type Prediction, type TrainingData } from "@floorcast/surrogate";
+import type { CommonOptions, EvaluatedDesign, Evaluator, OptimisationProblem, OptimisationResult } from "./optimisation-problem.js";
+import type { DesignCodec } from "./design-codec.js";
+import { EvaluationSession } from "./evaluation-session.js";
+import { expectedImprovement, probabilityOfFeasibility } from "./expected-improvement.js";
+import { objectiveLoss } from "./feasibility-rules.js";
+import { pollPoints } from "./pattern-search.js";
+import { createRng, unitSamples } from "./unit-samples.js";
+import { numberOption, validateProblem } from "./validate-problem.js";
+
+/** A model of the objective and constraints: anything with a Gaussian predict (a fitted GP). */
+export interface AcquisitionModel {
+  predict(x: readonly (readonly number[])[]): Prediction;
+}
+
+/** Options of {@link bayesianOptimisation}. */
+export interface BayesianOptimisationOptions extends CommonOptions {
+  /** Initial Latin-hypercube designs (default max(5, 5·dims), at most maxEvaluations). */
+  readonly initialSamples?: number;
+  /** Random candidates scored per iteration before local refinement of the best (default 2000). */
+  readonly candidates?: number;
+  /** Acquisition starts refined by pattern search on the model (default 5). */
+  readonly acquisitionStarts?: number;
+  /** Stop when the largest EI falls below this fraction of max(1, |best|) (default 0: spend the budget). */
+  readonly eiTolerance?: number;
+  /**
+   * Fits the model to (unit-coded inputs, [loss, g₁, …]) — default a Matérn-5/2 ARD GP from
+   * fitGaussianProcess with its own seeded restarts; each target gets its own GP.
+   */
+  readonly fitModel?: (data: TrainingData, seed: number) => AcquisitionModel | Promise<AcquisitionModel>;
+}
+
+/** Coded vector → model input: unit coordinates for numeric variables, one-hot columns per categorical. */
+function modelRow(codec: DesignCodec, x: readonly number[]): number[] {
+  const u = codec.toUnit(x);
+  const row: number[] = [];
+  for (let i = 0; i < codec.dims; i++) {
+    if (codec.categorical[i]) for (let k = 0; k < codec.count[i]!; k++) row.push(k === x[i] ? 1 : 0);
+    else row.push(u[i]!);
+  }
+  return row;
+}
+
+/** Targets modelled: the loss, then each constraint as g = ±(output − value)/max(1, |value|) (≤ 0 feasible). */
+function targetsOf(problem: OptimisationProblem, e: EvaluatedDesign): number[] {
+  const g = (problem.constraints ?? []).map((c) => {
+    const v = e.outputs[c.output]!;
+    return (c.op === "<=" ? v - c.value : c.value - v) / Math.max(1, Math.abs(c.value));
+  });
+  return [objectiveLoss(problem, e), ...g];
+}
+
+const defaultFit = (data: TrainingData, seed: number): AcquisitionModel =>
+  fitGaussianProcess(data, {
+    seed,
+    kernel: "matern52",
+    inputBounds: { lower: data.inputs.map(() => 0), upper: data.inputs.map(() => 1) },
+    noiseFloor: 1e-8,
+  });
+
+/**
+ * Bayesian optimisation with expected improvement (EGO; Jones, Schonlau & Welch 1998, J. Global
+ * Optim. 13:455–492) and exact evaluations in the loop: a Latin-hypercube initial design, then per
+ * iteration fit one GP to the loss and one per constraint (independent GPs), and evaluate the
+ * design maximising EI × Π P(gᵢ ≤ 0) (probability of feasibility; Schonlau, Welch & Jones 1998;
+ * Gardner et al. 2014), or Π P(gᵢ ≤ 0) alone while nothing feasible is known. The acquisition is
+ * maximised by multi-start on the GP: `candidates` legal random designs scored in one batch, the
+ * best `acquisitionStarts` refined by mixed-variable pattern search on the model (lattice values
+ * by whole steps, categoricals by level swaps; categoricals enter the GP one-hot). Invalid (NaN)
+ * results are recorded as infeasible and left out of the fit; designs already evaluated are never
+ * proposed again. `trace` holds the best feasible value after every exact evaluation.
+ * @param problem - single-objective problem.
+ * @param evaluator - the (exact) function evaluated.
+ * @param options - maxEvaluations (required, finite), seed, initialSamples, candidates, acquisitionStarts, eiTolerance, fitModel.
+ * @returns the result.
+ */
+export async function bayesianOptimisation(
+  problem: OptimisationProblem,
+  evaluator: Evaluator,
+  options: BayesianOptimisationOptions,
+): Promise<OptimisationResult> {
+  const fn = "bayesianOptimisation";
+  validateProblem(fn, problem, evaluator, options ?? {}, "single");
+  const budget = numberOption(fn, "maxEvaluations", options.maxEvaluations, NaN, 0, true);
+  if (Number.isNaN(budget)) throw new RangeError(`${fn}: options.maxEvaluations must be given (finite)`);
+  const dims = problem.variables.length;
+  const n0 = Math.min(budget, numberOption(fn, "initialSamples", options.initialSamples, Math.max(5, 5 * dims), 1, true));
+  const nCand = numberOption(fn, "candidates", options.candidates, 2000, 1, true);
+  const nStarts = numberOption(fn, "acquisitionStarts", options.acquisitionStarts, 5, 1, true);
+  const eiTol = numberOption(fn, "eiTolerance", options.eiTolerance, 0, 0);
+  if (options.fitModel !== undefined && typeof options.fitModel !== "function") throw new TypeError(`${fn}: options.fitModel must be a function`);
+  const fit = options.fitModel ?? defaultFit;
+  const session = new EvaluationSession("bayesian-optimisation", problem, evaluator, options, budget);
+  const { codec } = session;
+  const rng = createRng(options.seed);
+  const seen = new Set<string>();
+  const xs: number[][] = [];
+  const ys: number[][] = [];
+  const add = (x: number[], e: EvaluatedDesign): void => {
+    seen.add(x.join(","));
+    if (e.valid) {
+      xs.push(modelRow(codec, x));
+      ys.push(targetsOf(problem, e));
+    }
+  };
+  const init = unitSamples(n0, dims, "lhs", rng).map((u) => codec.fromUnit(u));
+  (await session.evaluate(init)).forEach((e, i) => add(init[i]!, e));
+  const nTargets = 1 + (problem.constraints?.length ?? 0);
+  const inputs = xs[0]?.map((_, j) => `u${j}`) ?? modelRow(codec, init[0] ?? codec.lower.slice()).map((_, j) => `u${j}`);
+  const targets = Array.from({ length: nTargets }, (_, j) => (j === 0 ? "loss" : `g${j}`));
+  for (let iter = 0; session.remaining > 0; iter++) {
+    let next: number[] | undefined;
+    if (xs.length >= 2) {
+      const model = await fit({ inputs, targets, x: xs, y: ys }, (Number(options.seed ?? 0) | 0) + 1009 * iter);
+      const best = session.best ? objectiveLoss(problem, session.best) : NaN;
+      const score = (cands: readonly (readonly number[])[]): number[] => {
+        const p = model.predict(cands.map((c) => modelRow(codec, c)));
+        const sd = ("sdLatent" in p ? (p as { sdLatent: number[][] }).sdLatent : p.sd) ?? p.mean.map((r) => r.map(() => 0));
+        return cands.map((c, r) => {
+          if (seen.has(c.join(","))) return -1;
+          let pof = 1;
+          for (let j = 1; j < nTargets; j++) pof *= probabilityOfFeasibility(p.mean[r]![j]!, sd[r]![j]!);
+          return Number.isNaN(best) ? pof : expectedImprovement(p.mean[r]![0]!, sd[r]![0]!, best) * pof;
+        });
+      };
+      const cands = unitSamples(nCand, dims, "random", rng).map((u) => codec.fromUnit(u));
+      const sc = score(cands);
+      const order = sc.map((s, i) => [s, i] as const).sort((a, b) => b[0] - a[0]).slice(0, nStarts);
+      let bestScore = -1;
+      for (const [s0, i0] of order) {
+        let x = cands[i0]!;
+        let s = s0;
+        for (let delta = 0.05, steps = 0; delta > 1e-5 && steps < 200; steps++) {
+          const polls = pollPoints(codec, x, delta);
+          const ps = score(polls);
+          const k = ps.reduce((bi, v, i) => (v > ps[bi]! ? i : bi), 0);
+          if (polls.length > 0 && ps[k]! > s) [x, s] = [polls[k]!, ps[k]!];
+          else delta /= 2;
+        }
+        if (s > bestScore) [next, bestScore] = [x, s];
+      }
+      if (eiTol > 0 && session.best && bestScore < eiTol * Math.max(1, Math.abs(best))) return session.result("converged");
+      if (bestScore <= 0) next = undefined;
+    }
+    if (next === undefined) {
+      const pool = unitSamples(64, dims, "random", rng).map((u) => codec.fromUnit(u)).filter((c) => !seen.has(c.join(",")));
+      next = pool[0];
+      if (next === undefined) return session.result("complete");
+    }
+    const [e] = await session.evaluate([next]);
+    if (e === undefined) break;
+    add(next, e);
+  }
+  return session.result("budget");
+}
