@@ -6,13 +6,13 @@
  * meaningful when the optimum is negative, as for the published minimisation test functions).
  * @param exactOptimum - exact objective value at the exact optimum, finite, non-zero.
  * @param exactAtSurrogate - exact objective value at the surrogate-driven design, finite.
- * @param sense - "maximise" (default) or "minimise".
+ * @param sense - "maximise" (default) or "minimise" (or the optimisers' "max" / "min").
  * @returns the gap (0 = no loss; 0.05 = 5% of the optimum lost).
  */
 export function optimumGap(
   exactOptimum: number,
   exactAtSurrogate: number,
-  sense: "maximise" | "minimise" = "maximise",
+  sense: "maximise" | "minimise" | "max" | "min" = "maximise",
 ): number {
   if (typeof exactOptimum !== "number" || typeof exactAtSurrogate !== "number") {
     throw new TypeError("optimumGap: exactOptimum and exactAtSurrogate must be numbers");
@@ -23,9 +23,9 @@ export function optimumGap(
   if (!Number.isFinite(exactAtSurrogate)) {
     throw new RangeError(`optimumGap: exactAtSurrogate must be finite, got ${exactAtSurrogate}`);
   }
-  if (sense !== "maximise" && sense !== "minimise") {
+  if (!["maximise", "minimise", "max", "min"].includes(sense)) {
     throw new RangeError(`optimumGap: sense must be "maximise" or "minimise", got ${String(sense)}`);
   }
-  const loss = sense === "maximise" ? exactOptimum - exactAtSurrogate : exactAtSurrogate - exactOptimum;
+  const loss = sense === "maximise" || sense === "max" ? exactOptimum - exactAtSurrogate : exactAtSurrogate - exactOptimum;
   return loss / Math.abs(exactOptimum);
 }

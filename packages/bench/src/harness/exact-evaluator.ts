@@ -1,0 +1,28 @@
+import type { Design, Evaluator, Outputs } from "../optimise/optimisation-problem.js";
+import type { BenchProblem } from "../problem/bench-problem.js";
+
+/** An {@link Evaluator} backed by a problem's exact evaluator, counting every design it evaluates. */
+export interface CountingEvaluator extends Evaluator {
+  /** Designs evaluated so far. */
+  readonly count: number;
+}
+
+/**
+ * The exact evaluator of a problem as an optimiser's evaluator. For a site-selection problem
+ * pass the site: its parameter values are merged into every design before evaluation.
+ * @param problem - the problem.
+ * @param site - fixed values merged into each design (site selection), or undefined.
+ * @returns a counting evaluator.
+ */
+export function exactEvaluator(problem: BenchProblem, site?: Design): CountingEvaluator {
+  let count = 0;
+  return {
+    get count() {
+      return count;
+    },
+    evaluate(batch: readonly Design[]): Promise<readonly Outputs[]> {
+      count += batch.length;
+      return Promise.resolve(batch.map((d) => problem.evaluate(site ? { ...site, ...d } : d)));
+    },
+  };
+}

@@ -1,0 +1,102 @@
+import { patternSearch } from "../optimise/pattern-search.js";
+import type { EvaluatedDesign } from "../optimise/optimisation-problem.js";
+import type { BenchProblem } from "../problem/bench-problem.js";
+import type { SurrogateOptimumRecord } from "./bench-report-types.js";
+import type { BenchTrainer } from "./bench-trainer.js";
+import { exactEvaluator } from "./exact-evaluator.js";
+import { optimumGap } from "./optimum-gap.js";
+import { reevaluateSurrogateOptimum } from "./reevaluate-surrogate-optimum.js";
+import { reportDesign } from "./report-design.js";
+import type { TrainingSet } from "./sample-training-set.js";
+import { trainForTrial } from "./train-for-trial.js";
+import { searchSurrogate } from "./search-surrogate.js";
+import { surrogateEvaluator } from "./surrogate-evaluator.js";
+
+/** What one surrogate trial needs besides the problem. */
+export interface TrialSetup {
+  readonly trainer: BenchTrainer;
+  readonly trainingSize: number;
+  readonly seed: number;
+  /** Independent, exactly evaluated test set (shared by every trial of the problem). */
+  readonly test: TrainingSet;
+  /** Exact optimum value of the (first) objective. */
+  readonly exactValue: number;
+  /** Exact evaluations of local refinement after the surrogate search (default 20). */
+  readonly refineBudget?: number;
+  /** Unit-cube training rows to use instead of floorcast's maximin LHS (peer sampler). */
+  readonly unitRows?: readonly (readonly number[])[];
+  /** Sampler name written to the report (default "lhs-maximin"). */
+  readonly sampler?: string;
+  /** Surrogate search candidates (default 1024). */
+  readonly candidates?: number;
+}
+
+const seconds = (t0: number): number => (performance.now() - t0) / 1000;
+
+/**
+ * One single-objective trial: sample `trainingSize` exact designs, fit the surrogate, assess it on
+ * the test set, search the surrogate, re-evaluate its optimum exactly (falling back on the ranked
+ * list and the training set, never reporting an exactly infeasible design), compute the gap, then
+ * spend a small budget of exact pattern-search refinement and compute the gap again.
+ * @param problem - a single-objective problem.
+ * @param setup - the surrogate, size, seed, test set, exact optimum value and budgets.
+ * @returns the report.json entry.
+ */
+export async function runSingleTrial(problem: BenchProblem, setup: TrialSetup): Promise<SurrogateOptimumRecord> {
+  const { train, model, fitSeconds, accuracy, seconds: assessSeconds } = await trainForTrial(problem, setup);
+  const op = problem.optimisation;
+  const sense = op.objectives[0]!.sense;
+  const tOpt = performance.now();
+  const searched = await searchSurrogate(op, surrogateEvaluator(model, problem.trainingVariables), {
+    seed: setup.seed,
+    ...(setup.candidates ? { candidates: setup.candidates } : {}),
+  });
+  const optimise = seconds(tOpt);
+  setup.trainer.release?.(model);
+  const tRe = performance.now();
+  const exact = exactEvaluator(problem);
+  const chosen = await reevaluateSurrogateOptimum(op, searched, exact, train.designs);
+  const reevaluate = seconds(tRe);
+  const tRef = performance.now();
+  let refined: SurrogateOptimumRecord["refined"] = null;
+  const budget = setup.refineBudget ?? 20;
+  if (chosen.exact && budget > 0) {
+    const r = await patternSearch(op, exactEvaluator(problem), chosen.exact.design, {
+      maxEvaluations: budget,
+      initialStep: 0.05,
+    });
+    let best: EvaluatedDesign = chosen.exact;
+    if (r.best && r.best.feasible) {
+      const better = sense === "max" ? r.best.objectives[0]! > best.objectives[0]! : r.best.objectives[0]! < best.objectives[0]!;
+      if (better) best = r.best;
+    }
+    const rd = reportDesign(problem, best);
+    refined = { ...rd, gap: optimumGap(setup.exactValue, rd.value, sense), evaluations: r.evaluations };
+  }
+  const refine = seconds(tRef);
+  const reported = chosen.exact ? reportDesign(problem, chosen.exact) : null;
+  const training = train.designs.length;
+  return {
+    surrogate: setup.trainer.name,
+    sampler: setup.sampler ?? "lhs-maximin",
+    trainingSize: setup.trainingSize,
+    seed: setup.seed,
+    design: reported?.design ?? null,
+    input: reported?.input ?? null,
+    result: reported?.result ?? null,
+    value: reported?.value ?? null,
+    gap: reported ? optimumGap(setup.exactValue, reported.value, sense) : null,
+    source: chosen.source,
+    predicted: chosen.predicted?.outputs ?? null,
+    refined,
+    evaluations: training + chosen.evaluations,
+    evaluationsBreakdown: {
+      training,
+      reevaluation: chosen.evaluations,
+      refinement: refined?.evaluations ?? 0,
+      testSet: setup.test.designs.length,
+    },
+    accuracy,
+    seconds: { sample: train.seconds, fit: fitSeconds, assess: assessSeconds, optimise, reevaluate, refine },
+  };
+}

@@ -1,0 +1,44 @@
+import type { Surrogate } from "@floorcast/surrogate";
+import type { BenchProblem } from "../problem/bench-problem.js";
+import { assessAccuracy, type TargetAccuracy } from "./assess-accuracy.js";
+import type { BenchTrainer } from "./bench-trainer.js";
+import { sampleTrainingSet, type TrainingSet } from "./sample-training-set.js";
+import type { BatchPredictor } from "./surrogate-evaluator.js";
+
+/** A fitted, assessed surrogate of one trial. */
+export interface TrainedTrial {
+  readonly train: TrainingSet;
+  readonly model: Surrogate | BatchPredictor;
+  readonly fitSeconds: number;
+  readonly accuracy: TargetAccuracy[];
+  /** Assessment time. */
+  readonly seconds: number;
+}
+
+/**
+ * The steps every trial shares: sample the training design and evaluate it exactly, fit the
+ * surrogate, and assess it on the independent test set.
+ * @param problem - the problem.
+ * @param setup - trainer, training size, seed, test set and optional unit rows (peer sampler).
+ * @returns the training set, the model, and its accuracy and timings.
+ */
+export async function trainForTrial(
+  problem: BenchProblem,
+  setup: {
+    readonly trainer: BenchTrainer;
+    readonly trainingSize: number;
+    readonly seed: number;
+    readonly test: TrainingSet;
+    readonly unitRows?: readonly (readonly number[])[];
+  },
+): Promise<TrainedTrial> {
+  const train = sampleTrainingSet(problem, setup.trainingSize, `train-${setup.seed}`, setup.unitRows);
+  const t0 = performance.now();
+  const model = await setup.trainer.fit(
+    { inputs: train.inputs, targets: train.targets, x: train.x, y: train.y },
+    setup.seed,
+  );
+  const fitSeconds = (performance.now() - t0) / 1000;
+  const assessed = await assessAccuracy(model, setup.test);
+  return { train, model, fitSeconds, accuracy: assessed.accuracy, seconds: assessed.seconds };
+}
