@@ -56,3 +56,16 @@ export { modelFileSchema } from "./model-file/model-file-schema.js";
 export type { ModelFile } from "./model-file/model-file-schema.js";
 export { parseModelFile } from "./model-file/parse-model-file.js";
 export { loadSurrogate } from "./model-file/load-surrogate.js";
+// Uncertainty for any surrogate: deep ensembles and split-conformal intervals (uncertainty/)
+export { EnsembleSurrogate } from "./uncertainty/ensemble-surrogate.js";
+export type { EnsembleTraining } from "./uncertainty/ensemble-surrogate.js";
+export { fitEnsemble } from "./uncertainty/fit-ensemble.js";
+export type { EnsembleOptions } from "./uncertainty/fit-ensemble.js";
+export { ConformalSurrogate } from "./uncertainty/conformal-surrogate.js";
+export type { ConformalCalibration } from "./uncertainty/conformal-surrogate.js";
+export { calibrateConformal } from "./uncertainty/calibrate-conformal.js";
+export type { ConformalOptions } from "./uncertainty/calibrate-conformal.js";
+export { fitConformal } from "./uncertainty/fit-conformal.js";
+export type { FitConformalOptions } from "./uncertainty/fit-conformal.js";
+export { conformalQuantile } from "./uncertainty/conformal-quantile.js";
+export { MlpFileSurrogate } from "./model-file/mlp-surrogate-from-file.js";

@@ -1,0 +1,43 @@
+import type { KernelName } from "./kernels/kernel-name.js";
+
+/** Given (not fitted) hyperparameters for one target, in scaled units; a single lengthscale is shared. */
+export interface GivenHyperparameters {
+  readonly lengthscales: readonly number[] | number;
+  readonly signalVariance: number;
+  readonly noiseVariance: number;
+}
+
+/** Options of fitGaussianProcess (all optional; defaults in brackets). Variances refer to the standardised target. */
+export interface GaussianProcessOptions {
+  /** Kernel family ["matern52"]. */
+  readonly kernel?: KernelName;
+  /** One lengthscale per input [true] or one shared. */
+  readonly ard?: boolean;
+  /** Fix the noise variance to this value instead of learning it. */
+  readonly noiseVariance?: number;
+  /** Lower bound of the learned noise variance [1e-6]. */
+  readonly noiseFloor?: number;
+  /** Upper bound of the learned noise variance [1]. */
+  readonly noiseCeiling?: number;
+  /** Bounds of every lengthscale, unit-cube units [[0.01, 100]]. */
+  readonly lengthscaleBounds?: readonly [number, number];
+  /** Bounds of the signal variance [[0.001, 1000]]. */
+  readonly signalVarianceBounds?: readonly [number, number];
+  /** Declared input bounds for the unit-cube scaling [the data's range]. */
+  readonly inputBounds?: { readonly lower: readonly number[]; readonly upper: readonly number[] };
+  /** Skip the likelihood search and use these hyperparameters, one entry per target. */
+  readonly hyperparameters?: readonly GivenHyperparameters[];
+  /** Number of optimiser starts per target [3]. */
+  readonly restarts?: number;
+  /** Seed of the starting points [0]. */
+  readonly seed?: number;
+  /** Iteration cap per start [200]. */
+  readonly maxIterations?: number;
+  /**
+   * Fit hyperparameters on a greedy maximin subset of this many rows when n is larger, then condition on all
+   * rows; `false` always fits on all rows [600].
+   */
+  readonly hyperparameterSubset?: number | false;
+  /** Refuse (RangeError) fits estimated to need more bytes than this [2 GiB]. */
+  readonly memoryBudgetBytes?: number;
+}

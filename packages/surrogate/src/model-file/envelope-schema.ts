@@ -1,0 +1,34 @@
+import { z } from "zod";
+import { MODEL_FILE_KIND, MODEL_FORMAT_VERSION } from "./model-file-version.js";
+
+const finite = z.number().refine(Number.isFinite, "must be a finite number");
+
+/** Training summary every envelope carries; families add their own fields (the object is open). */
+export const trainingSummarySchema = z.looseObject({
+  n: z.number().int().nonnegative(),
+  seed: z.number(),
+  fitTimeMs: z.number().nonnegative(),
+});
+
+/**
+ * The zod schema of one model type's file: the shared versioned envelope (kind, formatVersion, modelType,
+ * inputs, targets, inputScaling, outputScaling, payload, training, optional checksum) around `payload`.
+ * Each model type builds its schema with this and adds one line to `model-file-schema.ts`.
+ * @param modelType - the discriminator value, e.g. "gp".
+ * @param payload - the type-specific payload schema.
+ * @returns the envelope schema (a zod object, usable in a discriminated union).
+ */
+export function envelopeSchema<T extends string, P extends z.ZodType>(modelType: T, payload: P) {
+  return z.object({
+    kind: z.literal(MODEL_FILE_KIND),
+    formatVersion: z.literal(MODEL_FORMAT_VERSION),
+    modelType: z.literal(modelType),
+    inputs: z.array(z.string().min(1)).min(1),
+    targets: z.array(z.string().min(1)).min(1),
+    inputScaling: z.object({ lower: z.array(finite), upper: z.array(finite) }),
+    outputScaling: z.object({ mean: z.array(finite), std: z.array(finite.refine((v) => v > 0, "must be > 0")) }),
+    payload,
+    training: trainingSummarySchema,
+    checksum: z.string().optional(),
+  });
+}
