@@ -19,6 +19,42 @@ export { createCsvWriter } from "./csv/create-csv-writer.js";
 export type { CsvWriter, CsvWriterOptions } from "./csv/create-csv-writer.js";
 export { formatCsvValue } from "./csv/format-csv-value.js";
 export type { CsvValue } from "./csv/format-csv-value.js";
+export type { Scenario } from "./scenario/scenario.js";
+export { parseScenario } from "./scenario/parse-scenario.js";
+export { loadScenario } from "./scenario/load-scenario.js";
+export { scenarioToMassingInput } from "./scenario/scenario-to-massing-input.js";
+export { SCENARIO_SLOTS } from "./scenario/scenario-slots.js";
+export type { SlotDomain } from "./scenario/scenario-slots.js";
+export type { Evaluator, EvaluatorFunction, EvaluatorInput, EvaluatorOutput } from "./evaluator/evaluator.js";
+export { functionEvaluator } from "./evaluator/function-evaluator.js";
+export { massingEvaluator } from "./evaluator/massing-evaluator.js";
+export { massingOutputs, MASSING_OUTPUT_COLUMNS } from "./evaluator/massing-outputs.js";
+export { commandEvaluator } from "./evaluator/command-evaluator.js";
+export type { CommandEvaluatorOptions } from "./evaluator/command-evaluator.js";
+export { workerPoolEvaluator } from "./evaluator/worker-pool-evaluator.js";
+export type { WorkerPoolEvaluatorOptions } from "./evaluator/worker-pool-evaluator.js";
+export type { DatasetRow } from "./dataset/dataset-row.js";
+export { generateDataset } from "./dataset/generate-dataset.js";
+export type { GenerateDatasetOptions } from "./dataset/generate-dataset.js";
+export { parseShard } from "./dataset/shard.js";
+export type { Shard } from "./dataset/shard.js";
+export { shardRange } from "./dataset/shard-range.js";
+export { writeDataset } from "./dataset/write-dataset.js";
+export type { WriteDatasetOptions } from "./dataset/write-dataset.js";
+export { mergeShards } from "./dataset/merge-shards.js";
+export {
+  DATASET_CAUTION,
+  datasetManifestSchema,
+  formatManifest,
+  manifestPathFor,
+  readManifest,
+} from "./dataset/dataset-manifest.js";
+export type { DatasetManifest } from "./dataset/dataset-manifest.js";
+export { sha256File } from "./dataset/sha256-file.js";
+export { recoverPartial } from "./dataset/recover-partial.js";
+export type { RecoveredPartial } from "./dataset/recover-partial.js";
+export { createProgressBar } from "./dataset/progress-bar.js";
+export type { ProgressBar } from "./dataset/progress-bar.js";
 export type {
   CategoricalParameter,
   ContinuousParameter,

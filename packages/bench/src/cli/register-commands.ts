@@ -1,5 +1,7 @@
 import type { Command } from "commander";
 import type { CommandContext } from "./command-context.js";
+import { registerSampleCommand } from "./commands/sample.js";
+import { registerMergeCommand } from "./commands/merge.js";
 
 /**
  * Adds every subcommand to the program. Each command lives in its own file under `commands/`
@@ -8,4 +10,6 @@ import type { CommandContext } from "./command-context.js";
 export function registerCommands(program: Command, ctx: CommandContext): void {
   void program;
   void ctx;
+  registerSampleCommand(program, ctx);
+  registerMergeCommand(program, ctx);
 }

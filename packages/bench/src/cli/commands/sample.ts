@@ -1,0 +1,91 @@
+import type { Command } from "commander";
+import {
+  DESIGN_KINDS,
+  commandEvaluator,
+  createProgressBar,
+  loadScenario,
+  manifestPathFor,
+  parseShard,
+  writeDataset,
+  type DesignKind,
+  type Evaluator,
+} from "@floorcast/sampler";
+import type { CommandContext } from "../command-context.js";
+import { UsageError } from "../usage-error.js";
+
+interface SampleOptions {
+  scenario: string;
+  n: string;
+  seed: string;
+  design: string;
+  shard?: string;
+  resume?: boolean;
+  force?: boolean;
+  evaluatorCommand?: string;
+  out: string;
+}
+
+function wholeNumber(flag: string, text: string, min: number): number {
+  if (!/^\d+$/.test(text.trim()) || !(Number(text) >= min) || !Number.isSafeInteger(Number(text))) {
+    throw new UsageError(`sample: ${flag} must be a whole number ≥ ${min}, got ${JSON.stringify(text)}`);
+  }
+  return Number(text);
+}
+
+/**
+ * `floorcast sample`: evaluates a space-filling design of a scenario and writes the dataset CSV and its manifest
+ * (shards, resume, external evaluators; see README "Datasets").
+ * @param program - the root command.
+ * @param ctx - the streams and exit status.
+ */
+export function registerSampleCommand(program: Command, ctx: CommandContext): void {
+  program
+    .command("sample")
+    .description("Sample a scenario's design space with the exact evaluator and write a dataset CSV with its manifest")
+    .requiredOption("--scenario <file>", "scenario file (JSON, see README \"Scenario files\")")
+    .requiredOption("--n <n>", "design size (all shards together)")
+    .requiredOption("--seed <s>", "seed of the design (whole number)")
+    .option("--design <kind>", `design: ${DESIGN_KINDS.join(", ")}`, "lhs-maximin")
+    .option("--shard <k/N>", "write only the k-th of N contiguous slices of the same design")
+    .option("--resume", "continue an interrupted run from its last complete row")
+    .option("--force", "replace an existing output file")
+    .option("--evaluator-command <cmd>", "evaluate with an external program speaking JSON Lines on stdin/stdout")
+    .requiredOption("--out <file.csv>", "output CSV (manifest written beside it)")
+    .action(async (opts: SampleOptions) => {
+      const n = wholeNumber("--n", opts.n, 1);
+      const seed = wholeNumber("--seed", opts.seed, 0);
+      if (!(DESIGN_KINDS as readonly string[]).includes(opts.design)) {
+        throw new UsageError(`sample: --design must be one of ${DESIGN_KINDS.join(", ")}, got ${JSON.stringify(opts.design)}`);
+      }
+      const shard = opts.shard === undefined ? undefined : parseShard(opts.shard);
+      const scenario = await loadScenario(opts.scenario);
+      const evaluator: Evaluator | undefined =
+        opts.evaluatorCommand === undefined ? undefined : commandEvaluator(opts.evaluatorCommand);
+      let bar: ReturnType<typeof createProgressBar> | undefined;
+      try {
+        const manifest = await writeDataset(scenario, {
+          out: opts.out,
+          n,
+          seed,
+          design: opts.design as DesignKind,
+          ...(shard === undefined ? {} : { shard }),
+          resume: opts.resume === true,
+          force: opts.force === true,
+          ...(evaluator === undefined ? {} : { evaluator }),
+          onProgress: (done, total) => {
+            bar ??= createProgressBar(ctx.stderr, total, `sample ${scenario.name}`);
+            bar.update(done);
+          },
+        });
+        bar?.stop();
+        const s = manifest.shard;
+        ctx.stdout.write(
+          `wrote ${opts.out}: ${manifest.rows} rows (samples ${s.start}–${s.end - 1} of ${manifest.n}, shard ${s.index}/${s.count}), ` +
+            `sha256 ${manifest.csv.sha256}\nmanifest ${manifestPathFor(opts.out)}\n${manifest.caution}\n`,
+        );
+      } finally {
+        bar?.stop();
+        await evaluator?.close();
+      }
+    });
+}

@@ -1,0 +1,104 @@
+import { createDesign, type DesignKind } from "../design/create-design.js";
+import { mapUnitToSpace } from "../space/map-unit-to-space.js";
+import type { Scenario } from "../scenario/scenario.js";
+import type { Evaluator, EvaluatorFunction, EvaluatorOutput } from "../evaluator/evaluator.js";
+import { functionEvaluator } from "../evaluator/function-evaluator.js";
+import { massingEvaluator } from "../evaluator/massing-evaluator.js";
+import type { DatasetRow } from "./dataset-row.js";
+import type { Shard } from "./shard.js";
+import { shardRange } from "./shard-range.js";
+
+/** Options of {@link generateDataset}. */
+export interface GenerateDatasetOptions {
+  /** Size of the whole design (all shards together). */
+  readonly n: number;
+  /** Design family (createDesign). */
+  readonly design: DesignKind;
+  /** Seed of the design. */
+  readonly seed: number | string;
+  /** Generate only the k-th contiguous slice of the same design (default: all of it). */
+  readonly shard?: Shard;
+  /** Skip this many rows at the start of the (shard's) slice, e.g. to resume (default 0). */
+  readonly skip?: number;
+  /** Evaluator (default: the exact massing evaluator of the scenario). */
+  readonly evaluator?: Evaluator | EvaluatorFunction;
+}
+
+function checkOutput(out: unknown, sample: number, reserved: ReadonlySet<string>, columns: string[] | undefined): string[] {
+  const fn = "generateDataset";
+  if (typeof out !== "object" || out === null || Array.isArray(out)) {
+    throw new TypeError(`${fn}: sample ${sample}: the evaluator must return an object, got ${JSON.stringify(out)}`);
+  }
+  const keys = Object.keys(out);
+  if (columns === undefined) {
+    if (keys.length === 0) throw new RangeError(`${fn}: sample ${sample}: the evaluator returned no outputs`);
+    for (const k of keys) {
+      if (reserved.has(k)) throw new RangeError(`${fn}: sample ${sample}: output ${JSON.stringify(k)} clashes with an input column`);
+    }
+  } else if (keys.length !== columns.length || keys.some((k, j) => k !== columns[j])) {
+    throw new RangeError(
+      `${fn}: sample ${sample}: outputs ${JSON.stringify(keys)} differ from the first sample's ${JSON.stringify(columns)}`,
+    );
+  }
+  for (const k of keys) {
+    const v = (out as Record<string, unknown>)[k];
+    const ok = typeof v === "string" || typeof v === "boolean" || (typeof v === "number" && Number.isFinite(v));
+    if (!ok) throw new RangeError(`${fn}: sample ${sample}: output ${k} must be a finite number, string or boolean, got ${String(v)}`);
+  }
+  return keys;
+}
+
+/**
+ * Generates a dataset: the design (createDesign over the scenario's parameters, mapped by mapUnitToSpace), each
+ * sample evaluated — by default with the exact massing rule — and yielded as a row in design order: `sample`,
+ * every parameter, then every output (for the massing rule: every scalar of MassingResult, `limitedBy` as a
+ * string, `coverageCapped` as 0/1). The whole design is computed first (lhs-maximin is global), then only the
+ * shard's slice is evaluated; up to `evaluator.concurrency` evaluations run at once, answers kept in order.
+ * Rows are produced one at a time and never held.
+ * @param scenario - a validated scenario.
+ * @param options - n, design, seed, optional shard, skip and evaluator.
+ * @returns an async iterable of rows.
+ * @throws TypeError/RangeError (when iteration starts) for bad options or a bad evaluator answer.
+ */
+export async function* generateDataset(scenario: Scenario, options: GenerateDatasetOptions): AsyncGenerator<DatasetRow> {
+  const fn = "generateDataset";
+  if (typeof scenario !== "object" || scenario === null || !Array.isArray(scenario.parameters)) {
+    throw new TypeError(`${fn}: scenario must be a parsed scenario`);
+  }
+  if (typeof options !== "object" || options === null) throw new TypeError(`${fn}: options must be an object`);
+  const { start, end } = shardRange(options.n, options.shard);
+  const skip = options.skip ?? 0;
+  if (!Number.isSafeInteger(skip) || skip < 0 || skip > end - start) {
+    throw new RangeError(`${fn}: skip must be an integer in [0, ${end - start}], got ${skip}`);
+  }
+  const evaluator: Evaluator =
+    options.evaluator === undefined
+      ? massingEvaluator(scenario)
+      : typeof options.evaluator === "function"
+        ? functionEvaluator(options.evaluator)
+        : options.evaluator;
+  const unit = createDesign({ n: options.n, dims: scenario.parameters.length, design: options.design, seed: options.seed });
+  const records = mapUnitToSpace({ parameters: scenario.parameters }, unit);
+  unit.length = 0;
+  const names = scenario.parameters.map((p) => p.name);
+  const reserved = new Set(["sample", ...names]);
+  const inFlight: Promise<EvaluatorOutput>[] = [];
+  let next = start + skip;
+  let columns: string[] | undefined;
+  const launch = (i: number): void => {
+    const input = { ...scenario.fixed, ...records[i]! };
+    const p = Promise.resolve().then(() => evaluator.evaluate(input));
+    p.catch(() => {});
+    inFlight.push(p);
+  };
+  for (let i = next; i < end; i++) {
+    while (next < end && inFlight.length < Math.max(1, evaluator.concurrency)) launch(next++);
+    const out = await inFlight.shift()!;
+    columns = checkOutput(out, i, reserved, columns);
+    const row: Record<string, number | string | boolean> = { sample: i };
+    for (const name of names) row[name] = records[i]![name]!;
+    for (const k of columns) row[k] = out[k]!;
+    records[i] = {};
+    yield row;
+  }
+}

@@ -1,0 +1,13 @@
+import { createHash } from "node:crypto";
+import { createReadStream } from "node:fs";
+
+/**
+ * The SHA-256 (FIPS 180-4) of a file's bytes, read as a stream.
+ * @param path - the file.
+ * @returns the lower-case hex digest.
+ */
+export async function sha256File(path: string): Promise<string> {
+  const hash = createHash("sha256");
+  for await (const chunk of createReadStream(path)) hash.update(chunk as Buffer);
+  return hash.digest("hex");
+}

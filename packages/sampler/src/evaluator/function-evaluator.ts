@@ -1,0 +1,21 @@
+import type { Evaluator, EvaluatorFunction } from "./evaluator.js";
+
+/**
+ * Wraps any function (sync or async) from an input record to an output record as an {@link Evaluator}.
+ * @param fn - the function.
+ * @param options - `name` recorded in manifests (default "function"), `concurrency` (default 1; raise it for
+ *   async functions that wait on I/O).
+ * @returns the evaluator; `close` does nothing.
+ * @throws TypeError when fn is not a function; RangeError for a bad concurrency.
+ */
+export function functionEvaluator(
+  fn: EvaluatorFunction,
+  options: { readonly name?: string; readonly concurrency?: number } = {},
+): Evaluator {
+  if (typeof fn !== "function") throw new TypeError("functionEvaluator: fn must be a function");
+  const concurrency = options.concurrency ?? 1;
+  if (!Number.isInteger(concurrency) || concurrency < 1) {
+    throw new RangeError(`functionEvaluator: concurrency must be an integer ≥ 1, got ${concurrency}`);
+  }
+  return { name: options.name ?? "function", concurrency, evaluate: fn, close: async () => {} };
+}

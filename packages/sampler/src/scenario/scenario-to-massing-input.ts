@@ -1,0 +1,87 @@
+import type { MassingInput } from "../massing/massing-types.js";
+import { quadParcel } from "../massing/quad-parcel.js";
+import type { Scenario } from "./scenario.js";
+import { SCENARIO_SLOTS } from "./scenario-slots.js";
+
+/**
+ * Builds the massing input of one sample: the scenario's fixed values plus the sampled record, mapped onto the
+ * massing rule through the quad parcel family (`quadParcel({ frontage, depth, rearWidth, skew, corner })`, with
+ * `rearWidth = rearRatio × frontage` when the rear line is given as a ratio) and the slots listed in
+ * README "Scenario files".
+ * @param scenario - a validated scenario.
+ * @param record - one value per scenario parameter, keyed by name (as `mapUnitToSpace` returns).
+ * @returns the massing input (evaluateMassing validates it again).
+ * @throws TypeError when a value has the wrong type; RangeError when a parameter is missing or unknown.
+ */
+export function scenarioToMassingInput(
+  scenario: Scenario,
+  record: Readonly<Record<string, number | string>>,
+): MassingInput {
+  const fn = "scenarioToMassingInput";
+  if (typeof scenario !== "object" || scenario === null || !Array.isArray(scenario.parameters)) {
+    throw new TypeError(`${fn}: scenario must be a parsed scenario`);
+  }
+  if (typeof record !== "object" || record === null) throw new TypeError(`${fn}: record must be an object`);
+  const names = new Set(scenario.parameters.map((p) => p.name));
+  for (const key of Object.keys(record)) {
+    if (!names.has(key)) throw new RangeError(`${fn}: record.${key} is not a parameter of scenario ${scenario.name}`);
+  }
+  const values: Record<string, number | string | boolean> = { ...scenario.fixed };
+  for (const p of scenario.parameters) {
+    const v = record[p.name];
+    if (v === undefined) throw new RangeError(`${fn}: record.${p.name} is missing`);
+    values[p.name] = v;
+  }
+  const num = (name: string): number | undefined => {
+    const v = values[name];
+    if (v === undefined) return undefined;
+    if (typeof v !== "number") throw new TypeError(`${fn}: ${name} must be a number, got ${JSON.stringify(v)}`);
+    return v;
+  };
+  const need = (name: string): number => {
+    const v = num(name);
+    if (v === undefined) throw new RangeError(`${fn}: ${name} is not given by scenario ${scenario.name}`);
+    return v;
+  };
+  for (const name of Object.keys(values)) {
+    if (SCENARIO_SLOTS[name] === undefined) throw new RangeError(`${fn}: ${name} is not a massing slot`);
+  }
+  const corner = values.corner;
+  if (corner !== undefined && corner !== "none" && corner !== "left" && corner !== "right") {
+    throw new TypeError(`${fn}: corner must be "none", "left" or "right", got ${JSON.stringify(corner)}`);
+  }
+  const frontage = need("frontage");
+  const ratio = num("rearRatio");
+  const rearWidth = num("rearWidth") ?? (ratio === undefined ? undefined : ratio * frontage);
+  const skew = num("skew");
+  const parcel = quadParcel({
+    frontage,
+    depth: need("depth"),
+    ...(rearWidth === undefined ? {} : { rearWidth }),
+    ...(skew === undefined ? {} : { skew }),
+    ...(corner === undefined ? {} : { corner }),
+  });
+  const street = num("setbackStreet");
+  const start = num("skyPlaneStart");
+  const slope = num("skyPlaneRatio");
+  const optional = (key: keyof MassingInput, name: string): Partial<Record<string, number>> => {
+    const v = num(name);
+    return v === undefined ? {} : { [key]: v };
+  };
+  return {
+    parcel,
+    setbacks: {
+      front: need("setbackFront"),
+      side: need("setbackSide"),
+      rear: need("setbackRear"),
+      ...(street === undefined ? {} : { street }),
+    },
+    floorHeight: need("floorHeight"),
+    maxHeight: need("maxHeight"),
+    ...optional("maxFar", "maxFar"),
+    ...optional("maxCoverage", "maxCoverage"),
+    ...(start === undefined || slope === undefined ? {} : { skyPlane: { startHeight: start, ratio: slope } }),
+    ...optional("minPlateWidth", "minPlateWidth"),
+    ...optional("minPlateArea", "minPlateArea"),
+  } as MassingInput;
+}
