@@ -18,7 +18,8 @@ const MAX_ITERATIONS = 200;
  * @param ws - workspace holding B in `ws.buildable`.
  * @param m - number of vertices of B (counter-clockwise, convex, area > target).
  * @param target - wanted area (> 0).
- * @param tolerance - allowed |area − target|.
+ * @param tolerance - allowed |area − target| (the solve aims at a thousandth of it; with round-off
+ *   only, it stops after a bounded number of steps).
  * @param minEdge - edges of B this short or shorter are ignored (no reliable direction).
  * @returns the number of vertices of the inset in `ws.base`.
  */
@@ -51,7 +52,8 @@ export function solveCoverageInset(
     const area = count > 0 ? signedArea(ws.base, count) : 0;
     f = area - target;
     delta = next;
-    if (Math.abs(f) <= tolerance) return count;
+    // Aim well inside the tolerance so that sums over many floors stay within it too.
+    if (Math.abs(f) <= tolerance * 1e-3) return count;
     if (f > 0) lo = next;
     else hi = next;
     perimeter = count > 0 ? polygonPerimeter(ws.base, count) : 0;
