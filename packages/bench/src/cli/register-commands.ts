@@ -2,6 +2,8 @@ import type { Command } from "commander";
 import type { CommandContext } from "./command-context.js";
 import { registerSampleCommand } from "./commands/sample.js";
 import { registerMergeCommand } from "./commands/merge.js";
+import { registerAssessCommand } from "./commands/assess.js";
+import { registerMassingCommand } from "./commands/massing.js";
 
 /**
  * Adds every subcommand to the program. Each command lives in its own file under `commands/`
@@ -12,4 +14,6 @@ export function registerCommands(program: Command, ctx: CommandContext): void {
   void ctx;
   registerSampleCommand(program, ctx);
   registerMergeCommand(program, ctx);
+  registerAssessCommand(program, ctx);
+  registerMassingCommand(program, ctx);
 }
