@@ -3,7 +3,7 @@ import { EvaluationSession } from "./evaluation-session.js";
 import { compareFeasibility } from "./feasibility-rules.js";
 import { createRng, unitSamples } from "./unit-samples.js";
 import { numberOption, validateProblem } from "./validate-problem.js";
-import { polynomialMutation, sbxCrossover, variationSettings, type VariationSettings } from "./variation-operators.js";
+import { avoidDuplicate, polynomialMutation, sbxCrossover, variationSettings, type VariationSettings } from "./variation-operators.js";
 
 /** Options of {@link geneticAlgorithm}. */
 export interface GeneticAlgorithmOptions extends CommonOptions, Partial<VariationSettings> {
@@ -24,7 +24,8 @@ interface Member {
  * infeasible by total violation), SBX crossover and polynomial mutation (Deb & Agrawal 1995),
  * and (μ + λ) survival of the best by the same rules. Integers and stepped variables stay on
  * their lattice inside the operators (mutation moves whole steps); categoricals are crossed
- * uniformly and mutated by resampling levels. Stops when `maxEvaluations` is spent.
+ * uniformly and mutated by resampling levels. A child equal to a population member or an earlier
+ * child is mutated again (duplicate avoidance), so the budget is not spent re-evaluating designs. Stops when `maxEvaluations` is spent.
  * @param problem - single-objective problem.
  * @param evaluator - the function evaluated.
  * @param options - maxEvaluations (default 50 generations), seed, populationSize, tournamentSize, variation settings.
@@ -62,11 +63,14 @@ export async function geneticAlgorithm(
   };
   while (session.remaining > 0 && population.length > 0) {
     const children: number[][] = [];
+    const taken = new Set(population.map((m) => m.x.join(",")));
     while (children.length < pop) {
       const [a, b] = sbxCrossover(session.codec, tournament().x, tournament().x, settings, rng);
-      polynomialMutation(session.codec, a, settings, rng);
-      polynomialMutation(session.codec, b, settings, rng);
-      children.push(a, b);
+      for (const c of [a, b]) {
+        polynomialMutation(session.codec, c, settings, rng);
+        avoidDuplicate(session.codec, c, taken, settings, rng);
+        children.push(c);
+      }
     }
     const scored = await session.evaluate(children);
     const merged = [...population, ...scored.map((e, i) => ({ x: children[i]!, e }))];

@@ -12,6 +12,8 @@ export interface ParticleSwarmOptions extends CommonOptions {
   readonly constriction?: number;
   /** Cognitive and social acceleration c1 = c2 (default 2.05; Clerc & Kennedy 2002). */
   readonly acceleration?: number;
+  /** Iterations in which no personal best improves before every particle but the leader restarts (default 10; 0 never). */
+  readonly stallIterations?: number;
 }
 
 interface Particle {
@@ -40,6 +42,10 @@ function sampleLevel(q: readonly number[], rng: Rng): number {
  * Clerc & Kennedy (2002, IEEE TEC 6(1)): v ← χ[v + c1·r1·(p − x) + c2·r2·(g − x)], x ← x + v with
  * χ ≈ 0.7298 and c1 = c2 = 2.05 (φ = 4.1), global-best topology, velocities clamped to each
  * variable's range and absorbing walls. Personal and global bests compare by Deb's feasibility rules.
+ * After `stallIterations` iterations in which no personal best improves, all particles but the leader
+ * restart from a fresh Latin hypercube (a lattice swarm otherwise freezes once it collapses).
+ * A position already evaluated in the run is looked up rather than re-evaluated (no budget spent);
+ * the run ends "converged" after 100 iterations without a new design.
  * Mixed variables: lattice coordinates (integer, stepped) are snapped to the lattice inside every
  * position update; each categorical keeps a probability vector over its levels that moves by the
  * same constricted update towards the one-hot vectors of the personal and global best levels,
@@ -61,6 +67,7 @@ export async function particleSwarm(
   const n = numberOption(fn, "swarmSize", options.swarmSize, Math.max(20, 5 * dims), 2, true);
   const chi = numberOption(fn, "constriction", options.constriction, 0.7298, 0);
   const c = numberOption(fn, "acceleration", options.acceleration, 2.05, 0);
+  const stallLimit = numberOption(fn, "stallIterations", options.stallIterations, 10, 0, true);
   const session = new EvaluationSession("particle-swarm", problem, evaluator, {
     ...options,
     maxEvaluations: options.maxEvaluations ?? n * 50,
@@ -84,8 +91,41 @@ export async function particleSwarm(
     };
   });
   const leader = (): Particle => swarm.reduce((a, b) => (compareFeasibility(problem, b.bestE, a.bestE) < 0 ? b : a));
+  let stall = 0;
+  let idle = 0;
+  // Positions already evaluated are looked up, not re-evaluated: a lattice swarm revisits points often.
+  const cache = new Map<string, EvaluatedDesign>();
+  first.forEach((e, k) => cache.set(start[k]!.join(","), e));
+  const evaluateCached = async (xs: number[][]): Promise<EvaluatedDesign[] & { fresh: number }> => {
+    const keys = xs.map((x) => x.join(","));
+    const todo = [...new Set(keys.filter((k) => !cache.has(k)))];
+    const got = await session.evaluate(todo.map((k) => xs[keys.indexOf(k)]!));
+    got.forEach((e, i) => cache.set(todo[i]!, e));
+    const out = keys.flatMap((k) => (cache.has(k) ? [cache.get(k)!] : []));
+    return Object.assign(out, { fresh: got.length });
+  };
   while (session.remaining > 0 && swarm.length > 0) {
-    const g = leader().best;
+    const lead = leader();
+    const g = lead.best;
+    if (stallLimit > 0 && stall >= stallLimit) {
+      // Restart on stagnation (common practice): fresh positions for all but the leader, whose
+      // personal bests are then replaced by wherever they land.
+      stall = 0;
+      const fresh = unitSamples(swarm.length, dims, "lhs", rng).map((u) => codec.fromUnit(u));
+      const others = swarm.filter((p) => p !== lead);
+      others.forEach((p, k) => {
+        p.x = fresh[k]!;
+        p.v = p.x.map((xi, i) => (codec.categorical[i] ? 0 : (fresh[swarm.length - 1]![i]! - xi) / 2));
+        p.q = p.x.map((xi, i) => (codec.categorical[i] ? Array.from({ length: codec.count[i]! }, (_, l) => (l === xi ? 1 : 0)) : []));
+        p.w = p.q.map((qi) => qi.map(() => 0));
+      });
+      const scored = await evaluateCached(others.map((p) => p.x));
+      scored.forEach((e, k) => {
+        others[k]!.bestE = e;
+        others[k]!.best = [...others[k]!.x];
+      });
+      continue;
+    }
     for (const p of swarm) {
       for (let i = 0; i < dims; i++) {
         if (codec.categorical[i]) {
@@ -112,14 +152,20 @@ export async function particleSwarm(
         p.x[i] = next;
       }
     }
-    const scored = await session.evaluate(swarm.map((p) => p.x));
+    const scored = await evaluateCached(swarm.map((p) => p.x));
+    if (scored.length < swarm.length) break;
+    idle = scored.fresh === 0 ? idle + 1 : 0;
+    if (idle > 100) return session.result("converged");
+    let improved = false;
     scored.forEach((e, k) => {
       const p = swarm[k]!;
       if (compareFeasibility(problem, e, p.bestE) < 0) {
         p.bestE = e;
         p.best = [...p.x];
+        improved = true;
       }
     });
+    stall = improved ? 0 : stall + 1;
   }
   return session.result("budget");
 }

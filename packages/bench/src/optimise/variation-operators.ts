@@ -63,11 +63,11 @@ export function sbxCrossover(
  * in place. Plain continuous coordinates get the polynomial perturbation; lattice coordinates
  * get it snapped to the lattice, and when that leaves the value unchanged they move one step up
  * or down at random, so integers mutate by integer steps; a categorical coordinate is resampled
- * uniformly among its other levels.
+ * uniformly among its other levels. With `only`, mutates just that coordinate, for certain.
  */
-export function polynomialMutation(codec: DesignCodec, x: number[], s: VariationSettings, rng: Rng): void {
+export function polynomialMutation(codec: DesignCodec, x: number[], s: VariationSettings, rng: Rng, only?: number): void {
   for (let i = 0; i < codec.dims; i++) {
-    if (rng() >= s.mutationProbability) continue;
+    if (only === undefined ? rng() >= s.mutationProbability : i !== only) continue;
     const n = codec.count[i]!;
     if (n === 1) continue;
     if (codec.categorical[i]) {
@@ -97,6 +97,19 @@ export function polynomialMutation(codec: DesignCodec, x: number[], s: Variation
     }
     x[i] = v;
   }
+}
+
+/**
+ * Duplicate avoidance (common practice for GAs on discrete spaces): while `x` equals a design in
+ * `taken` (keys x.join(",")), mutates one randomly chosen coordinate for certain, up to `tries`
+ * times; then records x in `taken`.
+ */
+export function avoidDuplicate(codec: DesignCodec, x: number[], taken: Set<string>, s: VariationSettings, rng: Rng, tries = 8): void {
+  const movable = codec.count.flatMap((n, i) => (n > 1 ? [i] : []));
+  for (let t = 0; t < tries && movable.length > 0 && taken.has(x.join(",")); t++) {
+    polynomialMutation(codec, x, s, rng, movable[Math.floor(rng() * movable.length)]!);
+  }
+  taken.add(x.join(","));
 }
 
 /**
