@@ -19,9 +19,9 @@ export interface GaussianProcessOptions {
   readonly noiseFloor?: number;
   /** Upper bound of the learned noise variance [1]. */
   readonly noiseCeiling?: number;
-  /** Bounds of every lengthscale, unit-cube units [[0.01, 100]]. */
+  /** Bounds of every lengthscale, unit-cube units [[0.01, 1000]]. */
   readonly lengthscaleBounds?: readonly [number, number];
-  /** Bounds of the signal variance [[0.001, 1000]]. */
+  /** Bounds of the signal variance [[0.001, 1e6]]. */
   readonly signalVarianceBounds?: readonly [number, number];
   /** Declared input bounds for the unit-cube scaling [the data's range]. */
   readonly inputBounds?: { readonly lower: readonly number[]; readonly upper: readonly number[] };

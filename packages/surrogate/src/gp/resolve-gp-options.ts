@@ -53,8 +53,8 @@ export function resolveGpOptions(fn: string, o: GaussianProcessOptions, d: numbe
   const floor = positiveNumber(fn, "options.noiseFloor", o.noiseFloor ?? 1e-6);
   const ceiling = positiveNumber(fn, "options.noiseCeiling", o.noiseCeiling ?? 1);
   if (ceiling < floor) throw new RangeError(`${fn}: options.noiseCeiling must be ≥ options.noiseFloor`);
-  const ls = range(fn, "options.lengthscaleBounds", o.lengthscaleBounds, [1e-2, 1e2]);
-  const sv = range(fn, "options.signalVarianceBounds", o.signalVarianceBounds, [1e-3, 1e3]);
+  const ls = range(fn, "options.lengthscaleBounds", o.lengthscaleBounds, [1e-2, 1e3]);
+  const sv = range(fn, "options.signalVarianceBounds", o.signalVarianceBounds, [1e-3, 1e6]);
   const int = (field: string, v: number | undefined, dflt: number, min: number): number => {
     const x = v ?? dflt;
     if (typeof x !== "number") throw new TypeError(`${fn}: ${field} must be a number`);
