@@ -1,0 +1,76 @@
+import { checkCount, seededRandom } from "./check-design-args.js";
+import { eseOptimise } from "./ese-optimise.js";
+import { latinHypercube } from "./latin-hypercube.js";
+import { randomDesign } from "./random-design.js";
+import { SOBOL_MAX_DIMS, sobolPoints } from "./sobol-points.js";
+
+/** The design families `createDesign` knows. */
+export const DESIGN_KINDS = ["random", "lhs", "lhs-centred", "lhs-maximin", "sobol"] as const;
+
+/** One of DESIGN_KINDS. */
+export type DesignKind = (typeof DESIGN_KINDS)[number];
+
+/** Arguments of createDesign. */
+export interface CreateDesignOptions {
+  /** Number of points, an integer ≥ 1. */
+  readonly n: number;
+  /** Number of dimensions, an integer ≥ 1 (≤ SOBOL_MAX_DIMS for "sobol"). */
+  readonly dims: number;
+  readonly design: DesignKind;
+  /** Seed of every random draw (through seedrandom). */
+  readonly seed: number | string;
+  /**
+   * Outer iterations of the ESE search for "lhs-maximin" (it stops early after 10 without gain). Default
+   * round(100,000 / n) clamped to 10…100: 100 up to n = 1,000, 50 at n = 2,000 (each costs O(n) per exchange).
+   */
+  readonly eseIterations?: number;
+}
+
+/**
+ * A space-filling design in the unit cube [0, 1]^dims:
+ * - "random": independent uniform points;
+ * - "lhs": Latin hypercube, a uniform point in each stratum (McKay, Beckman & Conover 1979);
+ * - "lhs-centred": Latin hypercube with every point at its stratum centre;
+ * - "lhs-maximin": a centred Latin hypercube optimised on φp (Morris & Mitchell 1995) by the enhanced
+ *   stochastic evolutionary algorithm (Jin, Chen & Sudjianto 2005);
+ * - "sobol": scrambled Sobol' points (Joe & Kuo 2008 directions; linear matrix scramble and digital shift);
+ *   their balance needs n a power of 2.
+ * The same seed always gives the same points.
+ * @returns n rows of dims coordinates.
+ * @throws TypeError/RangeError naming the bad field.
+ */
+export function createDesign(options: CreateDesignOptions): number[][] {
+  const fn = "createDesign";
+  if (typeof options !== "object" || options === null) throw new TypeError(`${fn}: options must be an object`);
+  const n = checkCount(fn, "n", options.n);
+  const dims = checkCount(fn, "dims", options.dims);
+  const rng = seededRandom(fn, options.seed);
+  switch (options.design) {
+    case "random":
+      return randomDesign(n, dims, rng);
+    case "lhs":
+      return latinHypercube(n, dims, rng, false);
+    case "lhs-centred":
+      return latinHypercube(n, dims, rng, true);
+    case "lhs-maximin": {
+      const iterations =
+        options.eseIterations === undefined
+          ? defaultEseIterations(n)
+          : checkCount(fn, "eseIterations", options.eseIterations, 0);
+      return eseOptimise(latinHypercube(n, dims, rng, true), rng, { outerIterations: iterations }).points;
+    }
+    case "sobol":
+      if (dims > SOBOL_MAX_DIMS) {
+        throw new RangeError(`${fn}: dims must be ≤ ${SOBOL_MAX_DIMS} for "sobol", got ${dims}`);
+      }
+      if (n > 2 ** 30) throw new RangeError(`${fn}: n must be ≤ 2^30 for "sobol", got ${n}`);
+      return sobolPoints(n, dims, rng);
+    default:
+      throw new RangeError(`${fn}: design must be one of ${DESIGN_KINDS.join(", ")}, got ${String(options.design)}`);
+  }
+}
+
+/** The default ESE outer-iteration count for n points (see CreateDesignOptions.eseIterations). */
+function defaultEseIterations(n: number): number {
+  return Math.max(10, Math.min(100, Math.round(100_000 / n)));
+}
