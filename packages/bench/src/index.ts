@@ -39,3 +39,17 @@ export type { ProjectedGradientOptions } from "./optimise/projected-gradient.js"
 export { expectedImprovement, probabilityOfFeasibility } from "./optimise/expected-improvement.js";
 export { bayesianOptimisation } from "./optimise/bayesian-optimisation.js";
 export type { AcquisitionModel, BayesianOptimisationOptions } from "./optimise/bayesian-optimisation.js";
+// Report rendering: self-contained pages, Vega-Lite charts to SVG, the trust report (report/)
+export { chartSvg } from "./report/chart-svg.js";
+export { escapeHtml } from "./report/escape-html.js";
+export { formatNumber } from "./report/format-number.js";
+export { htmlTable } from "./report/html-table.js";
+export { renderFigure } from "./report/render-figure.js";
+export { renderPage } from "./report/render-page.js";
+export type { PageSection } from "./report/render-page.js";
+export { trustFigureSpecs } from "./report/trust-figure-specs.js";
+export type { TrustFigureSpec } from "./report/trust-figure-specs.js";
+export { trustSummaryTables } from "./report/trust-summary-tables.js";
+export type { SummaryTable } from "./report/trust-summary-tables.js";
+export { renderTrustMarkdown } from "./report/trust-report-markdown.js";
+export { renderTrustHtml } from "./report/trust-report-html.js";

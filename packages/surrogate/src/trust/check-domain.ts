@@ -2,7 +2,8 @@ import { z } from "zod";
 import type { Surrogate } from "../surrogate-types.js";
 import { checkMatrix } from "../check-training-data.js";
 import { DomainError } from "./domain-error.js";
-import { nearestDistance, scaleToDomain, type ValidityDomain } from "./validity-domain.js";
+import { modelTrainingInputs } from "./model-training-inputs.js";
+import { buildValidityDomain, nearestDistance, scaleToDomain, type ValidityDomain } from "./validity-domain.js";
 
 /** Optional capability of a surrogate that knows its own domain of validity. */
 export interface DomainAware {
@@ -42,7 +43,8 @@ const domainSchema = z.object({
 
 /**
  * The validity domain a surrogate carries: its `validityDomain()` capability, else the `training.domain`
- * of its model file (validated).
+ * of its model file (validated), else one built from the training inputs its file stores (a GP's
+ * `payload.trainingInputs`).
  * @param model - a surrogate.
  * @returns the domain, or null when the model carries none.
  */
@@ -51,7 +53,10 @@ export function domainOfModel(model: Surrogate): ValidityDomain | null {
   if (typeof aware.validityDomain === "function") return aware.validityDomain();
   const file = model.toJSON() as { training?: { domain?: unknown } } | null;
   const raw = file?.training?.domain;
-  if (raw === undefined) return null;
+  if (raw === undefined) {
+    const x = modelTrainingInputs(file);
+    return x && x.length >= 2 ? buildValidityDomain(model.inputs, x) : null;
+  }
   const parsed = domainSchema.safeParse(raw);
   if (!parsed.success) {
     const issue = parsed.error.issues[0]!;

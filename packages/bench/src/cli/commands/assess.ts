@@ -1,0 +1,164 @@
+import type { Command } from "commander";
+import { mkdir, readFile, writeFile } from "node:fs/promises";
+import { basename, join } from "node:path";
+import { centredL2Discrepancy, minPairwiseDistance, readTable } from "@floorcast/sampler";
+import {
+  buildTrustReport,
+  buildValidityDomain,
+  checkDomain,
+  domainOfModel,
+  DomainError,
+  hasLeaveOneOut,
+  kFoldCrossValidation,
+  learningCurve,
+  leaveOneOutValidation,
+  loadSurrogate,
+  scaleToDomain,
+  type CrossValidationResult,
+  type LearningCurve,
+  type Surrogate,
+  type TrainingData,
+  type ValidityDomain,
+} from "@floorcast/surrogate";
+import type { CommandContext } from "../command-context.js";
+import { UsageError } from "../usage-error.js";
+import { refitTrainer } from "../assess/refit-trainer.js";
+import { renderTrustHtml } from "../../report/trust-report-html.js";
+import { renderTrustMarkdown } from "../../report/trust-report-markdown.js";
+
+interface AssessOptions {
+  model: string;
+  data: string;
+  target: string;
+  by?: string;
+  folds?: string;
+  learningCurve?: boolean;
+  train?: string;
+  sizes?: string;
+  seed: string;
+  strict?: boolean;
+  out: string;
+}
+
+const int = (flag: string, v: string, min: number): number => {
+  const n = Number(v);
+  if (!Number.isInteger(n) || n < min) throw new UsageError(`assess: ${flag} must be an integer ≥ ${min}, got ${v}`);
+  return n;
+};
+
+/**
+ * `floorcast assess`: the trust report of a surrogate on an independent test CSV (report.json, report.md,
+ * report.html in --out): accuracy, accuracy by regime, calibration, domain of validity, diagnostics, and
+ * with --train the closed-form LOO (GP), k-fold cross-validation (--folds) and a learning curve.
+ * @param program - the root command.
+ * @param ctx - the streams and exit status.
+ */
+export function registerAssessCommand(program: Command, ctx: CommandContext): void {
+  program
+    .command("assess")
+    .description("Trust report of a surrogate on an independent test set: accuracy (overall and by regime), calibration, cross-validation, learning curve, domain of validity")
+    .requiredOption("--model <model.json>", "surrogate model file")
+    .requiredOption("--data <test.csv>", "independent test data with the model's input columns and the target")
+    .requiredOption("--target <column>", "target column to assess (one of the model's targets)")
+    .option("--by <column>", "categorical column to break the metrics down by (e.g. limitedBy)")
+    .option("--train <train.csv>", "the model's training data: domain of validity, design quality, LOO (GP), --folds, --learning-curve")
+    .option("--folds <k>", "k-fold cross-validation on --train (refits the model family)")
+    .option("--learning-curve", "test error against training size on subsets of --train, with a power-law fit")
+    .option("--sizes <list>", "learning-curve training sizes, comma-separated", "50,100,200,500,1000,2000,5000")
+    .option("--seed <n>", "seed of folds, subsets and refits", "0")
+    .option("--strict", "refuse (exit 2) when test rows lie outside the model's domain of validity")
+    .requiredOption("--out <dir>", "directory for report.json, report.md and report.html")
+    .action(async (opts: AssessOptions) => {
+      await runAssess(opts, ctx);
+    });
+}
+
+async function runAssess(opts: AssessOptions, ctx: CommandContext): Promise<void> {
+  const seed = int("--seed", opts.seed, 0);
+  const folds = opts.folds === undefined ? undefined : int("--folds", opts.folds, 2);
+  if ((folds !== undefined || opts.learningCurve) && !opts.train) {
+    throw new UsageError("assess: --folds and --learning-curve need the training data (--train FILE.csv)");
+  }
+  let text: string;
+  try {
+    text = await readFile(opts.model, "utf8");
+  } catch {
+    throw new UsageError(`assess: cannot read model file ${opts.model}`);
+  }
+  let json: unknown;
+  try {
+    json = JSON.parse(text);
+  } catch (e) {
+    throw new UsageError(`assess: ${basename(opts.model)} is not JSON (${(e as Error).message})`);
+  }
+  const model = loadSurrogate(json, basename(opts.model));
+  if (!model.targets.includes(opts.target)) {
+    throw new UsageError(`assess: --target ${opts.target} is not a target of the model (${model.targets.join(", ")})`);
+  }
+  const inputs = [...model.inputs];
+  const test = await readTable(opts.data, { inputs, targets: [opts.target], categorical: opts.by ? [opts.by] : [] });
+  const train = opts.train ? await readTable(opts.train, { inputs, targets: [...model.targets] }) : null;
+  const trainData: TrainingData | null = train ? { inputs, targets: [...model.targets], x: train.x, y: train.y } : null;
+
+  const domain: ValidityDomain | null = trainData ? buildValidityDomain(inputs, trainData.x) : domainOfModel(model);
+  if (opts.strict) {
+    if (!domain) throw new UsageError("assess: --strict needs a domain of validity: give --train (this model file stores no training inputs)");
+    try {
+      checkDomain(domain, test.x, { strict: true });
+    } catch (e) {
+      if (e instanceof DomainError) {
+        const rows = e.rows.slice(0, 20).map((i) => i + 1).join(", ");
+        throw new UsageError(`assess: --strict: data rows ${rows}${e.rows.length > 20 ? ", …" : ""} of ${basename(opts.data)} (${e.rows.length} in all) are outside the model's domain of validity`);
+      }
+      throw e;
+    }
+  }
+  const design = domain ? { minDistance: minPairwiseDistance(domain.points), centredDiscrepancy: centredL2Discrepancy(domain.points.map((p) => p.map(clamp01))) } : undefined;
+
+  let crossValidation: CrossValidationResult | null = null;
+  if (trainData && folds !== undefined) {
+    crossValidation = await kFoldCrossValidation(refitTrainer(json, basename(opts.model)), trainData, { folds, seed });
+  } else if (trainData && hasLeaveOneOut(model) && sameTrainingRows(model, trainData, domain)) {
+    crossValidation = leaveOneOutValidation(model, trainData);
+  }
+  let curve: LearningCurve | null = null;
+  if (trainData && opts.learningCurve) {
+    const sizes = opts.sizes!.split(",").map((s) => int("--sizes", s.trim(), 2));
+    const testData: TrainingData = { inputs, targets: [opts.target], x: test.x, y: test.y };
+    curve = await learningCurve(refitTrainer(json, basename(opts.model)), trainData, testData, { target: opts.target, sizes, seed });
+  }
+  const { report, figures } = buildTrustReport({
+    model,
+    target: opts.target,
+    x: test.x,
+    y: test.y.map((r) => r[0]!),
+    ...(opts.by ? { groups: test.categorical[opts.by]!, groupColumn: opts.by } : {}),
+    crossValidation,
+    learningCurve: curve,
+    domain,
+    ...(design ? { design } : {}),
+    sources: { model: basename(opts.model), data: basename(opts.data) },
+  });
+  await mkdir(opts.out, { recursive: true });
+  await writeFile(join(opts.out, "report.json"), JSON.stringify(report, null, 2) + "\n");
+  await writeFile(join(opts.out, "report.md"), renderTrustMarkdown(report));
+  await writeFile(join(opts.out, "report.html"), await renderTrustHtml(report, figures));
+  const m = report.metrics;
+  ctx.stdout.write(
+    `assessed ${report.target} on ${m.n} test rows: RMSE ${m.rmse.toPrecision(4)}, MAE ${m.mae.toPrecision(4)}, max |error| ${m.maxAbsError.toPrecision(4)}, R² ${Number.isNaN(m.r2) ? "undefined" : m.r2.toFixed(4)}` +
+      (report.domain ? `; ${report.domain.nOutside} rows outside the domain of validity` : "") +
+      `\nwrote ${join(opts.out, "report.json")}, report.md, report.html\n${report.caution}\n`,
+  );
+}
+
+const clamp01 = (v: number) => Math.min(1, Math.max(0, v));
+
+/**
+ * Whether --train holds the model's own training rows in order (LOO predictions refer to those): the same
+ * count and, when the model's file stores its training inputs, the same scaled inputs to 1e-9.
+ */
+function sameTrainingRows(model: Surrogate, data: TrainingData, domain: ValidityDomain | null): boolean {
+  const own = domainOfModel(model);
+  if (!own || !domain || own.points.length !== data.x.length) return false;
+  return data.x.every((r, i) => scaleToDomain(own, r).every((v, j) => Math.abs(v - own.points[i]![j]!) <= 1e-9));
+}

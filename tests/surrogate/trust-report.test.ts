@@ -1,0 +1,88 @@
+import { describe, expect, it } from "vitest";
+import seedrandom from "seedrandom";
+import { buildTrustReport, buildValidityDomain, kFoldCrossValidation, regressionMetrics, type TrainingData } from "@floorcast/surrogate";
+import { olsModel, olsTrainer } from "./trust-toy-trainer.js";
+
+function data(n: number, seed: string): TrainingData {
+  const rng = seedrandom(seed);
+  const x = Array.from({ length: n }, () => [rng() * 10, rng() * 5]);
+  return { inputs: ["frontage", "depth"], targets: ["gfa", "floors"], x, y: x.map(([a, b]) => [3 * a! + b! + (rng() - 0.5), Math.floor(a! / 2)]) };
+}
+
+describe("buildTrustReport", () => {
+  const train = data(80, "train");
+  const test = data(40, "test");
+  const model = olsModel(train, 0.3);
+  const y = test.y.map((r) => r[0]!);
+
+  it("assembles metrics, by-regime, calibration, CV, domain and diagnostics into a versioned JSON", async () => {
+    const cv = await kFoldCrossValidation(olsTrainer(0.3), train, { folds: 4, seed: 3 });
+    const groups = test.x.map((r) => (r[0]! > 5 ? "far" : "height"));
+    const { report, figures } = buildTrustReport({
+      model,
+      target: "gfa",
+      x: test.x,
+      y,
+      groups,
+      groupColumn: "limitedBy",
+      crossValidation: cv,
+      domain: buildValidityDomain(train.inputs, train.x),
+      design: { minDistance: 0.02, centredDiscrepancy: 0.001 },
+      sources: { model: "m.json", data: "t.csv" },
+    });
+    expect(report.kind).toBe("floorcast.trust-report");
+    expect(report.formatVersion).toBe(1);
+    expect(report.caution).toMatch(/not a zoning determination/);
+    expect(report.caution).toMatch(/licensed professionals/);
+    const pred = model.predict(test.x).mean.map((r) => r[0]!);
+    expect(report.metrics).toEqual(regressionMetrics(y, pred));
+    expect(Object.keys(report.byRegime!).sort()).toEqual(["far", "height"]);
+    expect(report.byRegime!.far!.n + report.byRegime!.height!.n).toBe(40);
+    expect(report.byRegimeColumn).toBe("limitedBy");
+    expect(report.crossValidation!.method).toBe("k-fold");
+    expect(report.crossValidation!.metrics.q2).toBe(cv.perTarget.gfa!.q2);
+    expect(report.calibration!.coverage).toHaveLength(3);
+    expect(report.domain!.nOutside).toBeGreaterThanOrEqual(0);
+    expect(report.diagnostics.design).toEqual({ minDistance: 0.02, centredDiscrepancy: 0.001 });
+    expect(report.learningCurve).toBeNull();
+    expect(figures.mean).toEqual(pred);
+    expect(figures.sd).toHaveLength(40);
+    const round = JSON.parse(JSON.stringify(report));
+    expect(round.metrics.rmse).toBe(report.metrics.rmse);
+    expect(round.model).toEqual({ kind: "ols-toy", inputs: ["frontage", "depth"], targets: ["gfa", "floors"], source: "m.json" });
+  });
+
+  it("constant target: R² is null in JSON and a note says why; no sd: calibration null with a note", () => {
+    const plain = olsModel(train);
+    const { report } = buildTrustReport({ model: plain, target: "gfa", x: test.x.slice(0, 3), y: [5, 5, 5] });
+    expect(JSON.parse(JSON.stringify(report)).metrics.r2).toBeNull();
+    expect(report.notes.join(" ")).toMatch(/R² is undefined/);
+    expect(report.calibration).toBeNull();
+    expect(report.notes.join(" ")).toMatch(/no predictive uncertainty/);
+    expect(report.domain).toBeNull();
+    expect(report.byRegime).toBeNull();
+  });
+
+  it("flags test rows outside the domain and splits the metrics inside/outside", () => {
+    const far = [...test.x.slice(0, 10), [50, 2], [5, 40]];
+    const { report } = buildTrustReport({ model, target: "gfa", x: far, y: far.map(([a, b]) => 3 * a! + b!), domain: buildValidityDomain(train.inputs, train.x) });
+    expect(report.domain!.outsideRows).toEqual(expect.arrayContaining([10, 11]));
+    expect(report.domain!.metricsOutside!.n).toBe(report.domain!.nOutside);
+    expect(report.domain!.metricsInside!.n + report.domain!.nOutside).toBe(12);
+  });
+
+  it("rejects a bad target, ragged or non-finite inputs, empty sets and a non-model; skips calibration for sd ≤ 0", () => {
+    expect(() => buildTrustReport({ model, target: "nope", x: test.x, y })).toThrow(/target "nope" is not a target/);
+    expect(() => buildTrustReport({ model, target: "gfa", x: [[1]], y: [1] })).toThrow(/x\[0\] must have 2 values/);
+    expect(() => buildTrustReport({ model, target: "gfa", x: [[1, NaN]], y: [1] })).toThrow(RangeError);
+    expect(() => buildTrustReport({ model, target: "gfa", x: [[1, 2]], y: [Infinity] })).toThrow(/y\[0\] must be finite/);
+    expect(() => buildTrustReport({ model, target: "gfa", x: [], y: [] })).toThrow(/at least one row/);
+    expect(() => buildTrustReport({ model: {} as never, target: "gfa", x: [], y: [] })).toThrow(TypeError);
+    const zeroSd = olsModel(train, 0);
+    const { report } = buildTrustReport({ model: zeroSd, target: "gfa", x: test.x, y });
+    expect(report.calibration).toBeNull();
+    expect(report.notes.join(" ")).toMatch(/predicted sd is 0/);
+    const nanModel = { ...model, predict: (x: readonly (readonly number[])[]) => ({ mean: x.map(() => [NaN, 0]) }) };
+    expect(() => buildTrustReport({ model: nanModel, target: "gfa", x: test.x, y })).toThrow(/predicted NaN for test row 0/);
+  });
+});
