@@ -49,6 +49,7 @@ export class EvaluationSession {
   best: EvaluatedDesign | null = null;
   private bestAny: EvaluatedDesign | null = null;
   private readonly front: EvaluatedDesign[] = [];
+  private readonly frontLosses: number[][] = [];
   private readonly trace: number[] = [];
   private readonly history: EvaluatedDesign[] | undefined;
 
@@ -121,16 +122,18 @@ export class EvaluationSession {
   }
 
   private addToFront(e: EvaluatedDesign): void {
-    const loss = (d: EvaluatedDesign): number[] => this.problem.objectives.map((_, k) => objectiveLoss(this.problem, d, k));
-    const le = loss(e);
-    for (const f of this.front) {
-      const lf = loss(f);
+    const le = this.problem.objectives.map((_, k) => objectiveLoss(this.problem, e, k));
+    for (const lf of this.frontLosses) {
       if (dominates(lf, le) || lf.every((v, k) => v === le[k])) return;
     }
     for (let i = this.front.length - 1; i >= 0; i--) {
-      if (dominates(le, loss(this.front[i]!))) this.front.splice(i, 1);
+      if (dominates(le, this.frontLosses[i]!)) {
+        this.front.splice(i, 1);
+        this.frontLosses.splice(i, 1);
+      }
     }
     this.front.push(e);
+    this.frontLosses.push(le);
   }
 
   /** The run's result. */
