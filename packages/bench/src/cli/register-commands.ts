@@ -3,7 +3,12 @@ import type { CommandContext } from "./command-context.js";
 import { registerSampleCommand } from "./commands/sample.js";
 import { registerMergeCommand } from "./commands/merge.js";
 import { registerAssessCommand } from "./commands/assess.js";
+import { registerBenchCommand } from "./commands/bench.js";
+import { registerOptimizeCommand } from "./commands/optimize.js";
+import { registerDemoCommand } from "./commands/demo.js";
 import { registerMassingCommand } from "./commands/massing.js";
+import { registerFitCommand } from "./commands/fit.js";
+import { registerPredictCommand } from "./commands/predict.js";
 
 /**
  * Adds every subcommand to the program. Each command lives in its own file under `commands/`
@@ -15,5 +20,10 @@ export function registerCommands(program: Command, ctx: CommandContext): void {
   registerSampleCommand(program, ctx);
   registerMergeCommand(program, ctx);
   registerAssessCommand(program, ctx);
+  registerBenchCommand(program, ctx);
+  registerOptimizeCommand(program, ctx);
+  registerDemoCommand(program, ctx);
   registerMassingCommand(program, ctx);
+  registerFitCommand(program, ctx);
+  registerPredictCommand(program, ctx);
 }
