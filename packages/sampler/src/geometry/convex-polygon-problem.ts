@@ -46,7 +46,7 @@ export function convexPolygonProblem(xy: Float64Array, n: number): string | null
     const prev = i === 0 ? n - 1 : i - 1;
     const qx = xy[2 * i]! - xy[2 * prev]!;
     const qy = xy[2 * i + 1]! - xy[2 * prev + 1]!;
-    const len = Math.hypot(qx, qy);
+    const len = Math.sqrt(qx * qx + qy * qy);
     if (!(len > STRAIGHT * scale)) {
       if (distinctVertexCount(xy, n) < 3) return `must have at least 3 distinct vertices`;
       return `has a zero-length edge ${prev} (vertex ${prev} to vertex ${i})`;
@@ -54,7 +54,7 @@ export function convexPolygonProblem(xy: Float64Array, n: number): string | null
     // Turn at vertex prev, from edge (prev−1 → prev) to edge (prev → i).
     const cross = px * qy - py * qx;
     const dot = px * qx + py * qy;
-    if (Math.abs(cross) <= STRAIGHT * Math.hypot(px, py) * len) {
+    if (Math.abs(cross) <= STRAIGHT * Math.sqrt(px * px + py * py) * len) {
       if (dot < 0) {
         if (distinctVertexCount(xy, n) < 3) return `must have at least 3 distinct vertices`;
         return `is not convex: it doubles back at vertex ${prev}`;

@@ -24,7 +24,7 @@ export function edgeHalfPlanes(
     const qy = xy[2 * i + 1]!;
     const dx = qx - px;
     const dy = qy - py;
-    const len = Math.hypot(dx, dy);
+    const len = Math.sqrt(dx * dx + dy * dy);
     if (len > minLength) {
       const a = -dy / len;
       const b = dx / len;

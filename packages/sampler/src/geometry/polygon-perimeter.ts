@@ -12,7 +12,9 @@ export function polygonPerimeter(xy: Float64Array, n: number): number {
   for (let i = 0; i < n; i++) {
     const qx = xy[2 * i]!;
     const qy = xy[2 * i + 1]!;
-    p += Math.hypot(qx - px, qy - py);
+    const dx = qx - px;
+    const dy = qy - py;
+    p += Math.sqrt(dx * dx + dy * dy);
     px = qx;
     py = qy;
   }

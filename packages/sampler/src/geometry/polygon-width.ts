@@ -17,7 +17,7 @@ export function polygonWidth(xy: Float64Array, n: number): number {
     const qy = xy[2 * i + 1]!;
     const dx = qx - px;
     const dy = qy - py;
-    const len = Math.hypot(dx, dy);
+    const len = Math.sqrt(dx * dx + dy * dy);
     if (len > 0) {
       const a = -dy / len;
       const b = dx / len;

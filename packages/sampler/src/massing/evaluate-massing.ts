@@ -80,7 +80,7 @@ export function evaluateMassing(input: MassingInput, options?: EvaluateMassingOp
     const py = xy[2 * i + 1]!;
     const dx = xy[2 * j]! - px;
     const dy = xy[2 * j + 1]! - py;
-    const len = Math.hypot(dx, dy);
+    const len = Math.sqrt(dx * dx + dy * dy);
     const a = (-orient * dy) / len;
     const b = (orient * dx) / len;
     const c = a * px + b * py;

@@ -11,9 +11,10 @@ const MAX_ITERATIONS = 200;
  * Finds the inner parallel polygon of the buildable area B (every edge moved inward by the same δ)
  * whose area equals `target`, to within `tolerance`, and writes it to `ws.base`.
  *
- * A(δ) is continuous, decreasing and convex (A′(δ) = −P(δ), the inset's perimeter, which shrinks
- * as δ grows; derived), so Newton steps δ ← δ + (A(δ) − target) / P(δ) approach the root from
- * below without overshooting; each step is kept inside a bisection bracket [lo, hi] with
+ * The first guess is the root of A(δ) = A − P·δ + δ²·Σ cot(θᵢ/2), exact while no edge of B vanishes
+ * (derived). After that, A(δ) is continuous, decreasing and convex (A′(δ) = −P(δ), the inset's
+ * perimeter, which shrinks as δ grows; derived), so Newton steps δ ← δ + (A(δ) − target) / P(δ)
+ * converge without oscillating; each step is kept inside a bisection bracket [lo, hi] with
  * hi = width(B) / 2 (the inset is empty there), so the solve always converges.
  * @param ws - workspace holding B in `ws.buildable`.
  * @param m - number of vertices of B (counter-clockwise, convex, area > target).
@@ -40,8 +41,21 @@ export function solveCoverageInset(
   let f = signedArea(src, m) - target;
   let perimeter = polygonPerimeter(src, m);
   let count = 0;
+  // First guess: the root of A(δ) = A − P·δ + δ²·Σ cot(θᵢ/2) (exact while no edge vanishes; derived).
+  // For consecutive unit inward normals u, v, cot(θ/2) = tan(φ/2) = (u × v) / (1 + u · v), φ the turn.
+  let s = 0;
+  for (let j = 0; j < k; j++) {
+    const i = j === 0 ? k - 1 : j - 1;
+    const ua = planes[3 * i]!;
+    const ub = planes[3 * i + 1]!;
+    const va = planes[3 * j]!;
+    const vb = planes[3 * j + 1]!;
+    s += (ua * vb - ub * va) / (1 + ua * va + ub * vb);
+  }
+  const disc = perimeter * perimeter - 4 * s * f;
+  const guess = s > 0 && disc >= 0 ? (2 * f) / (perimeter + Math.sqrt(disc)) : NaN;
   for (let iter = 0; iter < MAX_ITERATIONS; iter++) {
-    let next = perimeter > 0 ? delta + f / perimeter : NaN;
+    let next = iter === 0 && guess > lo && guess < hi ? guess : perimeter > 0 ? delta + f / perimeter : NaN;
     if (!(next > lo && next < hi)) next = (lo + hi) / 2;
     for (let j = 0; j < k; j++) {
       shifted[3 * j] = planes[3 * j]!;

@@ -81,9 +81,8 @@ export function validateMassingInput(input: unknown): asserts input is MassingIn
     if (v.length !== 2) throw rangeError(`parcel.vertices[${i}]`, `must have 2 coordinates, got ${v.length}`);
     for (let j = 0; j < 2; j++) {
       const c: unknown = v[j];
-      const f = `parcel.vertices[${i}][${j}]`;
-      if (typeof c !== "number") throw typeError(f, "a number", c);
-      if (!Number.isFinite(c)) throw rangeError(f, `must be finite, got ${c}`);
+      if (typeof c !== "number") throw typeError(`parcel.vertices[${i}][${j}]`, "a number", c);
+      if (!Number.isFinite(c)) throw rangeError(`parcel.vertices[${i}][${j}]`, `must be finite, got ${c}`);
     }
   }
   const lotLines = parcel.lotLines;
