@@ -2,7 +2,7 @@ import { checkCount, seededRandom } from "./check-design-args.js";
 import { eseOptimise } from "./ese-optimise.js";
 import { latinHypercube } from "./latin-hypercube.js";
 import { randomDesign } from "./random-design.js";
-import { SOBOL_MAX_DIMS, sobolPoints } from "./sobol-points.js";
+import { SOBOL_MAX_DIMS, sobolSequence } from "./sobol-sequence.js";
 
 /** The design families `createDesign` knows. */
 export const DESIGN_KINDS = ["random", "lhs", "lhs-centred", "lhs-maximin", "sobol"] as const;
@@ -64,7 +64,7 @@ export function createDesign(options: CreateDesignOptions): number[][] {
         throw new RangeError(`${fn}: dims must be ≤ ${SOBOL_MAX_DIMS} for "sobol", got ${dims}`);
       }
       if (n > 2 ** 30) throw new RangeError(`${fn}: n must be ≤ 2^30 for "sobol", got ${n}`);
-      return sobolPoints(n, dims, rng);
+      return sobolSequence(n, dims, rng);
     default:
       throw new RangeError(`${fn}: design must be one of ${DESIGN_KINDS.join(", ")}, got ${String(options.design)}`);
   }
