@@ -9,6 +9,7 @@ import { registerDemoCommand } from "./commands/demo.js";
 import { registerMassingCommand } from "./commands/massing.js";
 import { registerFitCommand } from "./commands/fit.js";
 import { registerPredictCommand } from "./commands/predict.js";
+import { registerDesignCommand } from "./commands/design.js";
 
 /**
  * Adds every subcommand to the program. Each command lives in its own file under `commands/`
@@ -26,4 +27,5 @@ export function registerCommands(program: Command, ctx: CommandContext): void {
   registerMassingCommand(program, ctx);
   registerFitCommand(program, ctx);
   registerPredictCommand(program, ctx);
+  registerDesignCommand(program, ctx);
 }

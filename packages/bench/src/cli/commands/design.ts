@@ -1,0 +1,64 @@
+import { existsSync } from "node:fs";
+import { rename, rm } from "node:fs/promises";
+import type { Command } from "commander";
+import { createCsvWriter, createDesign, DESIGN_KINDS } from "@floorcast/sampler";
+import type { DesignKind } from "@floorcast/sampler";
+import type { CommandContext } from "../command-context.js";
+import { UsageError } from "../usage-error.js";
+
+interface DesignOptions {
+  n: string;
+  dims: string;
+  design: string;
+  seed: string;
+  out: string;
+  force?: boolean;
+}
+
+/** Parses a whole-number option, naming it in the error. */
+function wholeNumber(name: string, text: string): number {
+  if (!/^[+-]?\d+$/.test(text.trim())) throw new UsageError(`design: --${name} must be a whole number, got ${JSON.stringify(text)}`);
+  return Number(text);
+}
+
+/**
+ * `floorcast design`: writes a space-filling design in the unit cube to a CSV file (columns x1 … xD, one row
+ * per point), for users who run their own evaluator. Written under a temporary name and renamed when
+ * complete; an existing file is kept unless `--force`.
+ * @param program - the root command.
+ * @param ctx - the streams and exit status.
+ */
+export function registerDesignCommand(program: Command, ctx: CommandContext): void {
+  program
+    .command("design")
+    .description("Write a space-filling design in the unit cube [0, 1]^D to CSV (columns x1..xD), for your own evaluator.")
+    .requiredOption("--n <count>", "number of points")
+    .requiredOption("--dims <count>", "number of dimensions")
+    .option("--design <kind>", `one of ${DESIGN_KINDS.join(", ")}`, "lhs-maximin")
+    .requiredOption("--seed <seed>", "seed of every random draw (the same seed gives the same file)")
+    .requiredOption("--out <file>", "CSV file to write")
+    .option("--force", "replace an existing output file")
+    .action(async (opts: DesignOptions) => {
+      const n = wholeNumber("n", opts.n);
+      const dims = wholeNumber("dims", opts.dims);
+      if (!(DESIGN_KINDS as readonly string[]).includes(opts.design)) {
+        throw new UsageError(`design: --design must be one of ${DESIGN_KINDS.join(", ")}, got ${JSON.stringify(opts.design)}`);
+      }
+      if (existsSync(opts.out) && opts.force !== true) {
+        throw new UsageError(`design: ${opts.out} exists; pass --force to replace it`);
+      }
+      const points = createDesign({ n, dims, design: opts.design as DesignKind, seed: opts.seed });
+      const columns = Array.from({ length: dims }, (_, k) => `x${k + 1}`);
+      const partial = `${opts.out}.partial-${process.pid}`;
+      try {
+        const writer = createCsvWriter(partial, columns);
+        for (const row of points) await writer.write(row);
+        await writer.close();
+        await rename(partial, opts.out);
+      } catch (error) {
+        await rm(partial, { force: true });
+        throw error;
+      }
+      ctx.stderr.write(`design: wrote ${n} ${opts.design} points in ${dims} dimensions to ${opts.out}\n`);
+    });
+}
