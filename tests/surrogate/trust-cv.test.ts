@@ -147,3 +147,12 @@ describe("powerLawFit and learningCurve", () => {
     await expect(learningCurve(olsTrainer(), train, test, { seed: 1, sizes: [1] })).rejects.toThrow(/sizes\[0\]/);
   });
 });
+
+describe("cross-validation and learning-curve guards", () => {
+  it("rejects a trainer whose model returns the wrong number of predictions, and mismatched test inputs", async () => {
+    const data = linearData(12, "guard");
+    const broken = async (d: TrainingData): Promise<Surrogate> => ({ ...olsModel(d), predict: () => ({ mean: [[0]] }) });
+    await expect(kFoldCrossValidation(broken, data, { folds: 3, seed: 0 })).rejects.toThrow(/fold 0 returned 1 predictions for 4 rows/);
+    await expect(learningCurve(olsTrainer(), data, { ...data, inputs: ["b", "a"] }, { seed: 0 })).rejects.toThrow(/test.inputs must equal train.inputs/);
+  });
+});

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import seedrandom from "seedrandom";
-import { buildValidityDomain, checkDomain, collectDiagnostics, DomainError, domainOfModel, nearestDistance } from "@floorcast/surrogate";
+import { buildValidityDomain, checkDomain, collectDiagnostics, DomainError, domainOfModel, nearestDistance, scaleToDomain } from "@floorcast/surrogate";
 import { olsModel } from "./trust-toy-trainer.js";
 
 const grid = (): number[][] => {
@@ -118,5 +118,15 @@ describe("collectDiagnostics", () => {
       expect(dg.modelType).toBeNull();
     }
     expect(collectDiagnostics({ training: { hyperparametersOnBounds: [] } }).warnings).toEqual([]);
+  });
+});
+
+describe("scaleToDomain and nearestDistance", () => {
+  it("scale by the training range, constant inputs by offset; nearest distance skips the given row", () => {
+    expect(scaleToDomain({ lower: [0, 5], upper: [10, 5] }, [2.5, 7])).toEqual([0.25, 2]);
+    expect(nearestDistance([[0, 0], [3, 4]], [0, 0])).toBe(0);
+    expect(nearestDistance([[0, 0], [3, 4]], [0, 0], 0)).toBe(5); // 3-4-5 triangle
+    expect(nearestDistance([], [1, 2])).toBe(Infinity);
+    expect(nearestDistance([[0, 0]], [NaN, 0])).toBe(Infinity); // NaN never compares below the best
   });
 });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import seedrandom from "seedrandom";
-import { buildTrustReport, buildValidityDomain, kFoldCrossValidation, regressionMetrics, type TrainingData } from "@floorcast/surrogate";
+import { buildTrustReport, buildValidityDomain, intervalCoverage, kFoldCrossValidation, regressionMetrics, type TrainingData } from "@floorcast/surrogate";
 import { olsModel, olsTrainer } from "./trust-toy-trainer.js";
 
 function data(n: number, seed: string): TrainingData {
@@ -84,5 +84,34 @@ describe("buildTrustReport", () => {
     expect(report.notes.join(" ")).toMatch(/predicted sd is 0/);
     const nanModel = { ...model, predict: (x: readonly (readonly number[])[]) => ({ mean: x.map(() => [NaN, 0]) }) };
     expect(() => buildTrustReport({ model: nanModel, target: "gfa", x: test.x, y })).toThrow(/predicted NaN for test row 0/);
+  });
+});
+
+describe("intervalCoverage and conformal-style intervals in the report", () => {
+  it("counts rows inside [lower, upper] (bounds inclusive) and the mean width", () => {
+    const c = intervalCoverage([1, 2, 3, 4], [0, 2, 3.5, 3], [2, 2, 4, 5], 0.9);
+    expect(c).toEqual({ n: 4, nominal: 0.9, empirical: 0.75, meanWidth: (2 + 0 + 0.5 + 2) / 4 });
+    expect(intervalCoverage([0], [-Infinity], [Infinity], 0.5).empirical).toBe(1);
+    expect(() => intervalCoverage([1], [2], [1], 0.9)).toThrow(/lower ≤ upper/);
+    expect(() => intervalCoverage([1], [NaN], [1], 0.9)).toThrow(RangeError);
+    expect(() => intervalCoverage([], [], [], 0.9)).toThrow(/must not be empty/);
+    expect(() => intervalCoverage([1], [0], [2], 1)).toThrow(/nominal must be in \(0, 1\)/);
+  });
+  it("buildTrustReport reports the coverage of a model's own intervals", () => {
+    const train = data(30, "iv");
+    const base = olsModel(train);
+    const model = {
+      ...base,
+      predict: (x: readonly (readonly number[])[]) => {
+        const p = base.predict(x);
+        return { ...p, interval: { lower: p.mean.map((r) => r.map((v) => v - 1)), upper: p.mean.map((r) => r.map((v) => v + 1)), coverage: 0.9 } };
+      },
+    };
+    const test = data(50, "iv-test");
+    const y = test.y.map((r) => r[0]!);
+    const { report } = buildTrustReport({ model, target: "gfa", x: test.x, y });
+    const pred = base.predict(test.x).mean.map((r) => r[0]!);
+    expect(report.intervalCoverage).toEqual({ n: 50, nominal: 0.9, empirical: y.filter((v, i) => Math.abs(v - pred[i]!) <= 1).length / 50, meanWidth: 2 });
+    expect(buildTrustReport({ model: base, target: "gfa", x: test.x, y }).report.intervalCoverage).toBeNull();
   });
 });

@@ -9,6 +9,8 @@ export { metricsByRegime } from "./trust/metrics-by-regime.js";
 export { gaussianCrps } from "./trust/gaussian-crps.js";
 export { gaussianCalibration } from "./trust/gaussian-calibration.js";
 export type { CoverageEntry, GaussianCalibration } from "./trust/gaussian-calibration.js";
+export { intervalCoverage } from "./trust/interval-coverage.js";
+export type { IntervalCoverage } from "./trust/interval-coverage.js";
 export { assignFolds, kFoldCrossValidation, outOfSampleMetrics } from "./trust/cross-validation.js";
 export type { CrossValidatedMetrics, CrossValidationResult } from "./trust/cross-validation.js";
 export { hasLeaveOneOut, leaveOneOutValidation } from "./trust/leave-one-out.js";

@@ -71,6 +71,19 @@ export function trustSummaryTables(r: TrustReport): SummaryTable[] {
       ],
     });
   }
+  if (r.intervalCoverage) {
+    const c = r.intervalCoverage;
+    t.push({
+      title: "Coverage of the model's prediction intervals",
+      lead: `The model states intervals (e.g. split-conformal) covering ${(c.nominal * 100).toFixed(0)}% of new rows; this is the fraction of test rows inside them, and their mean width in ${r.target}'s units.`,
+      header: ["quantity", "value"],
+      rows: [
+        ["nominal coverage", `${(c.nominal * 100).toFixed(1)}%`],
+        ["empirical coverage", `${(c.empirical * 100).toFixed(1)}%`],
+        ["mean interval width", f(c.meanWidth)],
+      ],
+    });
+  }
   if (r.learningCurve) {
     const lc = r.learningCurve;
     t.push({

@@ -96,6 +96,9 @@ export async function kFoldCrossValidation(
       options.seed + 1 + f,
     );
     const pred = model.predict(testIdx.map((i) => data.x[i]!));
+    if (pred.mean.length !== testIdx.length) {
+      throw new RangeError(`${fn}: the model of fold ${f} returned ${pred.mean.length} predictions for ${testIdx.length} rows`);
+    }
     testIdx.forEach((row, j) => {
       mean[row] = [...pred.mean[j]!];
       if (pred.sd) sd[row] = [...pred.sd[j]!];

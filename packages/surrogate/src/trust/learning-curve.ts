@@ -47,6 +47,9 @@ export async function learningCurve(
   checkTrainingData(fn, train);
   checkTrainingData(fn, test);
   if (!Number.isInteger(options?.seed)) throw new TypeError(`${fn}: options.seed must be an integer`);
+  if (train.inputs.length !== test.inputs.length || train.inputs.some((c, k) => test.inputs[k] !== c)) {
+    throw new RangeError(`${fn}: test.inputs must equal train.inputs (${train.inputs.join(", ")})`);
+  }
   const target = options.target ?? train.targets[0]!;
   const j = train.targets.indexOf(target);
   const jt = test.targets.indexOf(target);

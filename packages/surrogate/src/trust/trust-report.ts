@@ -4,6 +4,7 @@ import { checkDomain, domainOfModel } from "./check-domain.js";
 import { checkVector } from "./check-vector.js";
 import type { CrossValidatedMetrics, CrossValidationResult } from "./cross-validation.js";
 import { gaussianCalibration, type GaussianCalibration } from "./gaussian-calibration.js";
+import { intervalCoverage, type IntervalCoverage } from "./interval-coverage.js";
 import type { LearningCurve } from "./learning-curve.js";
 import { metricsByRegime } from "./metrics-by-regime.js";
 import { collectDiagnostics, type TrustDiagnostics } from "./model-diagnostics.js";
@@ -33,6 +34,8 @@ export interface TrustReport {
   } | null;
   /** Calibration where the model gives an sd; null otherwise (see `notes`). */
   readonly calibration: GaussianCalibration | null;
+  /** Coverage of the model's own prediction intervals (conformal wrappers), or null. */
+  readonly intervalCoverage: IntervalCoverage | null;
   readonly learningCurve: LearningCurve | null;
   /** Domain of validity of the test rows, or null when no domain is known. */
   readonly domain: {
@@ -67,7 +70,7 @@ const CAUTION =
 
 /**
  * Builds the trust report of a surrogate on an independent test set: metrics, metrics by regime,
- * calibration (when the model gives sd), domain of validity, diagnostics, and the cross-validation and
+ * calibration (when the model gives sd), coverage of its own intervals (conformal), domain of validity, diagnostics, and the cross-validation and
  * learning curve when given.
  * @param args.model - the fitted surrogate.
  * @param args.target - target column assessed.
@@ -116,6 +119,9 @@ export function buildTrustReport(args: {
       sd = null;
     } else calibration = gaussianCalibration(y, mean, sd);
   } else notes.push("Calibration skipped: the model gives no predictive uncertainty (sd).");
+  const intervals = pred.interval
+    ? intervalCoverage(y, pred.interval.lower.map((r) => r[j]!), pred.interval.upper.map((r) => r[j]!), pred.interval.coverage)
+    : null;
   const metrics = regressionMetrics(y, mean);
   if (Number.isNaN(metrics.r2)) notes.push("R² is undefined (null) because the test target is constant.");
   let byRegime: Record<string, RegressionMetrics> | null = null;
@@ -156,6 +162,7 @@ export function buildTrustReport(args: {
     byRegime,
     crossValidation,
     calibration,
+    intervalCoverage: intervals,
     learningCurve: args.learningCurve ?? null,
     domain,
     diagnostics: collectDiagnostics(model.toJSON(), args.design),

@@ -79,6 +79,7 @@ export function buildValidityDomain(
  * @param points - scaled rows.
  * @param p - scaled query.
  * @param skip - index to leave out (−1 for none).
+ * @returns the distance; Infinity when there are no points (or the query has NaN coordinates).
  */
 export function nearestDistance(points: readonly (readonly number[])[], p: readonly number[], skip = -1): number {
   let best = Infinity;
