@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { PassThrough, Writable } from "node:stream";
-import { mkdtempSync, writeFileSync, rmSync } from "node:fs";
+import { mkdtempSync, readFileSync, writeFileSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { spawnSync } from "node:child_process";
@@ -108,5 +108,20 @@ describe("floorcast massing", () => {
     const lines = p.stdout.trim().split("\n").map((l) => JSON.parse(l));
     expect(lines[0]).toEqual(evaluateMassing(larkspur));
     expect(lines[1].error).toMatchObject({ line: 2, field: "parcel" });
+  });
+});
+
+describe("README's floorcast massing example", () => {
+  it("prints exactly what the README shows", async () => {
+    const readme = readFileSync(fileURLToPath(new URL("../../README.md", import.meta.url)), "utf8");
+    const section = readme.slice(readme.indexOf("### `floorcast massing`"));
+    const block = section.slice(section.indexOf("```sh\n") + 6, section.indexOf("\n```", section.indexOf("```sh\n") + 6)).split("\n");
+    const cat = block.indexOf("$ cat quillmere-lots.jsonl");
+    const cmd = block.indexOf("$ floorcast massing --input quillmere-lots.jsonl");
+    const echo = block.indexOf("$ echo $?");
+    expect(Math.min(cat, cmd, echo)).toBeGreaterThanOrEqual(0);
+    const r = await run(["massing"], block.slice(cat + 1, cmd).join("\n"));
+    expect(r.out.trim().split("\n").map((l) => JSON.parse(l))).toEqual(block.slice(cmd + 1, echo).map((l) => JSON.parse(l)));
+    expect(String(r.code)).toBe(block[echo + 1]);
   });
 });
