@@ -2,7 +2,7 @@ import type { Command } from "commander";
 import { readFile } from "node:fs/promises";
 import { basename } from "node:path";
 import { createCsvWriter, readTable } from "@floorcast/sampler";
-import { loadSurrogate } from "@floorcast/surrogate";
+import { buildValidityDomain, checkDomain, domainOfModel, DomainError, loadSurrogate } from "@floorcast/surrogate";
 import type { CommandContext } from "../command-context.js";
 import { UsageError } from "../usage-error.js";
 
@@ -10,11 +10,15 @@ interface PredictOptions {
   model: string;
   data: string;
   out: string;
+  train?: string;
+  strict?: boolean;
 }
 
 /**
  * `floorcast predict`: predictions of a saved surrogate for every row of a CSV, in the rows' order, as
- * `<target>_mean` and `<target>_sd` columns (sd empty for a model without uncertainty).
+ * `<target>_mean` and `<target>_sd` columns (sd empty for a model without uncertainty), and `in_domain`
+ * (1 inside the model's domain of validity, 0 outside, empty when no domain is known; see checkDomain).
+ * `--strict` refuses rows outside the domain instead.
  * @param program - the root command.
  * @param ctx - the streams and exit status.
  */
@@ -25,6 +29,8 @@ export function registerPredictCommand(program: Command, ctx: CommandContext): v
     .requiredOption("--model <model.json>", "model file written by `floorcast fit`")
     .requiredOption("--data <file.csv>", "rows to predict, with the model's input columns")
     .requiredOption("--out <predictions.csv>", "CSV to write")
+    .option("--train <train.csv>", "the model's training data, for the in_domain flag of models that do not store their inputs")
+    .option("--strict", "refuse (exit 2, nothing written) when rows lie outside the model's domain of validity")
     .action(async (opts: PredictOptions) => {
       await runPredict(opts, ctx);
     });
@@ -39,15 +45,30 @@ async function runPredict(opts: PredictOptions, ctx: CommandContext): Promise<vo
   }
   const model = loadSurrogate(text, basename(opts.model));
   const table = await readTable(opts.data, { inputs: [...model.inputs], targets: [] });
+  const trainX = opts.train ? (await readTable(opts.train, { inputs: [...model.inputs], targets: [] })).x : null;
+  const domain = trainX ? buildValidityDomain(model.inputs, trainX) : domainOfModel(model);
+  if (!domain) {
+    if (opts.strict) throw new UsageError("predict: --strict needs a domain of validity: give --train (this model file stores no training inputs)");
+    ctx.stderr.write("predict: the model stores no training inputs, so in_domain is left empty (give --train to fill it)\n");
+  }
+  let flags: boolean[] | null = null;
+  try {
+    flags = domain ? checkDomain(domain, table.x, { strict: opts.strict === true }).rows.map((r) => r.inDomain) : null;
+  } catch (e) {
+    if (!(e instanceof DomainError)) throw e;
+    const rows = e.rows.slice(0, 20).map((i) => i + 1).join(", ");
+    throw new UsageError(`predict: --strict: data rows ${rows}${e.rows.length > 20 ? ", …" : ""} of ${basename(opts.data)} (${e.rows.length} in all) are outside the model's domain of validity`);
+  }
   const p = model.predict(table.x);
-  const columns = model.targets.flatMap((t) => [`${t}_mean`, `${t}_sd`]);
+  const columns = [...model.targets.flatMap((t) => [`${t}_mean`, `${t}_sd`]), "in_domain"];
   const writer = createCsvWriter(opts.out, columns);
   for (let i = 0; i < table.x.length; i++) {
-    await writer.write(model.targets.flatMap((_, j) => [p.mean[i]![j]!, p.sd ? p.sd[i]![j]! : ""]));
+    await writer.write([...model.targets.flatMap((_, j) => [p.mean[i]![j]!, p.sd ? p.sd[i]![j]! : ""]), flags ? (flags[i] ? 1 : 0) : ""]);
   }
   await writer.close();
   ctx.stdout.write(
-    `predict: ${table.x.length} rows of ${basename(opts.data)} → ${opts.out}\n` +
+    `predict: ${table.x.length} rows of ${basename(opts.data)} → ${opts.out}` +
+      (flags ? `; ${flags.filter((f) => !f).length} outside the domain of validity (in_domain = 0)\n` : "\n") +
       "Estimates for early feasibility studies only: not a zoning determination. Local codes and licensed professionals decide.\n",
   );
 }
