@@ -10,7 +10,8 @@ import { createOutputScaling } from "../scaling/output-scaling.js";
 /**
  * Fits a multilayer-perceptron regressor to several targets at once and returns it fitted.
  * Inputs are mapped from their bounds (options.inputBounds, else the data's range) to [-1, 1];
- * targets are standardised (mean 0, population sd 1; a constant target keeps sd 1). Training: seeded He/Glorot initialisation, Adam
+ * targets are standardised (mean 0, population sd 1; a constant target keeps sd 1 and is predicted
+ * exactly, its output weights set to zero). Training: seeded Glorot initialisation, Adam
  * on mini-batches of seeded shuffles, an L2 weight penalty, early stopping on a seeded validation
  * split with the best weights restored, and a learning-rate schedule (see {@link MlpOptions}).
  * @param data - training rows; every cell finite.
@@ -38,6 +39,14 @@ export async function fitMlp(data: TrainingData, options: MlpOptions = {}): Prom
     for (let j = 0; j < t; j++) zy[i * t + j] = (data.y[i]![j]! - mean[j]!) / std[j]!;
   }
   const { layers, summary } = trainMlp(zx, zy, n, d, t, o);
+  // A constant target is predicted exactly: its output weights and bias are set to zero (z ≡ 0).
+  const out = layers[layers.length - 1]!;
+  for (let j = 0; j < t; j++) {
+    if (data.y.every((r) => r[j] === data.y[0]![j])) {
+      out.bias[j] = 0;
+      for (let k = 0; k < out.shape[0]; k++) out.weights[k * t + j] = 0;
+    }
+  }
   const file: MlpModelFile = {
     kind: "floorcast.surrogate",
     formatVersion: 1,

@@ -21,7 +21,10 @@ export interface MlpOptions {
   readonly learningRate?: number;
   /** Learning-rate schedule (default plateau: ×0.5 after 10 epochs without improvement, floor 1e-5). */
   readonly schedule?: LearningRateSchedule;
-  /** L2 penalty on the weights (not biases) added to the mean squared error (default 1e-5). */
+  /**
+   * L2 penalty on the weights (not biases): loss = MSE + (l2 / batch rows) Σ W², so l2 plays the role
+   * of scikit-learn's MLPRegressor `alpha` (default 1e-4, as there).
+   */
   readonly l2?: number;
   /** Fraction held out for early stopping (default 0.15; 0 trains on everything for `epochs`). */
   readonly validationFraction?: number;
@@ -100,7 +103,7 @@ export function resolveMlpOptions(fn: string, o: MlpOptions = {}): ResolvedMlpOp
     batchSize: positiveInt(fn, "batchSize", o.batchSize ?? 32),
     learningRate: inRange(fn, "learningRate", o.learningRate ?? 0.003, 0, 1, true),
     schedule,
-    l2: inRange(fn, "l2", o.l2 ?? 1e-5, 0, 1, false),
+    l2: inRange(fn, "l2", o.l2 ?? 1e-4, 0, 1, false),
     validationFraction: inRange(fn, "validationFraction", o.validationFraction ?? 0.15, 0, 0.5, false),
     patience: positiveInt(fn, "patience", o.patience ?? 30),
     seed,

@@ -1,6 +1,7 @@
 import * as tf from "@tensorflow/tfjs";
 import seedrandom from "seedrandom";
-import { initWeights, shuffleInPlace, type DenseParams } from "./init-weights.js";
+import { initWeights, type DenseParams } from "./init-weights.js";
+import { shuffleInPlace } from "../seeded-shuffle.js";
 import { mlpForward, type DenseTensors } from "./mlp-forward.js";
 import type { ResolvedMlpOptions } from "./mlp-options.js";
 
@@ -65,10 +66,11 @@ export function trainMlp(
   );
   const flat = vars.flatMap((v) => [v.w, v.b]) as tf.Variable[];
   const moments = tf.tidy(() => flat.map((v) => ({ m: tf.variable(tf.zerosLike(v)), v: tf.variable(tf.zerosLike(v)) })));
-  const loss = (x: tf.Tensor2D, y: tf.Tensor2D): tf.Scalar => {
+  // Mean squared error + (l2 / rows) Σ W², i.e. scikit-learn's ½ MSE + α/(2·rows) Σ W² doubled (same minimiser).
+  const loss = (x: tf.Tensor2D, y: tf.Tensor2D, rows: number): tf.Scalar => {
     const mse = tf.mean(tf.squaredDifference(mlpForward(x, vars, o.activation), y)) as tf.Scalar;
     if (o.l2 === 0) return mse;
-    return tf.add(mse, tf.mul(o.l2, tf.addN(vars.map((v) => tf.sum(tf.square(v.w)))))) as tf.Scalar;
+    return tf.add(mse, tf.mul(o.l2 / rows, tf.addN(vars.map((v) => tf.sum(tf.square(v.w)))))) as tf.Scalar;
   };
 
   let lr = o.learningRate;
@@ -82,13 +84,14 @@ export function trainMlp(
   try {
     for (epoch = 1; epoch <= o.epochs; epoch++) {
       shuffleInPlace(trainIdx, rng);
-      for (let start = 0; start + batch <= nTrain; start += batch) {
+      for (let start = 0; start < nTrain; start += batch) {
         step++;
+        const rows = Math.min(batch, nTrain - start);
         const lrT = (lr * Math.sqrt(1 - BETA2 ** step)) / (1 - BETA1 ** step);
         tf.tidy(() => {
-          const xb = tf.tensor2d(gather(trainIdx, start, batch, zx, d), [batch, d]);
-          const yb = tf.tensor2d(gather(trainIdx, start, batch, zy, t), [batch, t]);
-          const { grads } = tf.variableGrads(() => loss(xb, yb), flat);
+          const xb = tf.tensor2d(gather(trainIdx, start, rows, zx, d), [rows, d]);
+          const yb = tf.tensor2d(gather(trainIdx, start, rows, zy, t), [rows, t]);
+          const { grads } = tf.variableGrads(() => loss(xb, yb, rows), flat);
           flat.forEach((p, i) => {
             const g = grads[p.name]!;
             const mo = moments[i]!;

@@ -2,6 +2,7 @@ import type { ModelFileShape } from "./model-file-shape.js";
 import type { Predictor } from "./predictor.js";
 import { objectField } from "./predictor-checks.js";
 import { createMlpPredictor } from "./mlp-predictor.js";
+import { createGpPredictor } from "./gp-predictor.js";
 import { createEnsemblePredictor } from "./ensemble-predictor.js";
 import { createConformalPredictor } from "./conformal-predictor.js";
 
@@ -38,6 +39,8 @@ export function loadPredictor(modelJson: unknown): Predictor {
   objectField(FN, "outputScaling", file.outputScaling);
   const shaped = file as unknown as ModelFileShape;
   switch (file.modelType) {
+    case "gp":
+      return createGpPredictor(shaped);
     case "mlp":
       return createMlpPredictor(shaped);
     case "ensemble":

@@ -1,0 +1,26 @@
+import type { ConformalModelFile } from "../model-file/conformal-model-file-schema.js";
+import { loadSurrogate } from "../model-file/load-surrogate.js";
+import { ConformalSurrogate } from "./conformal-surrogate.js";
+
+/**
+ * Loader for "conformal" model files (one line in surrogate-loaders.ts): loads the nested base file
+ * with loadSurrogate and restores the calibration.
+ * @param file - validated by parseModelFile.
+ * @param fileName - named in messages.
+ * @throws RangeError naming the file when the base disagrees with the envelope or the quantiles with the targets.
+ */
+export function conformalFromFile(file: ConformalModelFile, fileName = "model file"): ConformalSurrogate {
+  const base = loadSurrogate(file.payload.base, `${fileName} payload.base`);
+  if (base.inputs.join("\u0000") !== file.inputs.join("\u0000") || base.targets.join("\u0000") !== file.targets.join("\u0000")) {
+    throw new RangeError(`loadSurrogate: ${fileName}: payload.base must have the file's inputs and targets`);
+  }
+  const p = file.payload;
+  if (p.quantiles.length !== file.targets.length) {
+    throw new RangeError(`loadSurrogate: ${fileName}: payload.quantiles must have ${file.targets.length} entries, got ${p.quantiles.length}`);
+  }
+  return new ConformalSurrogate(
+    base,
+    { coverage: p.coverage, score: p.score, quantiles: p.quantiles, calibrationSize: p.calibrationSize },
+    file.training as Record<string, unknown>,
+  );
+}

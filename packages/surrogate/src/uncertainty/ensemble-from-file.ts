@@ -1,0 +1,22 @@
+import type { EnsembleModelFile } from "../model-file/ensemble-model-file-schema.js";
+import { loadSurrogate } from "../model-file/load-surrogate.js";
+import { EnsembleSurrogate } from "./ensemble-surrogate.js";
+
+/**
+ * Loader for "ensemble" model files (one line in surrogate-loaders.ts): loads and validates every
+ * nested member file with loadSurrogate (errors name `payload.members[i]`).
+ * @param file - validated by parseModelFile.
+ * @param fileName - named in messages.
+ * @throws RangeError naming the file and member.
+ */
+export function ensembleFromFile(file: EnsembleModelFile, fileName = "model file"): EnsembleSurrogate {
+  const members = file.payload.members.map((m, i) => loadSurrogate(m, `${fileName} payload.members[${i}]`));
+  members.forEach((m, i) => {
+    if (m.inputs.join("\u0000") !== file.inputs.join("\u0000") || m.targets.join("\u0000") !== file.targets.join("\u0000")) {
+      throw new RangeError(`loadSurrogate: ${fileName}: payload.members[${i}] must have the ensemble's inputs and targets`);
+    }
+  });
+  const t = file.training as Record<string, unknown>;
+  const memberSeeds = Array.isArray(t.memberSeeds) ? (t.memberSeeds as number[]) : [];
+  return new EnsembleSurrogate(members, { n: file.training.n, seed: file.training.seed, fitTimeMs: file.training.fitTimeMs, memberSeeds });
+}

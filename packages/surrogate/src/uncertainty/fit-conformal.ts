@@ -1,0 +1,58 @@
+import seedrandom from "seedrandom";
+import type { SurrogateTrainer, TrainingData } from "../surrogate-types.js";
+import { checkTrainingData } from "../check-training-data.js";
+import { shuffleInPlace } from "../seeded-shuffle.js";
+import { calibrateConformal, type ConformalOptions } from "./calibrate-conformal.js";
+import type { ConformalSurrogate } from "./conformal-surrogate.js";
+
+/** Options of {@link fitConformal}. */
+export interface FitConformalOptions extends ConformalOptions {
+  /** Share of rows held out for calibration (default 0.25). */
+  readonly calibrationFraction?: number;
+  /** Seed of the split and of the trainer (default 0). */
+  readonly seed?: number;
+}
+
+/**
+ * Split conformal prediction (Lei et al. 2018, §2.2): splits the rows at random (seeded) into a
+ * training part, on which `trainer` fits the base model, and a calibration part, on which the
+ * interval quantiles are computed.
+ * @param trainer - fits the base (GP, MLP or ensemble trainer).
+ * @param data - all rows; at least 2.
+ * @param options - coverage, score, calibration fraction, seed.
+ * @returns the calibrated wrapper.
+ * @throws TypeError / RangeError for bad data or options.
+ */
+export async function fitConformal(
+  trainer: SurrogateTrainer,
+  data: TrainingData,
+  options: FitConformalOptions = {},
+): Promise<ConformalSurrogate> {
+  const fn = "fitConformal";
+  if (typeof trainer !== "function") throw new TypeError(`${fn}: trainer must be a function (data, seed) => Promise<Surrogate>`);
+  checkTrainingData(fn, data);
+  const f = options.calibrationFraction ?? 0.25;
+  if (typeof f !== "number") throw new TypeError(`${fn}: options.calibrationFraction must be a number`);
+  if (!(f > 0 && f < 1)) throw new RangeError(`${fn}: options.calibrationFraction must be in (0, 1), got ${f}`);
+  const seed = options.seed ?? 0;
+  if (typeof seed !== "number" || !Number.isFinite(seed)) throw new RangeError(`${fn}: options.seed must be a finite number`);
+  const n = data.x.length;
+  const nCal = Math.round(n * f);
+  if (nCal < 1 || n - nCal < 1) throw new RangeError(`${fn}: data.x needs rows for both training and calibration, got ${n}`);
+  const started = performance.now();
+  const rng = seedrandom(`floorcast-conformal:${seed}`);
+  const order = Array.from({ length: n }, (_, i) => i);
+  shuffleInPlace(order, rng);
+  const cal = order.slice(0, nCal);
+  const fit = order.slice(nCal);
+  const base = await trainer(
+    { inputs: data.inputs, targets: data.targets, x: fit.map((i) => data.x[i]!), y: fit.map((i) => data.y[i]!) },
+    seed,
+  );
+  return calibrateConformal(
+    base,
+    { x: cal.map((i) => data.x[i]!), y: cal.map((i) => data.y[i]!) },
+    options,
+    { n, seed, fitTimeMs: performance.now() - started, calibrationFraction: f },
+  );
+}
