@@ -271,3 +271,20 @@ describe("quadParcel", () => {
     expect(() => quadParcel(null as never)).toThrow(TypeError);
   });
 });
+
+describe("map coordinates", () => {
+  it("a parcel at UTM-like coordinates (x ≈ 5e5, y ≈ 5.6e6) gives the same result as at the origin (derived)", () => {
+    const input: MassingInput = {
+      parcel: quadParcel({ frontage: 24, depth: 30, rearWidth: 22, skew: 6, corner: "right" }),
+      setbacks: { front: 2, side: 3, rear: 5 },
+      floorHeight: 3.5, maxHeight: 40, maxCoverage: 0.55, skyPlane: { startHeight: 12, ratio: 2.7 }, minPlateArea: 60,
+    };
+    const far: Parcel = { ...input.parcel, vertices: input.parcel.vertices.map(([x, y]) => [x + 512345.25, y + 5612345.75] as Point) };
+    const a = evaluateMassing(input, { plates: true });
+    const b = evaluateMassing({ ...input, parcel: far }, { plates: true });
+    // Tolerance: coordinates near 5.6e6 m carry ~1e-9 m of rounding, so areas agree to ~1e-7 m².
+    for (const k of ["lotArea", "buildableArea", "footprintArea", "gfa"] as const) expect(Math.abs(b[k] - a[k])).toBeLessThan(1e-6);
+    expect([b.floors, b.limitedBy, b.coverageCapped]).toEqual([a.floors, a.limitedBy, a.coverageCapped]);
+    expect(b.plates![0]![0]![0] - 512345.25).toBeCloseTo(a.plates![0]![0]![0], 6);
+  });
+});

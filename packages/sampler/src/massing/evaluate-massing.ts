@@ -23,9 +23,9 @@ const HEIGHT_TOL = 1e-9;
 
 const ws = new MassingWorkspace();
 
-function toPoints(xy: Float64Array, m: number): Point[] {
+function toPoints(xy: Float64Array, m: number, ox: number, oy: number): Point[] {
   const pts: Point[] = new Array<Point>(m);
-  for (let i = 0; i < m; i++) pts[i] = [xy[2 * i]!, xy[2 * i + 1]!];
+  for (let i = 0; i < m; i++) pts[i] = [xy[2 * i]! + ox, xy[2 * i + 1]! + oy];
   return pts;
 }
 
@@ -61,10 +61,14 @@ export function evaluateMassing(input: MassingInput, options?: EvaluateMassingOp
   const n = vertices.length;
   ws.ensure(n);
   const xy = ws.parcel;
+  // Work relative to the first vertex: parcels in map coordinates (e.g. 5e6 m northings) keep
+  // their precision through the clipping and the coverage solve.
+  const ox = vertices[0]![0];
+  const oy = vertices[0]![1];
   for (let i = 0; i < n; i++) {
     const v = vertices[i]!;
-    xy[2 * i] = v[0];
-    xy[2 * i + 1] = v[1];
+    xy[2 * i] = v[0] - ox;
+    xy[2 * i + 1] = v[1] - oy;
   }
   const problem = convexPolygonProblem(xy, n);
   if (problem !== null) throw new RangeError(`evaluateMassing: parcel.vertices ${problem}`);
@@ -172,7 +176,7 @@ export function evaluateMassing(input: MassingInput, options?: EvaluateMassingOp
       footprintArea = area;
       facadeLength = polygonPerimeter(plate, m);
     }
-    if (plates !== undefined) plates.push(toPoints(plate, m));
+    if (plates !== undefined) plates.push(toPoints(plate, m, ox, oy));
   }
   const result: MassingResult = {
     lotArea,

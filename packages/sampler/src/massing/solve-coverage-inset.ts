@@ -67,7 +67,8 @@ export function solveCoverageInset(
     f = area - target;
     delta = next;
     // Aim well inside the tolerance so that sums over many floors stay within it too.
-    if (Math.abs(f) <= tolerance * 1e-3) return count;
+    // When round-off keeps it from getting there, the tolerance itself is accepted after a few steps.
+    if (Math.abs(f) <= tolerance * 1e-3 || (iter >= 8 && Math.abs(f) <= tolerance)) return count;
     if (f > 0) lo = next;
     else hi = next;
     perimeter = count > 0 ? polygonPerimeter(ws.base, count) : 0;
