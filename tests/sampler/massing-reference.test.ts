@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { evaluateMassing } from "@floorcast/sampler";
+import type { MassingInput } from "@floorcast/sampler";
 import { referenceAvailable, runReference } from "../reference/python.js";
 import { randomMassingCases } from "./massing-random-cases.js";
 
@@ -20,10 +21,27 @@ const hasRef = referenceAvailable(["shapely", "numpy"]);
 // (tests/reference/massing_shapely.py): GEOS polygon intersection for the yards and the sky plane,
 // GEOS negative mitre buffer plus bisection for the coverage inset.
 describe.skipIf(!hasRef)("evaluateMassing against the Shapely reference", () => {
-  const cases = randomMassingCases(400, "massing-reference-v1");
+  // Case 0 anchors the reference itself to the hand-worked example (derived, issue 2; yards measured at
+  // right angles to the lot line, Town of Woodway WA 14.08.350): 20 × 30 m, front 5, sides 3, rear 6,
+  // 3.5 m floors under 24 m, FAR 2.5 → 266 m² plates, 5 floors, 1,330 m².
+  const worked: MassingInput = {
+    parcel: { vertices: [[0, 0], [20, 0], [20, 30], [0, 30]], lotLines: ["front", "side", "rear", "side"] },
+    setbacks: { front: 5, side: 3, rear: 6 },
+    floorHeight: 3.5,
+    maxHeight: 24,
+    maxFar: 2.5,
+  };
+  const cases = [worked, ...randomMassingCases(400, "massing-reference-v1")];
   const ref = runReference<{ results: RefResult[] }>("massing_shapely.py", { cases }).results;
 
-  it("agrees on 400 random convex parcels (areas to 1e-6 × lot area; floors, limitedBy, coverageCapped exactly)", () => {
+  it("the reference reproduces the hand-worked 20 × 30 m example", () => {
+    expect(ref[0]!.footprintArea).toBeCloseTo(266, 9);
+    expect(ref[0]!.floors).toBe(5);
+    expect(ref[0]!.gfa).toBeCloseTo(1330, 9);
+    expect(ref[0]!.limitedBy).toBe("far");
+  });
+
+  it("agrees on the example and 400 random convex parcels (areas to 1e-6 × lot area; floors, limitedBy, coverageCapped exactly)", () => {
     const reasons = new Map<string, number>();
     let capped = 0;
     for (let i = 0; i < cases.length; i++) {
