@@ -104,6 +104,7 @@ describe("floorcast assess", () => {
       [["assess", "--model", join(dir, "missing.json"), "--data", join(dir, "test.csv"), "--target", "gfa", "--out", dir], /cannot read model file/],
       [["assess", "--model", join(dir, "test.csv"), "--data", join(dir, "test.csv"), "--target", "gfa", "--out", dir], /test\.csv is not JSON/],
       [["assess", "--model", join(dir, "model.json"), "--data", join(dir, "no-depth.csv"), "--target", "gfa", "--out", dir], /depth/],
+      [[...base, "--target", "gfa", "--by", "zone"], /zone/],
     ];
     for (const [args, re] of cases) {
       const r = await run(args);

@@ -9,8 +9,10 @@ export interface TrustFigureSpec {
   readonly caption: string;
 }
 
-/** At most this many points are drawn per scatter (every k-th row), to keep the page light. */
+/** At most this many points are drawn in the parity plot (every k-th row), to keep the page light. */
 const MAX_POINTS = 4000;
+/** At most this many points in all the residual panels together. */
+const MAX_PANEL_POINTS = 16000;
 const SCHEMA = "https://vega.github.io/schema/vega-lite/v6.json";
 const POINT = { type: "circle", size: 14, opacity: 0.55, color: "#2b6cb0" } as const;
 
@@ -24,8 +26,7 @@ const POINT = { type: "circle", size: 14, opacity: 0.55, color: "#2b6cb0" } as c
 export function trustFigureSpecs(report: TrustReport, data: TrustFigureData): TrustFigureSpec[] {
   const n = data.yTrue.length;
   const stride = Math.max(1, Math.ceil(n / MAX_POINTS));
-  const rows: number[] = [];
-  for (let i = 0; i < n; i += stride) rows.push(i);
+  const rows = everyKth(n, stride);
   const drawn = stride > 1 ? ` Every ${stride}th test row is drawn (${rows.length} of ${n}).` : "";
   const t = report.target;
   const lo = Math.min(...rows.map((i) => Math.min(data.yTrue[i]!, data.mean[i]!)));
@@ -56,7 +57,10 @@ export function trustFigureSpecs(report: TrustReport, data: TrustFigureData): Tr
     },
     caption: `Each dot is a test row: the exact ${t} across, the surrogate's prediction up. Dots on the dashed diagonal are exact predictions; the vertical distance from it is the error.${drawn}`,
   });
-  const long = rows.flatMap((i) => data.inputs.map((name, j) => ({ input: name, value: data.x[i]![j], residual: data.mean[i]! - data.yTrue[i]! })));
+  const panelStride = Math.max(1, Math.ceil((n * data.inputs.length) / MAX_PANEL_POINTS));
+  const panelRows = everyKth(n, panelStride);
+  const panelDrawn = panelStride > 1 ? ` Every ${panelStride}th test row is drawn (${panelRows.length} of ${n}).` : "";
+  const long = panelRows.flatMap((i) => data.inputs.map((name, j) => ({ input: name, value: data.x[i]![j], residual: data.mean[i]! - data.yTrue[i]! })));
   figs.push({
     id: "residuals-by-input",
     title: "Residuals against each input",
@@ -81,7 +85,7 @@ export function trustFigureSpecs(report: TrustReport, data: TrustFigureData): Tr
       },
       resolve: { scale: { x: "independent" } },
     },
-    caption: `Residual (predicted − exact ${t}) of each test row against each input. A pattern (a slope, a fan, a band that leaves zero) shows where in the input space the surrogate is biased or less accurate; a patternless cloud around zero is what a good fit looks like.${drawn}`,
+    caption: `Residual (predicted − exact ${t}) of each test row against each input. A pattern (a slope, a fan, a band that leaves zero) shows where in the input space the surrogate is biased or less accurate; a patternless cloud around zero is what a good fit looks like.${panelDrawn}`,
   });
   figs.push({
     id: "residual-histogram",
@@ -177,4 +181,11 @@ export function trustFigureSpecs(report: TrustReport, data: TrustFigureData): Tr
     });
   }
   return figs;
+}
+
+/** Indices 0, k, 2k, … below n. */
+function everyKth(n: number, k: number): number[] {
+  const out: number[] = [];
+  for (let i = 0; i < n; i += k) out.push(i);
+  return out;
 }
