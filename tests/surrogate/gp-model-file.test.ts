@@ -72,3 +72,18 @@ describe("GP model file", () => {
     expect(() => loadSurrogate({ ...file, checksum: "abc" })).not.toThrow();
   });
 });
+
+describe("GP through the dependency-free loadPredictor (@floorcast/surrogate/predict)", () => {
+  it("dispatches gp files to the GP predictor and matches to 1e-9 relative", async () => {
+    const { loadPredictor } = await import("@floorcast/surrogate/predict");
+    const p = loadPredictor(JSON.stringify(gp.toJSON()));
+    expect(p.modelType).toBe("gp");
+    const a = gp.predict(xt);
+    const b = p.predict(xt);
+    for (let i = 0; i < xt.length; i++)
+      for (let j = 0; j < 2; j++) {
+        expect(Math.abs(b.mean[i]![j]! - a.mean[i]![j]!)).toBeLessThanOrEqual(1e-9 * Math.abs(a.mean[i]![j]!));
+        expect(Math.abs(b.sd![i]![j]! - a.sd[i]![j]!)).toBeLessThanOrEqual(1e-9 * a.sd[i]![j]!);
+      }
+  });
+});

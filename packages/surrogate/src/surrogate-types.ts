@@ -20,6 +20,8 @@ export interface Surrogate {
   predict(x: readonly (readonly number[])[]): Prediction;
   /** The versioned model file. */
   toJSON(): unknown;
+  /** Optional: gradient of the predicted mean at one row, targets × inputs, original units (GP). */
+  gradient?(x: readonly number[]): number[][];
 }
 
 /** Training data: `x` rows × inputs, `y` rows × targets. */
