@@ -100,3 +100,22 @@ describe("trust report rendering", () => {
     expect(html).not.toMatch(/<script|<link|<img|@import|url\(/);
   });
 });
+
+describe("trustFigureSpecs thinning of large test sets", () => {
+  it("draws at most 4,000 parity points and 16,000 residual-panel points, and says so in the caption", () => {
+    const { report } = sampleTrustReport();
+    const n = 9001;
+    const x = Array.from({ length: n }, (_, i) => [i, i % 7, i % 3]);
+    const specs = trustFigureSpecs(report, { inputs: ["a", "b", "c"], x, yTrue: x.map((r) => r[0]!), mean: x.map((r) => r[0]! + 1), sd: null });
+    const parity = specs.find((s) => s.id === "parity")!;
+    const pts = ((parity.spec as { layer: { data: { values: unknown[] } }[] }).layer[1]!.data.values).length;
+    expect(pts).toBe(Math.ceil(n / 3)); // stride ⌈9001/4000⌉ = 3 (derived)
+    expect(parity.caption).toMatch(/One test row in every 3 is drawn \(3001 of 9001\)/);
+    const panels = specs.find((s) => s.id === "residuals-by-input")!;
+    const long = (panels.spec as { data: { values: unknown[] } }).data.values.length;
+    expect(long).toBe(3 * Math.ceil(n / 2)); // stride ⌈9001·3/16000⌉ = 2 (derived)
+    expect(long).toBeLessThanOrEqual(16_000);
+    const hist = specs.find((s) => s.id === "residual-histogram")!;
+    expect((hist.spec as { data: { values: unknown[] } }).data.values).toHaveLength(n); // binned, so all rows
+  });
+});

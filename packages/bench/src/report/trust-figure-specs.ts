@@ -27,7 +27,7 @@ export function trustFigureSpecs(report: TrustReport, data: TrustFigureData): Tr
   const n = data.yTrue.length;
   const stride = Math.max(1, Math.ceil(n / MAX_POINTS));
   const rows = everyKth(n, stride);
-  const drawn = stride > 1 ? ` Every ${stride}th test row is drawn (${rows.length} of ${n}).` : "";
+  const drawn = stride > 1 ? ` One test row in every ${stride} is drawn (${rows.length} of ${n}).` : "";
   const t = report.target;
   const lo = Math.min(...rows.map((i) => Math.min(data.yTrue[i]!, data.mean[i]!)));
   const hi = Math.max(...rows.map((i) => Math.max(data.yTrue[i]!, data.mean[i]!)));
@@ -59,7 +59,7 @@ export function trustFigureSpecs(report: TrustReport, data: TrustFigureData): Tr
   });
   const panelStride = Math.max(1, Math.ceil((n * data.inputs.length) / MAX_PANEL_POINTS));
   const panelRows = everyKth(n, panelStride);
-  const panelDrawn = panelStride > 1 ? ` Every ${panelStride}th test row is drawn (${panelRows.length} of ${n}).` : "";
+  const panelDrawn = panelStride > 1 ? ` One test row in every ${panelStride} is drawn (${panelRows.length} of ${n}).` : "";
   const long = panelRows.flatMap((i) => data.inputs.map((name, j) => ({ input: name, value: data.x[i]![j], residual: data.mean[i]! - data.yTrue[i]! })));
   figs.push({
     id: "residuals-by-input",
