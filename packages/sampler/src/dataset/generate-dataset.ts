@@ -78,8 +78,8 @@ export async function* generateDataset(scenario: Scenario, options: GenerateData
         ? functionEvaluator(options.evaluator)
         : options.evaluator;
   const unit = createDesign({ n: options.n, dims: scenario.parameters.length, design: options.design, seed: options.seed });
-  const records = mapUnitToSpace({ parameters: scenario.parameters }, unit);
-  unit.length = 0;
+  const records: (Record<string, number | string> | undefined)[] = mapUnitToSpace({ parameters: scenario.parameters }, unit);
+  unit.length = 0; // the unit rows are not needed any more; records are dropped as their rows are yielded
   const names = scenario.parameters.map((p) => p.name);
   const reserved = new Set(["sample", ...names]);
   const inFlight: Promise<EvaluatorOutput>[] = [];
@@ -96,9 +96,10 @@ export async function* generateDataset(scenario: Scenario, options: GenerateData
     const out = await inFlight.shift()!;
     columns = checkOutput(out, i, reserved, columns);
     const row: Record<string, number | string | boolean> = { sample: i };
-    for (const name of names) row[name] = records[i]![name]!;
+    const record = records[i]!;
+    records[i] = undefined;
+    for (const name of names) row[name] = record[name]!;
     for (const k of columns) row[k] = out[k]!;
-    records[i] = {};
     yield row;
   }
 }
