@@ -25,7 +25,14 @@ function names(label: string, v: unknown): string[] {
  * @throws TypeError / RangeError naming the faulty field (wrong kind, unsupported format version, bad payload).
  */
 export function loadPredictor(modelJson: unknown): Predictor {
-  const raw = typeof modelJson === "string" ? (JSON.parse(modelJson) as unknown) : modelJson;
+  let raw = modelJson;
+  if (typeof modelJson === "string") {
+    try {
+      raw = JSON.parse(modelJson) as unknown;
+    } catch (error) {
+      throw new RangeError(`${FN}: the model file is not valid JSON (${(error as Error).message})`);
+    }
+  }
   const file = objectField(FN, "model file", raw);
   if (file.kind !== "floorcast.surrogate") {
     throw new RangeError(`${FN}: kind must be "floorcast.surrogate", got ${JSON.stringify(file.kind)}`);
