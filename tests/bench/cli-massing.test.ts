@@ -100,6 +100,8 @@ describe("floorcast massing", () => {
     expect(r.err.trim().split("\n")).toHaveLength(1);
     expect(r.err).toMatch(/cannot read --input/);
     expect((await run(["massing", "--bogus"])).code).toBe(2);
+    const dir = await run(["massing", "--input", tmpdir()]);
+    expect([dir.code, dir.err.trim().split("\n").length]).toEqual([2, 1]);
   });
 
   it("works through the installed bin with the process's own exit status", () => {

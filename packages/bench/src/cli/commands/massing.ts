@@ -1,5 +1,5 @@
 import { createReadStream } from "node:fs";
-import { access, constants } from "node:fs/promises";
+import { access, constants, stat } from "node:fs/promises";
 import { once } from "node:events";
 import { createInterface } from "node:readline";
 import type { Readable } from "node:stream";
@@ -38,8 +38,9 @@ async function openInput(ctx: CommandContext, file: string | undefined): Promise
   if (file === undefined) return ctx.stdin;
   try {
     await access(file, constants.R_OK);
+    if (!(await stat(file)).isFile()) throw new Error("not a file");
   } catch {
-    throw new UsageError(`massing: cannot read --input ${JSON.stringify(file)}`);
+    throw new UsageError(`massing: cannot read --input ${JSON.stringify(file)} (not a readable file)`);
   }
   return createReadStream(file, { encoding: "utf8" });
 }
