@@ -156,6 +156,11 @@ describe("massing rule properties (fast-check)", () => {
         expect(r.footprintArea).toBeLessThanOrEqual((input.maxCoverage ?? 1) * r.lotArea + slack(r));
         if (input.maxFar !== undefined) expect(r.far).toBeLessThanOrEqual(input.maxFar + 1e-9);
         if (r.floors === 0) expect([r.gfa, r.footprintArea, r.facadeLength]).toEqual([0, 0, 0]);
+        // The coverage inset is solved to 1e-9 × lot area (issue 2, step 2) when floor 1 is not sky-cut.
+        const uncut = input.skyPlane === undefined || input.floorHeight <= input.skyPlane.startHeight;
+        if (r.coverageCapped && r.floors > 0 && uncut) {
+          expect(Math.abs(r.footprintArea - input.maxCoverage! * r.lotArea)).toBeLessThanOrEqual(1e-9 * r.lotArea);
+        }
       }),
       RUNS,
     );
