@@ -133,7 +133,7 @@ describe("the demo suite", async () => {
     expect(await value("core-tower-gfa")).toBeCloseTo(12960, -1);
     // Larkspur: FAR 1.2 × 420 m² = 504 m² (DC Zoning Handbook: max GFA = FAR × lot area), reached in 3 whole floors
     expect(await value("larkspur-fit-gfa")).toBeCloseTo(504, 0);
-    // Core low-rise: 10,000 / (0.7 × 1800) = 7.94 → 8 floors of 3.9 m = 31.2 m (derived)
+    // Core low-rise: 9,500 / (0.7 × 1800) = 7.54 → 8 floors of 3.9 m = 31.2 m (derived)
     expect(await value("core-lowrise-height")).toBeCloseTo(31.2, 6);
   });
 });

@@ -107,8 +107,8 @@ export interface EvaluationsToTarget {
   readonly evaluations: readonly (number | null)[];
   readonly median: number | null;
   readonly budget: number;
-  /** Best-so-far relative gap after each evaluation, first seed (for the curve). */
-  readonly curve: readonly number[];
+  /** (exact evaluations, best-so-far relative shortfall) of the first seed (for the curve). */
+  readonly curve: readonly (readonly [number, number])[];
   readonly seconds: number;
 }
 

@@ -1,6 +1,8 @@
 import type { Design, EvaluatedDesign, OptimisationResult } from "../optimise/optimisation-problem.js";
 import { gridSearch } from "../optimise/grid-search.js";
 import { patternSearch } from "../optimise/pattern-search.js";
+import { nsga2 } from "../optimise/nsga2.js";
+import { nonDominatedIndices } from "../optimise/pareto-dominance.js";
 import type { BenchProblem } from "../problem/bench-problem.js";
 import { exactEvaluator } from "./exact-evaluator.js";
 
@@ -25,7 +27,8 @@ export interface ExactOptimum {
  * then exact local refinement by pattern search from the grid's best within
  * `exact.refineEvaluations` evaluations (common practice: a global grid guards against local
  * optima, the refinement recovers the resolution the grid lacks).
- * For two objectives the grid's feasible non-dominated set is the exact front and no refinement runs.
+ * For two objectives the exact front is the feasible non-dominated set of the grid together with an
+ * NSGA-II run (Deb et al. 2002) on the exact evaluator spending the refinement budget.
  * @param problem - the problem.
  * @param options - `site` for one site of a site-selection problem; `gridPoints`/`refineEvaluations` override; `onProgress`.
  * @returns the optimum and its evaluation counts.
@@ -62,13 +65,20 @@ export async function findExactOptimum(
       if (better) best = r;
     }
   }
+  let front = grid.front;
+  if (problem.optimisation.objectives.length > 1 && budget > 0) {
+    refined = await nsga2(problem.optimisation, evaluator, { seed: "exact-front", maxEvaluations: budget, populationSize: 60 });
+    const all = [...grid.front, ...refined.front];
+    const senses = problem.optimisation.objectives.map((o) => (o.sense === "max" ? -1 : 1));
+    front = nonDominatedIndices(all.map((e) => e.objectives.map((v, k) => senses[k]! * v))).map((i) => all[i]!);
+  }
   return {
     best,
     gridPoints,
     gridEvaluations: grid.evaluations,
     refineEvaluations: refined?.evaluations ?? 0,
     evaluations: grid.evaluations + (refined?.evaluations ?? 0),
-    front: grid.front,
+    front,
     seconds: (performance.now() - t0) / 1000,
   };
 }

@@ -29,6 +29,8 @@ export interface TrialSetup {
   readonly sampler?: string;
   /** Surrogate search candidates (default 1024). */
   readonly candidates?: number;
+  /** Training sets shared by trials on the same rows (same sampler, size and seed). */
+  readonly cache?: Map<string, TrainingSet>;
 }
 
 const seconds = (t0: number): number => (performance.now() - t0) / 1000;

@@ -30,9 +30,14 @@ export async function trainForTrial(
     readonly seed: number;
     readonly test: TrainingSet;
     readonly unitRows?: readonly (readonly number[])[];
+    readonly sampler?: string;
+    /** Training sets already drawn, by sampler, size and seed: trials on the same rows share one. */
+    readonly cache?: Map<string, TrainingSet>;
   },
 ): Promise<TrainedTrial> {
-  const train = sampleTrainingSet(problem, setup.trainingSize, `train-${setup.seed}`, setup.unitRows);
+  const key = `${setup.sampler ?? "lhs-maximin"}|${setup.trainingSize}|${setup.seed}`;
+  const train = setup.cache?.get(key) ?? sampleTrainingSet(problem, setup.trainingSize, `train-${setup.seed}`, setup.unitRows);
+  setup.cache?.set(key, train);
   const t0 = performance.now();
   const model = await setup.trainer.fit(
     { inputs: train.inputs, targets: train.targets, x: train.x, y: train.y },

@@ -1,0 +1,56 @@
+import type { Command } from "commander";
+import type { CommandContext } from "../command-context.js";
+import { UsageError } from "../usage-error.js";
+import { runSuite } from "../../harness/run-suite.js";
+import { headlineTable } from "../../harness/headline-table.js";
+import { formatTextTable } from "../../harness/format-text-table.js";
+import { BENCH_CAUTION } from "../../harness/run-bench.js";
+
+interface BenchOptions {
+  suite: string;
+  problem?: string;
+  seeds?: string;
+  quick?: boolean;
+  peers: boolean;
+  problems?: string;
+  out: string;
+}
+
+/**
+ * `floorcast bench`: the optimum-gap benchmark of a suite of problems (README "Benchmark").
+ * @param program - the root command.
+ * @param ctx - the streams and exit status.
+ */
+export function registerBenchCommand(program: Command, ctx: CommandContext): void {
+  program
+    .command("bench")
+    .description("Measure how much an optimum found on a GP or NN surrogate loses against the exact optimum, and at how many exact evaluations")
+    .option("--suite <name>", "problem suite: demo or standard", "demo")
+    .option("--problem <name>", "run only this problem of the suite")
+    .option("--seeds <k>", "seeds per training size (default 2 with --quick, else 3)")
+    .option("--quick", "the demo's smaller training sizes and budgets")
+    .option("--no-peers", "skip scikit-learn's GP/MLP and scipy's LHS even when present")
+    .option("--problems <dir>", "problems directory (default datasets/problems)")
+    .requiredOption("--out <dir>", "output directory: report.json, report.md, report.html; finished problems under problems/ (re-run to resume)")
+    .action(async (opts: BenchOptions) => {
+      let seeds: number | undefined;
+      if (opts.seeds !== undefined) {
+        if (!/^\d+$/.test(opts.seeds) || Number(opts.seeds) < 1 || Number(opts.seeds) > 100) {
+          throw new UsageError(`bench: --seeds must be a whole number in [1, 100], got ${JSON.stringify(opts.seeds)}`);
+        }
+        seeds = Number(opts.seeds);
+      }
+      const { report, paths } = await runSuite({
+        suite: opts.suite,
+        ...(opts.problem === undefined ? {} : { problem: opts.problem }),
+        ...(seeds === undefined ? {} : { seeds }),
+        quick: opts.quick === true,
+        out: opts.out,
+        peers: opts.peers,
+        ...(opts.problems === undefined ? {} : { problemsDir: opts.problems }),
+        progress: ctx.stderr,
+      });
+      ctx.stdout.write(`${formatTextTable(headlineTable(report))}\n\n${BENCH_CAUTION}\n`);
+      ctx.stdout.write(`report: ${paths.html}\n        ${paths.markdown}\n        ${paths.json}\n`);
+    });
+}

@@ -1,0 +1,30 @@
+import type { Command } from "commander";
+import type { CommandContext } from "../command-context.js";
+import { runSuite } from "../../harness/run-suite.js";
+import { headlineTable } from "../../harness/headline-table.js";
+import { formatTextTable } from "../../harness/format-text-table.js";
+import { BENCH_CAUTION } from "../../harness/run-bench.js";
+
+/**
+ * `floorcast demo`: the demo suite end to end (sample, fit GP and NN, assess, optimise, report) at
+ * the quick sizes, with progress on the terminal; prints the headline table and where the report is.
+ * @param program - the root command.
+ * @param ctx - the streams and exit status.
+ */
+export function registerDemoCommand(program: Command, ctx: CommandContext): void {
+  program
+    .command("demo")
+    .description("Run the Quillmere demo suite end to end (sample, fit GP and NN, assess, optimise, report) in a few minutes")
+    .option("--out <dir>", "output directory", "floorcast-demo")
+    .option("--no-peers", "skip scikit-learn's GP/MLP and scipy's LHS even when present")
+    .action(async (opts: { out: string; peers: boolean }) => {
+      const t0 = performance.now();
+      ctx.stderr.write(`floorcast demo: the Quillmere demo suite, quick sizes. ${BENCH_CAUTION}\n`);
+      const { report, paths } = await runSuite({ suite: "demo", quick: true, out: opts.out, peers: opts.peers, progress: ctx.stderr });
+      const seconds = (performance.now() - t0) / 1000;
+      ctx.stdout.write(`\n${formatTextTable(headlineTable(report))}\n\n`);
+      ctx.stdout.write("gap = share of the exact optimum lost by optimising on the surrogate (design re-evaluated exactly); refined = after 20 exact refinement evaluations.\n");
+      ctx.stdout.write(`${BENCH_CAUTION}\n\n`);
+      ctx.stdout.write(`demo finished in ${seconds.toFixed(1)} s; report: ${paths.html}\n  (also ${paths.markdown} and ${paths.json})\n`);
+    });
+}

@@ -1,0 +1,124 @@
+import { mkdir, readFile, writeFile } from "node:fs/promises";
+import { join } from "node:path";
+import type { Command } from "commander";
+import { loadSurrogate } from "@floorcast/surrogate";
+import type { CommandContext } from "../command-context.js";
+import { UsageError } from "../usage-error.js";
+import { loadProblem } from "../../problem/load-problem.js";
+import { exactEvaluator } from "../../harness/exact-evaluator.js";
+import { surrogateEvaluator } from "../../harness/surrogate-evaluator.js";
+import { reevaluateSurrogateOptimum } from "../../harness/reevaluate-surrogate-optimum.js";
+import { reportDesign } from "../../harness/report-design.js";
+import { OPTIMIZER_NAMES, runOptimizer, type OptimizerName } from "../../harness/run-optimizer.js";
+import { BENCH_CAUTION } from "../../harness/run-bench.js";
+
+interface OptimizeOptions {
+  problem: string;
+  surrogate?: string;
+  exact?: boolean;
+  optimizer?: string;
+  seed: string;
+  budget: string;
+  out: string;
+}
+
+const whole = (flag: string, v: string, min: number): number => {
+  if (!/^\d+$/.test(v) || Number(v) < min) throw new UsageError(`optimize: ${flag} must be a whole number ≥ ${min}, got ${JSON.stringify(v)}`);
+  return Number(v);
+};
+
+/**
+ * `floorcast optimize`: optimises one problem on the exact evaluator or on a surrogate model file;
+ * a surrogate's optimum is re-evaluated exactly and never reported when exactly infeasible.
+ * @param program - the root command.
+ * @param ctx - the streams and exit status.
+ */
+export function registerOptimizeCommand(program: Command, ctx: CommandContext): void {
+  program
+    .command("optimize")
+    .description("Optimise one problem file on the exact evaluator or on a surrogate (its optimum re-evaluated exactly)")
+    .requiredOption("--problem <file>", "problem file (JSON, see README \"Benchmark\")")
+    .option("--surrogate <model.json>", "optimise on this surrogate model file")
+    .option("--exact", "optimise on the exact evaluator")
+    .option("--optimizer <name>", `${OPTIMIZER_NAMES.join(", ")} (default ga, nsga2 for two objectives)`)
+    .option("--seed <s>", "seed of every random draw", "1")
+    .option("--budget <n>", "evaluations allowed (grid: its own count)", "2000")
+    .requiredOption("--out <dir>", "output directory (optimum.json)")
+    .action(async (opts: OptimizeOptions) => {
+      if ((opts.surrogate === undefined) === (opts.exact !== true)) throw new UsageError("optimize: give exactly one of --surrogate FILE or --exact");
+      const seed = whole("--seed", opts.seed, 0);
+      const budget = whole("--budget", opts.budget, 1);
+      const problem = await loadProblem(opts.problem);
+      if (problem.kind === "site-selection") throw new UsageError(`optimize: ${problem.name} is a site-selection problem; rank its sites with floorcast bench`);
+      const name = (opts.optimizer ?? (problem.kind === "two-objective" ? "nsga2" : "ga")) as OptimizerName;
+      if (!OPTIMIZER_NAMES.includes(name)) throw new UsageError(`optimize: --optimizer must be one of ${OPTIMIZER_NAMES.join(", ")}, got ${JSON.stringify(opts.optimizer)}`);
+      if ((name === "nsga2") !== (problem.kind === "two-objective")) {
+        throw new UsageError(`optimize: --optimizer ${name} does not fit ${problem.name}: nsga2 is for two objectives, the others for one`);
+      }
+      const exact = exactEvaluator(problem);
+      let evaluator = exact as Parameters<typeof runOptimizer>[2];
+      if (opts.surrogate !== undefined) {
+        let text: string;
+        try {
+          text = await readFile(opts.surrogate, "utf8");
+        } catch (error) {
+          throw new UsageError(`optimize: cannot read ${opts.surrogate} (${(error as NodeJS.ErrnoException).code ?? String(error)})`);
+        }
+        const model = loadSurrogate(text, opts.surrogate);
+        const want = problem.trainingVariables.map((v) => v.name);
+        if (model.inputs.join(",") !== want.join(",")) {
+          throw new UsageError(`optimize: ${opts.surrogate} has inputs ${model.inputs.join(", ")}; ${problem.name} needs ${want.join(", ")} in that order`);
+        }
+        const missing = problem.outputs.filter((o) => !model.targets.includes(o));
+        if (missing.length > 0) throw new UsageError(`optimize: ${opts.surrogate} does not predict ${missing.join(", ")}, which ${problem.name} needs`);
+        evaluator = surrogateEvaluator(model, problem.trainingVariables);
+      }
+      const t0 = performance.now();
+      const result = await runOptimizer(name, problem.optimisation, evaluator, { seed, budget, gridPoints: problem.exact.gridPoints });
+      const seconds = (performance.now() - t0) / 1000;
+      const op = problem.optimisation;
+      let designs;
+      let source = "exact";
+      let exactEvaluations = opts.exact ? result.evaluations : 0;
+      if (problem.kind === "two-objective") {
+        const front = result.front.map((e) => e.design);
+        const outs = opts.exact ? result.front.map((e) => e.outputs) : await exact.evaluate(front);
+        if (!opts.exact) exactEvaluations += front.length;
+        designs = front
+          .map((d, i) => ({ d, o: outs[i]! }))
+          .filter(({ o }) => (op.constraints ?? []).every((c) => (c.op === "<=" ? o[c.output]! <= c.value : o[c.output]! >= c.value)))
+          .map(({ d, o }) => reportDesign(problem, { design: d, outputs: o, objectives: op.objectives.map((k) => o[k.output]!), violation: 0, feasible: true, valid: true }));
+      } else if (opts.exact) {
+        designs = result.best ? [reportDesign(problem, result.best)] : [];
+      } else {
+        const chosen = await reevaluateSurrogateOptimum(op, result.history ?? [], exact);
+        exactEvaluations += chosen.evaluations;
+        source = chosen.source;
+        designs = chosen.exact ? [reportDesign(problem, chosen.exact)] : [];
+      }
+      await mkdir(opts.out, { recursive: true });
+      const file = join(opts.out, "optimum.json");
+      const summary = {
+        kind: "floorcast.optimum",
+        formatVersion: 1,
+        caution: BENCH_CAUTION,
+        problem: problem.name,
+        optimizer: result.method,
+        evaluator: opts.exact ? "exact" : opts.surrogate,
+        seed,
+        evaluations: result.evaluations,
+        exactEvaluations,
+        source,
+        seconds,
+        optima: designs,
+      };
+      await writeFile(file, `${JSON.stringify(summary, null, 1)}\n`);
+      if (designs.length === 0) {
+        ctx.stderr.write(`optimize: no exactly feasible design found for ${problem.name}\n`);
+        ctx.setExitCode(1);
+      }
+      for (const d of designs.slice(0, 10)) ctx.stdout.write(`${op.objectives.map((o) => `${o.output}=${Number(((d.result as Record<string, number>)[o.output] ?? NaN).toPrecision(6))}`).join(" ")}  ${JSON.stringify(d.design)}\n`);
+      if (designs.length > 10) ctx.stdout.write(`… ${designs.length - 10} more front points in ${file}\n`);
+      ctx.stdout.write(`${result.method}: ${result.evaluations} evaluations (${exactEvaluations} exact), ${seconds.toFixed(2)} s; written ${file}\n${BENCH_CAUTION}\n`);
+    });
+}

@@ -1,0 +1,45 @@
+import type { BenchProblem } from "../problem/bench-problem.js";
+import type { BenchSettings } from "./bench-settings.js";
+import { floorcastTrainer } from "./floorcast-trainer.js";
+import type { PeerProcess } from "./peer-process.js";
+import { peerTrainers } from "./peer-trainers.js";
+import type { TrialPlan } from "./run-problem.js";
+
+/**
+ * The trials of one problem: floorcast's GP and NN at every training size and seed; with the
+ * peers, scikit-learn's GP and MLP on the same maximin-LHS rows, and floorcast's GP on scipy's
+ * Latin hypercube (the alternative sampler), at the peer sizes and the same seeds.
+ * @param problem - the problem.
+ * @param settings - sizes, seeds.
+ * @param quick - the demo's smaller fits.
+ * @param peer - a running peer server, or null.
+ * @param surrogates - which of floorcast's surrogates to run (default both).
+ */
+export function benchPlans(
+  problem: BenchProblem,
+  settings: BenchSettings,
+  quick: boolean,
+  peer: PeerProcess | null,
+  surrogates: readonly ("gp" | "nn")[] = ["gp", "nn"],
+): TrialPlan[] {
+  const vars = problem.trainingVariables;
+  const plans: TrialPlan[] = surrogates.map((k) => ({
+    trainer: floorcastTrainer(k, vars, quick),
+    sampler: "lhs-maximin",
+    sizes: settings.trainingSizes,
+    seeds: settings.seeds,
+  }));
+  if (peer) {
+    for (const t of peerTrainers(peer, vars)) {
+      plans.push({ trainer: t, sampler: "lhs-maximin", sizes: settings.peerSizes, seeds: settings.seeds });
+    }
+    plans.push({
+      trainer: floorcastTrainer("gp", vars, quick),
+      sampler: "scipy-lhs",
+      sizes: settings.peerSizes,
+      seeds: settings.seeds,
+      unitRows: async (n, d, seed) => (await peer.request<{ rows: number[][] }>({ op: "lhs", n, d, seed })).rows,
+    });
+  }
+  return plans;
+}

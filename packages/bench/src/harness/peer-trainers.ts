@@ -1,0 +1,36 @@
+import type { OptimisationVariable } from "../optimise/optimisation-problem.js";
+import type { BenchTrainer } from "./bench-trainer.js";
+import type { PeerProcess } from "./peer-process.js";
+import type { BatchPredictor } from "./surrogate-evaluator.js";
+
+interface PeerModel extends BatchPredictor {
+  readonly peerId: number;
+}
+
+/**
+ * scikit-learn's GP ("sklearn-gp") and MLP ("sklearn-mlp") as benchmark trainers, trained on the
+ * same rows as floorcast's and put through the same gap measurement; predictions go through the
+ * peer server's pipe.
+ * @param peer - a running peer server.
+ * @param variables - the surrogate's input variables (declared bounds scale the inputs).
+ */
+export function peerTrainers(peer: PeerProcess, variables: readonly OptimisationVariable[]): BenchTrainer[] {
+  const lower = variables.map((v) => (v.kind === "categorical" ? 0 : v.min));
+  const upper = variables.map((v) => (v.kind === "categorical" ? Math.max(1, v.levels.length - 1) : v.max));
+  const make = (kind: "gp" | "mlp"): BenchTrainer => ({
+    name: `sklearn-${kind}`,
+    async fit(data, seed) {
+      const { id } = await peer.request<{ id: number }>({ op: "fit", kind, x: data.x, y: data.y, lower, upper, seed });
+      const model: PeerModel = {
+        peerId: id,
+        targets: data.targets,
+        predict: (x) => peer.request<{ mean: number[][] }>({ op: "predict", id, x }),
+      };
+      return model;
+    },
+    release(model) {
+      void peer.request({ op: "release", id: (model as PeerModel).peerId }).catch(() => undefined);
+    },
+  });
+  return [make("gp"), make("mlp")];
+}

@@ -1,0 +1,84 @@
+import { createHash } from "node:crypto";
+import { mkdir, readFile, rename, writeFile } from "node:fs/promises";
+import { join } from "node:path";
+import { cpus } from "node:os";
+import type { BenchProblem } from "../problem/bench-problem.js";
+import type { BenchReport, ProblemReport } from "./bench-report-types.js";
+import { runProblem, type RunProblemOptions } from "./run-problem.js";
+
+/** The caution every bench output carries. */
+export const BENCH_CAUTION =
+  "Estimates for early feasibility studies only: not a zoning determination. Local codes and licensed professionals decide.";
+
+/** What a bench run needs. */
+export interface RunBenchOptions {
+  readonly suite: string;
+  readonly problems: readonly BenchProblem[];
+  /** Output directory; finished problems are kept in `<out>/problems/<name>.json`. */
+  readonly out: string;
+  /** The run's options as report.json records them; a finished problem is reused only when these match. */
+  readonly settings: Readonly<Record<string, unknown>>;
+  /** Builds the measurement of one problem (trial plans, budgets). */
+  readonly plan: (problem: BenchProblem) => RunProblemOptions | Promise<RunProblemOptions>;
+  readonly peers: boolean;
+  /** Called when a problem starts, is skipped (already finished) or ends. */
+  readonly onProblem?: (problem: BenchProblem, state: "start" | "skip" | "done", index: number, total: number) => void;
+}
+
+async function fingerprint(problem: BenchProblem, settings: Readonly<Record<string, unknown>>): Promise<string> {
+  let text = "";
+  try {
+    text = await readFile(problem.file, "utf8");
+  } catch {
+    text = JSON.stringify({ name: problem.name, optimisation: problem.optimisation });
+  }
+  return createHash("sha256").update(JSON.stringify(settings)).update("\n").update(text).digest("hex");
+}
+
+/**
+ * Runs a suite problem by problem, writing each finished problem to `<out>/problems/<name>.json`
+ * at once (atomically: a temporary file, then a rename). Re-run with the same settings into the
+ * same directory, it reuses the problems already finished there and measures only the rest, so
+ * an interrupted run resumes where it stopped. Returns the assembled report (report.json's content).
+ * @param options - suite, problems, output directory, settings, plan and progress callback.
+ */
+export async function runBench(options: RunBenchOptions): Promise<BenchReport> {
+  const t0 = performance.now();
+  const dir = join(options.out, "problems");
+  await mkdir(dir, { recursive: true });
+  const reports: ProblemReport[] = [];
+  const total = options.problems.length;
+  for (const [i, problem] of options.problems.entries()) {
+    const file = join(dir, `${problem.name}.json`);
+    const key = await fingerprint(problem, options.settings);
+    let finished: ProblemReport | null = null;
+    try {
+      const saved = JSON.parse(await readFile(file, "utf8")) as { fingerprint?: string; report?: ProblemReport };
+      if (saved.fingerprint === key && saved.report) finished = saved.report;
+    } catch {
+      finished = null;
+    }
+    if (finished) {
+      options.onProblem?.(problem, "skip", i, total);
+      reports.push(finished);
+      continue;
+    }
+    options.onProblem?.(problem, "start", i, total);
+    const report = await runProblem(problem, await options.plan(problem));
+    const tmp = `${file}.partial`;
+    await writeFile(tmp, JSON.stringify({ fingerprint: key, report }));
+    await rename(tmp, file);
+    reports.push(report);
+    options.onProblem?.(problem, "done", i, total);
+  }
+  return {
+    kind: "floorcast.bench-report",
+    formatVersion: 1,
+    caution: BENCH_CAUTION,
+    suite: options.suite,
+    options: options.settings,
+    environment: { node: process.version, cpus: cpus().length, peers: options.peers },
+    problems: reports,
+    seconds: (performance.now() - t0) / 1000,
+  };
+}

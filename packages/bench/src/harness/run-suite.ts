@@ -1,0 +1,76 @@
+import type { Writable } from "node:stream";
+import type { BenchProblem } from "../problem/bench-problem.js";
+import { DEFAULT_PROBLEMS_DIR, loadSuite } from "../problem/load-suite.js";
+import type { BenchReport } from "./bench-report-types.js";
+import { benchPlans } from "./bench-plans.js";
+import { benchProgress } from "./bench-progress.js";
+import { benchSettings } from "./bench-settings.js";
+import { PeerProcess } from "./peer-process.js";
+import { runBench } from "./run-bench.js";
+import { writeBenchReport } from "./write-bench-report.js";
+
+/** Options of {@link runSuite} (what `floorcast bench` and `floorcast demo` take). */
+export interface RunSuiteOptions {
+  readonly suite: string;
+  /** Only this problem of the suite. */
+  readonly problem?: string;
+  readonly seeds?: number;
+  readonly quick: boolean;
+  readonly out: string;
+  /** Run the scikit-learn / scipy peers when present (default true). */
+  readonly peers?: boolean;
+  /** Problems directory (default datasets/problems). */
+  readonly problemsDir?: string;
+  /** Progress messages (stderr). */
+  readonly progress?: Writable;
+  /** Overrides for tests: training sizes, test size, budgets. */
+  readonly overrides?: Partial<ReturnType<typeof benchSettings>> & { readonly gridPoints?: number; readonly surrogates?: readonly ("gp" | "nn")[] };
+}
+
+/**
+ * Runs a suite end to end — for every problem: the exact optimum, then per surrogate, training
+ * size and seed: sample, fit, assess, optimise on the surrogate, re-evaluate exactly, refine — with
+ * the peers when Debian's python3-sklearn and python3-scipy are present; writes each finished
+ * problem as it goes (resumable) and then report.json, report.md and report.html into `out`.
+ * @param options - suite, problem, seeds, quick, output directory.
+ * @returns the report and the paths written.
+ */
+export async function runSuite(options: RunSuiteOptions): Promise<{ report: BenchReport; paths: { json: string; markdown: string; html: string } }> {
+  let problems: BenchProblem[] = await loadSuite(options.suite, options.problemsDir ?? DEFAULT_PROBLEMS_DIR);
+  if (options.problem !== undefined) {
+    const names = problems.map((p) => p.name);
+    problems = problems.filter((p) => p.name === options.problem);
+    if (problems.length === 0) throw new RangeError(`bench: no problem "${options.problem}" in suite ${options.suite}; problems: ${names.join(", ")}`);
+  }
+  const { surrogates, gridPoints, ...over } = options.overrides ?? {};
+  const settings = { ...benchSettings(options.quick, options.seeds), ...over };
+  const peer = options.peers === false ? null : PeerProcess.start();
+  const progress = options.progress ? benchProgress(options.progress) : null;
+  const notes = peer ? [] : ["Peers skipped: Debian's python3-sklearn and python3-scipy were not found (or were turned off)."];
+  try {
+    const report = await runBench({
+      suite: options.suite,
+      problems,
+      out: options.out,
+      settings: { suite: options.suite, quick: options.quick, ...settings, peers: peer !== null, surrogates: surrogates ?? ["gp", "nn"], gridPoints: gridPoints ?? null },
+      peers: peer !== null,
+      plan: (problem) => ({
+        plans: benchPlans(problem, settings, options.quick, peer, surrogates),
+        testSize: settings.testSize,
+        refineBudget: settings.refineBudget,
+        targets: settings.targets,
+        candidates: settings.candidates,
+        notes,
+        ...(gridPoints === undefined ? {} : { gridPoints }),
+        ...(progress ? { onStep: (label: string, done: number, total: number) => progress.step(label, done, total) } : {}),
+      }),
+      ...(progress ? { onProblem: (p: BenchProblem, state: "start" | "skip" | "done", i: number, n: number) => progress.problem(p.name, state, i, n) } : {}),
+    });
+    progress?.stop();
+    const paths = await writeBenchReport(report, options.out);
+    return { report, paths };
+  } finally {
+    progress?.stop();
+    peer?.close();
+  }
+}
