@@ -23,6 +23,22 @@ const HEIGHT_TOL = 1e-9;
 
 const ws = new MassingWorkspace();
 
+interface PlateLimits {
+  /** Areas at or below this count as empty. */
+  readonly emptyArea: number;
+  /** Least plate area, less the tolerance. */
+  readonly minArea: number;
+  /** Least plate width (0: no test). */
+  readonly minWidth: number;
+  readonly widthTol: number;
+}
+
+/** The plate test of step 3: empty, smaller than minPlateArea or narrower than minPlateWidth. */
+function plateFails(plate: Float64Array, m: number, area: number, limits: PlateLimits): boolean {
+  if (area <= limits.emptyArea || area < limits.minArea) return true;
+  return limits.minWidth > 0 && polygonWidth(plate, m) < limits.minWidth - limits.widthTol;
+}
+
 function toPoints(xy: Float64Array, m: number, ox: number, oy: number): Point[] {
   const pts: Point[] = new Array<Point>(m);
   for (let i = 0; i < m; i++) pts[i] = [xy[2 * i]! + ox, xy[2 * i + 1]! + oy];
@@ -127,8 +143,12 @@ export function evaluateMassing(input: MassingInput, options?: EvaluateMassingOp
   }
 
   // Step 3: floors.
-  const minArea = input.minPlateArea ?? 0;
-  const minWidth = input.minPlateWidth ?? 0;
+  const limits: PlateLimits = {
+    emptyArea: areaTol,
+    minArea: (input.minPlateArea ?? 0) - areaTol,
+    minWidth: input.minPlateWidth ?? 0,
+    widthTol,
+  };
   const farCap = input.maxFar === undefined ? Infinity : input.maxFar * lotArea + areaTol;
   const plates: Point[][] | undefined = wantPlates ? [] : undefined;
   let baseFails: boolean | undefined;
@@ -156,10 +176,9 @@ export function evaluateMassing(input: MassingInput, options?: EvaluateMassingOp
       m = skyPlaneCut(ws, base, mBase, streets, d);
       plate = ws.plate;
       area = m > 0 ? signedArea(plate, m) : 0;
-      fails = area <= areaTol || area < minArea - areaTol || (minWidth > 0 && polygonWidth(plate, m) < minWidth - widthTol);
+      fails = plateFails(plate, m, area, limits);
     } else {
-      baseFails ??=
-        area <= areaTol || area < minArea - areaTol || (minWidth > 0 && polygonWidth(plate, m) < minWidth - widthTol);
+      baseFails ??= plateFails(plate, m, area, limits);
       fails = baseFails;
     }
     if (fails) {
