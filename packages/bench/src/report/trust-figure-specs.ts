@@ -67,7 +67,7 @@ export function trustFigureSpecs(report: TrustReport, data: TrustFigureData): Tr
     spec: {
       $schema: SCHEMA,
       data: { values: long },
-      facet: { field: "input", type: "nominal", title: null },
+      facet: { field: "input", type: "nominal", title: null, sort: [...data.inputs] },
       columns: 3,
       spec: {
         width: 250,
