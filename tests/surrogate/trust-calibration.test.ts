@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import fc from "fast-check";
 import seedrandom from "seedrandom";
 import { gaussianCalibration, gaussianCrps, standardNormal } from "@floorcast/surrogate";
 
@@ -63,5 +64,28 @@ describe("gaussianCalibration on synthetic data with known Gaussian noise", () =
     expect(() => gaussianCalibration([1], [1], [Infinity])).toThrow(RangeError);
     expect(() => gaussianCalibration([1], [1], [1], { levels: [1] })).toThrow(/levels\[0\] must be in \(0, 1\)/);
     expect(() => gaussianCalibration([1, 2], [1], [1])).toThrow(/mean must have length 2/);
+  });
+});
+
+describe("calibration properties", () => {
+  it("the calibration curve never decreases with the nominal level, and scaling y, mean and sd together changes nothing but NLPD and CRPS (property, derived)", () => {
+    fc.assert(
+      fc.property(
+        fc.array(fc.tuple(fc.double({ min: -100, max: 100, noNaN: true }), fc.double({ min: 0.1, max: 10, noNaN: true })), { minLength: 1, maxLength: 40 }),
+        fc.double({ min: 0.5, max: 20, noNaN: true }),
+        (rows, k) => {
+          const y = rows.map(([v]) => v);
+          const mean = rows.map(() => 0);
+          const sd = rows.map(([, s]) => s);
+          const c = gaussianCalibration(y, mean, sd);
+          for (let i = 1; i < c.curve.length; i++) expect(c.curve[i]!.empirical).toBeGreaterThanOrEqual(c.curve[i - 1]!.empirical);
+          const s = gaussianCalibration(y.map((v) => v * k), mean, sd.map((v) => v * k));
+          expect(s.coverage).toEqual(c.coverage);
+          expect(s.crps).toBeCloseTo(c.crps * k, 8);
+          expect(s.nlpd).toBeCloseTo(c.nlpd + Math.log(k), 8); // ½log(2πk²σ²) = ½log(2πσ²) + log k
+        },
+      ),
+      { numRuns: 60 },
+    );
   });
 });

@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import fc from "fast-check";
 import seedrandom from "seedrandom";
 import { buildValidityDomain, checkDomain, collectDiagnostics, DomainError, domainOfModel, nearestDistance, scaleToDomain } from "@floorcast/surrogate";
 import { olsModel } from "./trust-toy-trainer.js";
@@ -128,5 +129,23 @@ describe("scaleToDomain and nearestDistance", () => {
     expect(nearestDistance([[0, 0], [3, 4]], [0, 0], 0)).toBe(5); // 3-4-5 triangle
     expect(nearestDistance([], [1, 2])).toBe(Infinity);
     expect(nearestDistance([[0, 0]], [NaN, 0])).toBe(Infinity); // NaN never compares below the best
+  });
+});
+
+describe("validity-domain properties", () => {
+  it("every training row is inside its own domain, and a row beyond any bound is outside (property)", () => {
+    fc.assert(
+      fc.property(
+        fc.array(fc.tuple(fc.double({ min: -1e3, max: 1e3, noNaN: true }), fc.double({ min: 0, max: 1, noNaN: true })), { minLength: 2, maxLength: 30 }),
+        (rows) => {
+          const x = rows.map(([a, b]) => [a, b]);
+          const d = buildValidityDomain(["a", "b"], x);
+          expect(checkDomain(d, x).outside).toEqual([]);
+          const w = Math.max(d.upper[0]! - d.lower[0]!, 1);
+          expect(checkDomain(d, [[d.upper[0]! + w, x[0]![1]!]]).rows[0]!.inBounds).toBe(false);
+        },
+      ),
+      { numRuns: 50 },
+    );
   });
 });
