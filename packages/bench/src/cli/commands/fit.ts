@@ -5,6 +5,8 @@ import { readTable } from "@floorcast/sampler";
 import { KERNEL_NAMES, fitGaussianProcess, type KernelName, type Surrogate, type TrainingData } from "@floorcast/surrogate";
 import type { CommandContext } from "../command-context.js";
 import { UsageError } from "../usage-error.js";
+import { addNnOptions, fitNn } from "./fit-nn-options.js";
+import { addUncertaintyOptions, withUncertainty } from "./fit-uncertainty-options.js";
 
 /** Options every model family shares, plus each family's own (added by that family's `add…Options`). */
 type FitOptions = Record<string, string | boolean | undefined> & {
@@ -67,7 +69,7 @@ const fitGp: FamilyFitter = async (data, opts, seed, say) => {
 };
 
 /** One entry per model family: its fitter (its options are added in registerFitCommand). */
-const FAMILIES: Record<string, FamilyFitter> = { gp: fitGp };
+const FAMILIES: Record<string, FamilyFitter> = { gp: withUncertainty(fitGp), nn: withUncertainty(fitNn) };
 
 /**
  * `floorcast fit`: fits a surrogate to the numeric columns of a CSV and writes the versioned model file.
@@ -77,7 +79,7 @@ const FAMILIES: Record<string, FamilyFitter> = { gp: fitGp };
 export function registerFitCommand(program: Command, ctx: CommandContext): void {
   const cmd = program
     .command("fit")
-    .description("Fit a surrogate (gp) to a CSV's input and target columns and write the model file")
+    .description("Fit a surrogate (gp, nn) to a CSV's input and target columns and write the model file")
     .requiredOption("--data <file.csv>", "training data with a header row")
     .requiredOption("--inputs <a,b,...>", "input columns, comma-separated")
     .requiredOption("--target <col[,col2]>", "target column(s), comma-separated")
@@ -85,6 +87,8 @@ export function registerFitCommand(program: Command, ctx: CommandContext): void 
     .option("--seed <n>", "seed of every random choice", "0")
     .requiredOption("--out <model.json>", "model file to write");
   addGpOptions(cmd);
+  addNnOptions(cmd);
+  addUncertaintyOptions(cmd);
   cmd.action(async (opts: FitOptions) => {
     await runFit(opts, ctx);
   });

@@ -16,7 +16,8 @@ interface PredictOptions {
 
 /**
  * `floorcast predict`: predictions of a saved surrogate for every row of a CSV, in the rows' order, as
- * `<target>_mean` and `<target>_sd` columns (sd empty for a model without uncertainty), and `in_domain`
+ * `<target>_mean` and `<target>_sd` columns (sd empty for a model without uncertainty; conformal files add
+ * `<target>_lower` and `<target>_upper`, the interval with the file's coverage), and `in_domain`
  * (1 inside the model's domain of validity, 0 outside, empty when no domain is known; see checkDomain).
  * `--strict` refuses rows outside the domain instead.
  * @param program - the root command.
@@ -60,10 +61,21 @@ async function runPredict(opts: PredictOptions, ctx: CommandContext): Promise<vo
     throw new UsageError(`predict: --strict: data rows ${rows}${e.rows.length > 20 ? ", …" : ""} of ${basename(opts.data)} (${e.rows.length} in all) are outside the model's domain of validity`);
   }
   const p = model.predict(table.x);
-  const columns = [...model.targets.flatMap((t) => [`${t}_mean`, `${t}_sd`]), "in_domain"];
+  const iv = p.interval;
+  const columns = [
+    ...model.targets.flatMap((t) => [`${t}_mean`, `${t}_sd`, ...(iv ? [`${t}_lower`, `${t}_upper`] : [])]),
+    "in_domain",
+  ];
   const writer = createCsvWriter(opts.out, columns);
   for (let i = 0; i < table.x.length; i++) {
-    await writer.write([...model.targets.flatMap((_, j) => [p.mean[i]![j]!, p.sd ? p.sd[i]![j]! : ""]), flags ? (flags[i] ? 1 : 0) : ""]);
+    await writer.write([
+      ...model.targets.flatMap((_, j) => [
+        p.mean[i]![j]!,
+        p.sd ? p.sd[i]![j]! : "",
+        ...(iv ? [iv.lower[i]![j]!, iv.upper[i]![j]!] : []),
+      ]),
+      flags ? (flags[i] ? 1 : 0) : "",
+    ]);
   }
   await writer.close();
   ctx.stdout.write(
