@@ -53,6 +53,15 @@ describe("the Quillmere demo scenarios", () => {
   });
 });
 
+describe("the README's scenario example", () => {
+  it("is a valid scenario", () => {
+    const readme = readFileSync(fileURLToPath(new URL("../../README.md", import.meta.url)), "utf8");
+    const section = readme.slice(readme.indexOf("## Scenario files"));
+    const json = /```json\n([\s\S]*?)```/.exec(section)![1]!;
+    expect(parseScenario(json, "README.md").parameters.map((p) => p.kind)).toEqual(["continuous", "continuous", "integer", "categorical"]);
+  });
+});
+
 describe("parseScenario errors name the file, the path and the problem", () => {
   const cases: [string, (s: Record<string, any>) => void, RegExp][] = [
     ["wrong kind", (s) => (s.kind = "other"), /bad\.json: kind: /],
