@@ -29,7 +29,7 @@ export class PhiPState {
     points.forEach((row, i) => row.forEach((v, k) => (this.x[k * n + i] = v * n)));
     this.half = p / 2;
     this.intHalf = Number.isInteger(this.half) && this.half > 0 && this.half <= 64;
-    this.scratch = [0, 1, 2, 3].map(() => new Float64Array(n));
+    this.scratch = [new Float64Array(2 * n), new Float64Array(2 * n)];
     const keep = n <= MATRIX_LIMIT;
     this.d2 = keep ? new Float64Array(n * n) : undefined;
     this.tm = keep ? new Float64Array(n * n) : undefined;
@@ -82,21 +82,38 @@ export class PhiPState {
   /** The sum S after exchanging column k of rows a and b (the design is not changed). O(n). */
   sumAfterExchange(a: number, b: number, k: number): number {
     const n = this.n;
-    const col = this.x.subarray(k * n, (k + 1) * n);
-    const xa = col[a] as number;
-    const xb = col[b] as number;
-    const [da, db, ta, tb] = this.rows(a, b) as [Float64Array, Float64Array, Float64Array, Float64Array];
+    const x = this.x;
+    const c = k * n;
+    const xa = x[c + a] as number;
+    const xb = x[c + b] as number;
+    // Rows a and b of the squared distances (dm) and terms (tv), at offsets oa and ob; no allocation.
+    let dm: Float64Array;
+    let tv: Float64Array;
+    let oa: number;
+    let ob: number;
+    if (this.d2 !== undefined && this.tm !== undefined) {
+      dm = this.d2;
+      tv = this.tm;
+      oa = a * n;
+      ob = b * n;
+    } else {
+      dm = this.scratch[0] as Float64Array;
+      tv = this.scratch[1] as Float64Array;
+      this.fillRows(a, b, dm, tv);
+      oa = 0;
+      ob = n;
+    }
     const h = this.intHalf ? this.half : -this.half;
     let delta = 0;
     if (h === 25) {
       // The default p = 50, unrolled: one division gives both reciprocals.
       for (let j = 0; j < n; j++) {
         if (j === a || j === b) continue; // the a–b distance does not change
-        const xj = col[j] as number;
+        const xj = x[c + j] as number;
         const ea = (xa - xj) * (xa - xj);
         const eb = (xb - xj) * (xb - xj);
-        let qa = (da[j] as number) - ea + eb;
-        let qb = (db[j] as number) - eb + ea;
+        let qa = (dm[oa + j] as number) - ea + eb;
+        let qb = (dm[ob + j] as number) - eb + ea;
         if (qa < TINY) qa = TINY;
         if (qb < TINY) qb = TINY;
         const inv = 1 / (qa * qb);
@@ -108,17 +125,17 @@ export class PhiPState {
         const rb4 = rb2 * rb2;
         const ra8 = ra4 * ra4;
         const rb8 = rb4 * rb4;
-        delta += ra8 * ra8 * ra8 * ra - (ta[j] as number) + (rb8 * rb8 * rb8 * rb - (tb[j] as number));
+        delta += ra8 * ra8 * ra8 * ra + rb8 * rb8 * rb8 * rb - (tv[oa + j] as number) - (tv[ob + j] as number);
       }
       return this.sum + delta;
     }
     for (let j = 0; j < n; j++) {
       if (j === a || j === b) continue; // the a–b distance does not change
-      const xj = col[j] as number;
+      const xj = x[c + j] as number;
       const ea = (xa - xj) * (xa - xj);
       const eb = (xb - xj) * (xb - xj);
-      delta += powNeg((da[j] as number) - ea + eb, h) - (ta[j] as number);
-      delta += powNeg((db[j] as number) - eb + ea, h) - (tb[j] as number);
+      delta += powNeg((dm[oa + j] as number) - ea + eb, h) - (tv[oa + j] as number);
+      delta += powNeg((dm[ob + j] as number) - eb + ea, h) - (tv[ob + j] as number);
     }
     return this.sum + delta;
   }
@@ -169,22 +186,17 @@ export class PhiPState {
     return Array.from({ length: n }, (_, i) => Array.from({ length: this.dims }, (_, k) => (from[k * n + i] as number) / n));
   }
 
-  /** Squared distances and terms from rows a and b to every row (own entries 0 / term(0)). */
-  private rows(a: number, b: number): Float64Array[] {
+  /** Without matrices: rows a (at 0) and b (at n) of the squared distances and terms. */
+  private fillRows(a: number, b: number, dm: Float64Array, tv: Float64Array): void {
     const n = this.n;
-    if (this.d2 !== undefined && this.tm !== undefined) {
-      return [a, b, a, b].map((r, i) => (i < 2 ? this.d2 : this.tm)!.subarray(r * n, (r + 1) * n));
-    }
-    const [da, db, ta, tb] = this.scratch as [Float64Array, Float64Array, Float64Array, Float64Array];
     for (let j = 0; j < n; j++) {
       const qa = j === a ? 0 : this.dist2(a, j);
       const qb = j === b ? 0 : this.dist2(b, j);
-      da[j] = qa;
-      db[j] = qb;
-      ta[j] = this.term(qa);
-      tb[j] = this.term(qb);
+      dm[j] = qa;
+      dm[n + j] = qb;
+      tv[j] = this.term(qa);
+      tv[n + j] = this.term(qb);
     }
-    return [da, db, ta, tb];
   }
 
   private dist2(i: number, j: number): number {
