@@ -62,13 +62,7 @@ export function scenarioToMassingInput(
     ...(corner === undefined ? {} : { corner }),
   });
   const street = num("setbackStreet");
-  const start = num("skyPlaneStart");
-  const slope = num("skyPlaneRatio");
-  const optional = (key: keyof MassingInput, name: string): Partial<Record<string, number>> => {
-    const v = num(name);
-    return v === undefined ? {} : { [key]: v };
-  };
-  return {
+  const input: { -readonly [K in keyof MassingInput]: MassingInput[K] } = {
     parcel,
     setbacks: {
       front: need("setbackFront"),
@@ -78,10 +72,17 @@ export function scenarioToMassingInput(
     },
     floorHeight: need("floorHeight"),
     maxHeight: need("maxHeight"),
-    ...optional("maxFar", "maxFar"),
-    ...optional("maxCoverage", "maxCoverage"),
-    ...(start === undefined || slope === undefined ? {} : { skyPlane: { startHeight: start, ratio: slope } }),
-    ...optional("minPlateWidth", "minPlateWidth"),
-    ...optional("minPlateArea", "minPlateArea"),
-  } as MassingInput;
+  };
+  const maxFar = num("maxFar");
+  if (maxFar !== undefined) input.maxFar = maxFar;
+  const maxCoverage = num("maxCoverage");
+  if (maxCoverage !== undefined) input.maxCoverage = maxCoverage;
+  const start = num("skyPlaneStart");
+  const slope = num("skyPlaneRatio");
+  if (start !== undefined && slope !== undefined) input.skyPlane = { startHeight: start, ratio: slope };
+  const minPlateWidth = num("minPlateWidth");
+  if (minPlateWidth !== undefined) input.minPlateWidth = minPlateWidth;
+  const minPlateArea = num("minPlateArea");
+  if (minPlateArea !== undefined) input.minPlateArea = minPlateArea;
+  return input;
 }
