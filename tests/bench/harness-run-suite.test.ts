@@ -1,0 +1,96 @@
+import { describe, expect, it } from "vitest";
+import { mkdtempSync, readFileSync, writeFileSync, statSync, existsSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { runSuite } from "../../packages/bench/src/harness/run-suite.js";
+import { DEFAULT_PROBLEMS_DIR } from "../../packages/bench/src/problem/load-suite.js";
+import { evaluateMassing } from "@floorcast/sampler";
+
+/** A tiny suite: the Larkspur fit problem (massing) and Forrester (test function), both in suite "tiny". */
+function tinySuite(): string {
+  const dir = mkdtempSync(join(tmpdir(), "fc-suite-"));
+  const fit = JSON.parse(readFileSync(join(DEFAULT_PROBLEMS_DIR, "larkspur-fit-gfa.json"), "utf8"));
+  fit.scenario = join(DEFAULT_PROBLEMS_DIR, "../scenarios/larkspur-terraces.json");
+  fit.suites = ["tiny"];
+  fit.exact = { gridPoints: 11, refineEvaluations: 40 };
+  writeFileSync(join(dir, "fit.json"), JSON.stringify(fit));
+  const fo = JSON.parse(readFileSync(join(DEFAULT_PROBLEMS_DIR, "standard-forrester.json"), "utf8"));
+  fo.suites = ["tiny"];
+  fo.exact = { gridPoints: 101, refineEvaluations: 40 };
+  writeFileSync(join(dir, "forrester.json"), JSON.stringify(fo));
+  return dir;
+}
+
+const overrides = {
+  trainingSizes: [10],
+  seeds: [1],
+  testSize: 30,
+  refineBudget: 5,
+  candidates: 128,
+  targets: { search: 40, bo: 6, seeds: 1, boSeeds: 1 },
+  peerSizes: [],
+  surrogates: ["gp"] as ("gp" | "nn")[],
+};
+
+describe("runSuite: report.json structure, resume", () => {
+  const problemsDir = tinySuite();
+  const out = mkdtempSync(join(tmpdir(), "fc-bench-"));
+  it("writes report.json as issue 7 specifies, with Markdown and HTML beside it", async () => {
+    const { report, paths } = await runSuite({ suite: "tiny", quick: true, out, peers: false, problemsDir, overrides });
+    const json = JSON.parse(readFileSync(paths.json, "utf8"));
+    expect(json.kind).toBe("floorcast.bench-report");
+    expect(json.problems.map((p: { name: string }) => p.name)).toEqual(["larkspur-fit-gfa", "standard-forrester"]);
+    const p = json.problems[0];
+    expect(Object.keys(p.exactOptimum)).toEqual(expect.arrayContaining(["input", "result", "evaluations"]));
+    // input is the full MassingInput and result its exact MassingResult
+    expect(p.exactOptimum.input.parcel.vertices.length).toBe(4);
+    expect(evaluateMassing(p.exactOptimum.input).gfa).toBeCloseTo(p.exactOptimum.result.gfa, 9);
+    expect(p.exactOptimum.evaluations).toBe(p.exactOptimum.gridEvaluations + p.exactOptimum.refineEvaluations);
+    expect(p.surrogateOptimum.length).toBe(1);
+    const s = p.surrogateOptimum[0];
+    for (const k of ["surrogate", "trainingSize", "seed", "input", "result", "gap", "evaluations"]) expect(s).toHaveProperty(k);
+    expect(s.surrogate).toBe("gp");
+    expect(s.trainingSize).toBe(10);
+    // the reported design's result is its exact result, and it satisfies the problem's constraint (height ≤ 10)
+    expect(evaluateMassing(s.input).gfa).toBeCloseTo(s.result.gfa, 9);
+    expect(s.result.height).toBeLessThanOrEqual(10);
+    expect(s.gap).toBeCloseTo((p.exactOptimum.value - s.value) / p.exactOptimum.value, 12);
+    expect(p.evaluationsToTarget.map((e: { method: string }) => e.method)).toEqual(["bo", "ga", "pso", "random", "grid"]);
+    expect(report.caution).toMatch(/not a zoning determination/);
+    const md = readFileSync(paths.markdown, "utf8");
+    const html = readFileSync(paths.html, "utf8");
+    for (const text of [md, html]) {
+      expect(text).toMatch(/not a zoning determination/);
+      expect(text).toMatch(/licensed professionals decide/);
+    }
+    expect(html).toMatch(/Plan and section of the optimal massing/);
+    expect((html.match(/<svg/g) ?? []).length).toBeGreaterThanOrEqual(4);
+    expect(html).not.toMatch(/<script/);
+  });
+  it("re-run with the same options into the same directory, it skips the finished problems", async () => {
+    const stamp = statSync(join(out, "problems", "larkspur-fit-gfa.json")).mtimeMs;
+    const states: string[] = [];
+    const t0 = performance.now();
+    const progress = { write: (s: string) => (states.push(s), true) } as unknown as NodeJS.WritableStream;
+    const { report } = await runSuite({ suite: "tiny", quick: true, out, peers: false, problemsDir, overrides, progress: progress as never });
+    expect(states.filter((s) => /already finished/.test(s)).length).toBe(2);
+    expect(statSync(join(out, "problems", "larkspur-fit-gfa.json")).mtimeMs).toBe(stamp);
+    expect(report.problems[0]!.surrogateOptimum[0]!.gap).toBeDefined();
+    expect(performance.now() - t0).toBeLessThan(20_000);
+  });
+  it("a missing problem file is measured again; other options measure everything again", async () => {
+    const { unlinkSync } = await import("node:fs");
+    unlinkSync(join(out, "problems", "standard-forrester.json"));
+    const lines: string[] = [];
+    const progress = { write: (s: string) => (lines.push(s), true) };
+    await runSuite({ suite: "tiny", quick: true, out, peers: false, problemsDir, overrides, progress: progress as never });
+    expect(lines.filter((s) => /already finished/.test(s)).length).toBe(1);
+    expect(existsSync(join(out, "problems", "standard-forrester.json"))).toBe(true);
+    const other: string[] = [];
+    await runSuite({ suite: "tiny", quick: true, out, peers: false, problemsDir, overrides: { ...overrides, refineBudget: 6 }, problem: "standard-forrester", progress: { write: (s: string) => (other.push(s), true) } as never });
+    expect(other.filter((s) => /already finished/.test(s)).length).toBe(0);
+  });
+  it("names an unknown problem", async () => {
+    await expect(runSuite({ suite: "tiny", quick: true, out, peers: false, problemsDir, overrides, problem: "nope" })).rejects.toThrow(/no problem "nope" in suite tiny; problems: larkspur-fit-gfa, standard-forrester/);
+  });
+});
