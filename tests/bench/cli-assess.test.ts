@@ -3,19 +3,9 @@ import { existsSync } from "node:fs";
 import { mkdtemp, readFile, writeFile } from "node:fs/promises";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import { Writable } from "node:stream";
 import seedrandom from "seedrandom";
-import { main } from "@floorcast/bench";
+import { runCli } from "./run-cli.js";
 import { fitGaussianProcess, loadSurrogate, regressionMetrics } from "@floorcast/surrogate";
-
-/** Runs the CLI in-process; returns exit status, stdout and stderr. */
-async function run(args: string[]): Promise<{ code: number; out: string; err: string }> {
-  let out = "";
-  let err = "";
-  const sink = (f: (s: string) => void) => new Writable({ write: (c, _e, cb) => (f(String(c)), cb()) });
-  const code = await main(["node", "floorcast", ...args], { stdout: sink((s) => (out += s)), stderr: sink((s) => (err += s)) });
-  return { code, out, err };
-}
 
 // A toy floor-area-like response with a regime switch (FAR binds above frontage 50): invented, derived.
 const gfa = (a: number, b: number) => Math.min(2 * a * b, 2000 + 10 * b);
@@ -40,7 +30,7 @@ beforeAll(async () => {
 describe("floorcast assess", () => {
   it("writes report.json/md/html with metrics, regimes, k-fold CV and a learning curve", async () => {
     const out = join(dir, "full");
-    const r = await run(["assess", "--model", join(dir, "model.json"), "--data", join(dir, "test.csv"), "--target", "gfa", "--by", "limitedBy", "--train", join(dir, "train.csv"), "--folds", "3", "--learning-curve", "--sizes", "20,40", "--out", out]);
+    const r = await runCli(["assess", "--model", join(dir, "model.json"), "--data", join(dir, "test.csv"), "--target", "gfa", "--by", "limitedBy", "--train", join(dir, "train.csv"), "--folds", "3", "--learning-curve", "--sizes", "20,40", "--out", out]);
     expect(r.err).toBe("");
     expect(r.code).toBe(0);
     expect(r.out).toMatch(/assessed gfa on 40 test rows: RMSE/);
@@ -71,7 +61,7 @@ describe("floorcast assess", () => {
 
   it("uses the GP's closed-form leave-one-out when --train is its training data, and its stored inputs for the domain", async () => {
     const out = join(dir, "loo");
-    const r = await run(["assess", "--model", join(dir, "model.json"), "--data", join(dir, "outside.csv"), "--target", "gfa", "--train", join(dir, "train.csv"), "--out", out]);
+    const r = await runCli(["assess", "--model", join(dir, "model.json"), "--data", join(dir, "outside.csv"), "--target", "gfa", "--train", join(dir, "train.csv"), "--out", out]);
     expect(r.code).toBe(0);
     const report = JSON.parse(await readFile(join(out, "report.json"), "utf8"));
     expect(report.crossValidation.method).toBe("leave-one-out");
@@ -79,7 +69,7 @@ describe("floorcast assess", () => {
     expect(report.crossValidation.metrics.q2).toBeLessThanOrEqual(1);
     expect(report.domain.outsideRows).toContain(5); // frontage 150 is far outside the training range 20–60
     const noTrain = join(dir, "no-train");
-    expect((await run(["assess", "--model", join(dir, "model.json"), "--data", join(dir, "outside.csv"), "--target", "gfa", "--out", noTrain])).code).toBe(0);
+    expect((await runCli(["assess", "--model", join(dir, "model.json"), "--data", join(dir, "outside.csv"), "--target", "gfa", "--out", noTrain])).code).toBe(0);
     const r2 = JSON.parse(await readFile(join(noTrain, "report.json"), "utf8"));
     expect(r2.domain.outsideRows).toContain(5);
     expect(r2.crossValidation).toBeNull();
@@ -87,12 +77,12 @@ describe("floorcast assess", () => {
 
   it("--strict refuses test rows outside the domain, naming them (exit 2, one line, no stack trace)", async () => {
     const out = join(dir, "strict");
-    const r = await run(["assess", "--model", join(dir, "model.json"), "--data", join(dir, "outside.csv"), "--target", "gfa", "--strict", "--out", out]);
+    const r = await runCli(["assess", "--model", join(dir, "model.json"), "--data", join(dir, "outside.csv"), "--target", "gfa", "--strict", "--out", out]);
     expect(r.code).toBe(2);
     expect(r.err).toMatch(/^floorcast: assess: --strict: data rows 6 of outside\.csv \(1 in all\) are outside the model's domain of validity\n$/);
     expect(existsSync(join(out, "report.json"))).toBe(false);
     // The training rows themselves are inside by construction (NN distance 0, within the bounds).
-    expect((await run(["assess", "--model", join(dir, "model.json"), "--data", join(dir, "train.csv"), "--target", "gfa", "--strict", "--out", out])).code).toBe(0);
+    expect((await runCli(["assess", "--model", join(dir, "model.json"), "--data", join(dir, "train.csv"), "--target", "gfa", "--strict", "--out", out])).code).toBe(0);
   });
 
   it("user mistakes exit 2 with one line on stderr", async () => {
@@ -107,13 +97,13 @@ describe("floorcast assess", () => {
       [[...base, "--target", "gfa", "--by", "zone"], /zone/],
     ];
     for (const [args, re] of cases) {
-      const r = await run(args);
+      const r = await runCli(args);
       expect(r.code, args.join(" ")).toBe(2);
       expect(r.err).toMatch(re);
       expect(r.err.trim().split("\n")).toHaveLength(1);
       expect(r.err).not.toMatch(/\bat .*\.js:\d+/);
     }
-    const missing = await run(["assess", "--data", join(dir, "test.csv")]);
+    const missing = await runCli(["assess", "--data", join(dir, "test.csv")]);
     expect(missing.code).toBe(2);
   });
 });

@@ -3,17 +3,8 @@ import { existsSync } from "node:fs";
 import { mkdtemp, readFile, writeFile } from "node:fs/promises";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import { Writable } from "node:stream";
-import { main } from "@floorcast/bench";
+import { runCli } from "./run-cli.js";
 import { fitGaussianProcess } from "@floorcast/surrogate";
-
-async function run(args: string[]): Promise<{ code: number; out: string; err: string }> {
-  let out = "";
-  let err = "";
-  const sink = (f: (s: string) => void) => new Writable({ write: (c, _e, cb) => (f(String(c)), cb()) });
-  const code = await main(["node", "floorcast", ...args], { stdout: sink((s) => (out += s)), stderr: sink((s) => (err += s)) });
-  return { code, out, err };
-}
 
 let dir = "";
 beforeAll(async () => {
@@ -31,7 +22,7 @@ beforeAll(async () => {
 describe("floorcast predict: in_domain column and --strict", () => {
   it("flags each row 1 inside / 0 outside the GP's domain of validity (from its stored training inputs)", async () => {
     const out = join(dir, "pred.csv");
-    const r = await run(["predict", "--model", join(dir, "model.json"), "--data", join(dir, "query.csv"), "--out", out]);
+    const r = await runCli(["predict", "--model", join(dir, "model.json"), "--data", join(dir, "query.csv"), "--out", out]);
     expect(r.code).toBe(0);
     expect(r.out).toMatch(/2 outside the domain of validity/);
     const lines = (await readFile(out, "utf8")).trim().split("\n");
@@ -39,16 +30,16 @@ describe("floorcast predict: in_domain column and --strict", () => {
     expect(lines.slice(1).map((l) => l.split(",")[2])).toEqual(["1", "1", "0", "0"]);
     // The same flags from --train (the same rows).
     const out2 = join(dir, "pred2.csv");
-    expect((await run(["predict", "--model", join(dir, "model.json"), "--data", join(dir, "query.csv"), "--train", join(dir, "train.csv"), "--out", out2])).code).toBe(0);
+    expect((await runCli(["predict", "--model", join(dir, "model.json"), "--data", join(dir, "query.csv"), "--train", join(dir, "train.csv"), "--out", out2])).code).toBe(0);
     expect(await readFile(out2, "utf8")).toBe(await readFile(out, "utf8"));
   });
 
   it("--strict refuses, naming the data rows, and writes nothing", async () => {
     const out = join(dir, "strict.csv");
-    const r = await run(["predict", "--model", join(dir, "model.json"), "--data", join(dir, "query.csv"), "--strict", "--out", out]);
+    const r = await runCli(["predict", "--model", join(dir, "model.json"), "--data", join(dir, "query.csv"), "--strict", "--out", out]);
     expect(r.code).toBe(2);
     expect(r.err).toBe("floorcast: predict: --strict: data rows 3, 4 of query.csv (2 in all) are outside the model's domain of validity\n");
     expect(existsSync(out)).toBe(false);
-    expect((await run(["predict", "--model", join(dir, "model.json"), "--data", join(dir, "train.csv"), "--strict", "--out", out])).code).toBe(0);
+    expect((await runCli(["predict", "--model", join(dir, "model.json"), "--data", join(dir, "train.csv"), "--strict", "--out", out])).code).toBe(0);
   });
 });

@@ -5,9 +5,7 @@ import { centredL2Discrepancy, minPairwiseDistance, readTable } from "@floorcast
 import {
   buildTrustReport,
   buildValidityDomain,
-  checkDomain,
   domainOfModel,
-  DomainError,
   hasLeaveOneOut,
   kFoldCrossValidation,
   learningCurve,
@@ -23,6 +21,7 @@ import {
 import type { CommandContext } from "../command-context.js";
 import { UsageError } from "../usage-error.js";
 import { refitTrainer } from "../assess/refit-trainer.js";
+import { refuseOutsideDomain } from "../refuse-outside-domain.js";
 import { renderTrustHtml } from "../../report/trust-report-html.js";
 import { renderTrustMarkdown } from "../../report/trust-report-markdown.js";
 
@@ -103,15 +102,7 @@ async function runAssess(opts: AssessOptions, ctx: CommandContext): Promise<void
   const domain: ValidityDomain | null = trainData ? buildValidityDomain(inputs, trainData.x) : domainOfModel(model);
   if (opts.strict) {
     if (!domain) throw new UsageError("assess: --strict needs a domain of validity: give --train (this model file stores no training inputs)");
-    try {
-      checkDomain(domain, test.x, { strict: true });
-    } catch (e) {
-      if (e instanceof DomainError) {
-        const rows = e.rows.slice(0, 20).map((i) => i + 1).join(", ");
-        throw new UsageError(`assess: --strict: data rows ${rows}${e.rows.length > 20 ? ", …" : ""} of ${basename(opts.data)} (${e.rows.length} in all) are outside the model's domain of validity`);
-      }
-      throw e;
-    }
+    refuseOutsideDomain("assess", domain, test.x, opts.data, true);
   }
   const design = domain ? { minDistance: minPairwiseDistance(domain.points), centredDiscrepancy: centredL2Discrepancy(domain.points.map((p) => p.map(clamp01))) } : undefined;
 

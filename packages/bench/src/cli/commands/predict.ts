@@ -2,9 +2,10 @@ import type { Command } from "commander";
 import { readFile } from "node:fs/promises";
 import { basename } from "node:path";
 import { createCsvWriter, readTable } from "@floorcast/sampler";
-import { buildValidityDomain, checkDomain, domainOfModel, DomainError, loadSurrogate } from "@floorcast/surrogate";
+import { buildValidityDomain, domainOfModel, loadSurrogate } from "@floorcast/surrogate";
 import type { CommandContext } from "../command-context.js";
 import { UsageError } from "../usage-error.js";
+import { refuseOutsideDomain } from "../refuse-outside-domain.js";
 
 interface PredictOptions {
   model: string;
@@ -52,14 +53,7 @@ async function runPredict(opts: PredictOptions, ctx: CommandContext): Promise<vo
     if (opts.strict) throw new UsageError("predict: --strict needs a domain of validity: give --train (this model file stores no training inputs)");
     ctx.stderr.write("predict: the model stores no training inputs, so in_domain is left empty (give --train to fill it)\n");
   }
-  let flags: boolean[] | null = null;
-  try {
-    flags = domain ? checkDomain(domain, table.x, { strict: opts.strict === true }).rows.map((r) => r.inDomain) : null;
-  } catch (e) {
-    if (!(e instanceof DomainError)) throw e;
-    const rows = e.rows.slice(0, 20).map((i) => i + 1).join(", ");
-    throw new UsageError(`predict: --strict: data rows ${rows}${e.rows.length > 20 ? ", …" : ""} of ${basename(opts.data)} (${e.rows.length} in all) are outside the model's domain of validity`);
-  }
+  const flags = domain ? refuseOutsideDomain("predict", domain, table.x, opts.data, opts.strict === true) : null;
   const p = model.predict(table.x);
   const iv = p.interval;
   const columns = [
