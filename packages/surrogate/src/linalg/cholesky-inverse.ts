@@ -45,49 +45,60 @@ export function choleskyInverseInPlace(l: Float64Array, n: number): Float64Array
       l[rj + i] = -s * inv;
     }
   }
-  // Phase 2, two rows a, a+1 per pass (row b of U streamed once for both).
+  // Phase 2, four rows a..a+3 per pass (row b of U streamed once for all four); the 4 × 4 diagonal block
+  // and the leftover rows use the plain loop.
   let a = 0;
-  for (; a + 1 < n; a += 2) {
-    const ra = a * n;
-    const ra1 = ra + n;
-    const ua = diag[a]!;
-    const ua1 = diag[a + 1]!;
-    const uaa1 = l[ra + a + 1]!;
+  for (; a + 3 < n; a += 4) {
+    const r0 = a * n;
+    const r1 = r0 + n;
+    const r2 = r1 + n;
+    const r3 = r2 + n;
+    const u01 = l[r0 + a + 1]!;
+    const u02 = l[r0 + a + 2]!;
+    const u03 = l[r0 + a + 3]!;
+    const u12 = l[r1 + a + 2]!;
+    const u13 = l[r1 + a + 3]!;
+    const u23 = l[r2 + a + 3]!;
+    const d0 = diag[a]!;
+    const d1 = diag[a + 1]!;
+    const d2 = diag[a + 2]!;
+    const d3 = diag[a + 3]!;
     for (let b = 0; b < a; b++) {
       const rb = b * n;
-      let s1 = ua1 * l[rb + a + 1]!;
-      let s = ua * l[rb + a]! + uaa1 * l[rb + a + 1]!;
-      for (let k = a + 2; k < n; k++) {
+      const v0 = l[rb + a]!;
+      const v1 = l[rb + a + 1]!;
+      const v2 = l[rb + a + 2]!;
+      const v3 = l[rb + a + 3]!;
+      let s0 = d0 * v0 + u01 * v1 + u02 * v2 + u03 * v3;
+      let s1 = d1 * v1 + u12 * v2 + u13 * v3;
+      let s2 = d2 * v2 + u23 * v3;
+      let s3 = d3 * v3;
+      for (let k = a + 4; k < n; k++) {
         const u = l[rb + k]!;
-        s += l[ra + k]! * u;
-        s1 += l[ra1 + k]! * u;
+        s0 += l[r0 + k]! * u;
+        s1 += l[r1 + k]! * u;
+        s2 += l[r2 + k]! * u;
+        s3 += l[r3 + k]! * u;
       }
-      l[ra + b] = s;
-      l[ra1 + b] = s1;
+      l[r0 + b] = s0;
+      l[r1 + b] = s1;
+      l[r2 + b] = s2;
+      l[r3 + b] = s3;
     }
-    let saa = ua * ua + uaa1 * uaa1;
-    let s10 = ua1 * uaa1;
-    let s11 = ua1 * ua1;
-    for (let k = a + 2; k < n; k++) {
-      const u = l[ra + k]!;
-      const u1 = l[ra1 + k]!;
-      saa += u * u;
-      s10 += u1 * u;
-      s11 += u1 * u1;
-    }
-    l[ra + a] = saa;
-    l[ra1 + a] = s10;
-    l[ra1 + a + 1] = s11;
+    for (let q = 0; q < 4; q++) inverseRowTail(l, n, diag, a + q, a);
   }
-  for (; a < n; a++) {
-    const ra = a * n;
-    const ua = diag[a]!;
-    for (let b = 0; b <= a; b++) {
-      const rb = b * n;
-      let s = ua * (b === a ? ua : l[rb + a]!);
-      for (let k = a + 1; k < n; k++) s += l[ra + k]! * l[rb + k]!;
-      l[ra + b] = s;
-    }
-  }
+  for (; a < n; a++) inverseRowTail(l, n, diag, a, 0);
   return l;
+}
+
+/** A⁻¹_ab = Σ_{k≥a} U_ak U_bk for b = from..a (U_xx = diag_x, U_xk = l[x·n + k] for k > x). */
+function inverseRowTail(l: Float64Array, n: number, diag: Float64Array, a: number, from: number): void {
+  const ra = a * n;
+  const ua = diag[a]!;
+  for (let b = from; b <= a; b++) {
+    const rb = b * n;
+    let s = ua * (b === a ? ua : l[rb + a]!);
+    for (let k = a + 1; k < n; k++) s += l[ra + k]! * l[rb + k]!;
+    l[ra + b] = s;
+  }
 }

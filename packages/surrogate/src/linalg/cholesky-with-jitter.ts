@@ -11,53 +11,54 @@ export interface CholeskyFactor {
  * One attempt at A + jitter·I = L Lᵀ, written over the lower triangle of `a` (row-oriented,
  * inner products of contiguous rows; Golub & Van Loan, Matrix Computations, Alg. 4.2.1).
  * The strict upper triangle is only read, so a failed attempt can be restored from it.
- * Rows are processed in pairs so each row j is streamed once per two rows i.
+ * Rows are processed four at a time so each earlier row j is streamed once for all four.
  * @returns true on success, false at a non-positive or non-finite pivot.
  */
 function attempt(a: Float64Array, n: number, diag: Float64Array, jitter: number): boolean {
   let i = 0;
-  for (; i + 1 < n; i += 2) {
-    const ri = i * n;
-    const rk = ri + n;
+  for (; i + 3 < n; i += 4) {
+    const r0 = i * n;
+    const r1 = r0 + n;
+    const r2 = r1 + n;
+    const r3 = r2 + n;
     for (let j = 0; j < i; j++) {
       const rj = j * n;
-      let si = a[ri + j]!;
-      let sk = a[rk + j]!;
+      let s0 = a[r0 + j]!;
+      let s1 = a[r1 + j]!;
+      let s2 = a[r2 + j]!;
+      let s3 = a[r3 + j]!;
       for (let p = 0; p < j; p++) {
-        const ljp = a[rj + p]!;
-        si -= a[ri + p]! * ljp;
-        sk -= a[rk + p]! * ljp;
+        const l = a[rj + p]!;
+        s0 -= a[r0 + p]! * l;
+        s1 -= a[r1 + p]! * l;
+        s2 -= a[r2 + p]! * l;
+        s3 -= a[r3 + p]! * l;
       }
       const ljj = a[rj + j]!;
-      a[ri + j] = si / ljj;
-      a[rk + j] = sk / ljj;
+      a[r0 + j] = s0 / ljj;
+      a[r1 + j] = s1 / ljj;
+      a[r2 + j] = s2 / ljj;
+      a[r3 + j] = s3 / ljj;
     }
-    let dii = diag[i]! + jitter;
-    for (let p = 0; p < i; p++) dii -= a[ri + p]! * a[ri + p]!;
-    if (!(dii > 0) || !Number.isFinite(dii)) return false;
-    const lii = Math.sqrt(dii);
-    a[ri + i] = lii;
-    let ski = a[rk + i]!;
-    for (let p = 0; p < i; p++) ski -= a[rk + p]! * a[ri + p]!;
-    a[rk + i] = ski / lii;
-    let dkk = diag[i + 1]! + jitter;
-    for (let p = 0; p <= i; p++) dkk -= a[rk + p]! * a[rk + p]!;
-    if (!(dkk > 0) || !Number.isFinite(dkk)) return false;
-    a[rk + i + 1] = Math.sqrt(dkk);
+    for (let q = i; q < i + 4; q++) if (!finishRow(a, n, diag, jitter, q, i)) return false;
   }
-  if (i < n) {
-    const ri = i * n;
-    for (let j = 0; j < i; j++) {
-      const rj = j * n;
-      let s = a[ri + j]!;
-      for (let p = 0; p < j; p++) s -= a[ri + p]! * a[rj + p]!;
-      a[ri + j] = s / a[rj + j]!;
-    }
-    let dii = diag[i]! + jitter;
-    for (let p = 0; p < i; p++) dii -= a[ri + p]! * a[ri + p]!;
-    if (!(dii > 0) || !Number.isFinite(dii)) return false;
-    a[ri + i] = Math.sqrt(dii);
+  for (; i < n; i++) if (!finishRow(a, n, diag, jitter, i, 0)) return false;
+  return true;
+}
+
+/** Columns from..i of row i (earlier columns already done), including the pivot. */
+function finishRow(a: Float64Array, n: number, diag: Float64Array, jitter: number, i: number, from: number): boolean {
+  const ri = i * n;
+  for (let j = from; j < i; j++) {
+    const rj = j * n;
+    let s = a[ri + j]!;
+    for (let p = 0; p < j; p++) s -= a[ri + p]! * a[rj + p]!;
+    a[ri + j] = s / a[rj + j]!;
   }
+  let dii = diag[i]! + jitter;
+  for (let p = 0; p < i; p++) dii -= a[ri + p]! * a[ri + p]!;
+  if (!(dii > 0) || !Number.isFinite(dii)) return false;
+  a[ri + i] = Math.sqrt(dii);
   return true;
 }
 
