@@ -4,7 +4,8 @@ A JSON-lines server: each stdin line is one request, each stdout line its reply.
   {"op": "versions"}                                  -> {"sklearn": v, "scipy": v, "numpy": v}
   {"op": "lhs", "n": n, "d": d, "seed": s}             -> {"rows": [[...], ...]}  scipy.stats.qmc.LatinHypercube
   {"op": "fit", "kind": "gp"|"mlp", "x": X, "y": Y,
-   "lower": [...], "upper": [...], "seed": s}          -> {"id": k, "seconds": t}
+   "lower": [...], "upper": [...], "seed": s,
+   "restarts": r}                                     -> {"id": k, "seconds": t}   (r: GP optimiser restarts)
   {"op": "predict", "id": k, "x": X}                  -> {"mean": [[...], ...]}
   {"op": "release", "id": k}                          -> {"ok": true}
 Errors reply {"error": message}. Inputs are scaled to the unit cube by the declared bounds and
@@ -62,7 +63,7 @@ def fit(req):
             kernel = ConstantKernel(1.0, (1e-3, 1e3)) * Matern(
                 length_scale=np.ones(d), length_scale_bounds=(1e-2, 1e2), nu=2.5
             ) + WhiteKernel(1e-4, (1e-8, 1.0))
-            gp = GaussianProcessRegressor(kernel=kernel, n_restarts_optimizer=2, random_state=seed)
+            gp = GaussianProcessRegressor(kernel=kernel, n_restarts_optimizer=int(req.get("restarts", 2)), random_state=seed)
             gp.fit(s.x(x), z[:, j])
             models.append(gp)
         model = ("gp", models, s)

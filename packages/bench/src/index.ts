@@ -53,3 +53,50 @@ export { trustSummaryTables } from "./report/trust-summary-tables.js";
 export type { SummaryTable } from "./report/trust-summary-tables.js";
 export { renderTrustMarkdown } from "./report/trust-report-markdown.js";
 export { renderTrustHtml } from "./report/trust-report-html.js";
+// Problems and the optimum-gap benchmark harness (problem/, harness/)
+export type { BenchProblem, BenchProblemKind, BenchSites } from "./problem/bench-problem.js";
+export { problemFileSchema } from "./problem/problem-file-schema.js";
+export type { ProblemFile } from "./problem/problem-file-schema.js";
+export { ProblemFileError } from "./problem/problem-file-error.js";
+export { parseProblem } from "./problem/parse-problem.js";
+export { loadProblem } from "./problem/load-problem.js";
+export { DEFAULT_PROBLEMS_DIR, loadSuite } from "./problem/load-suite.js";
+export { MASSING_OUTPUTS, massingOutputs } from "./problem/massing-outputs.js";
+export { branin } from "./problem/branin.js";
+export { forrester } from "./problem/forrester.js";
+export { sixHumpCamel } from "./problem/six-hump-camel.js";
+export { averageRanks } from "./harness/average-ranks.js";
+export { spearmanRho } from "./harness/spearman-rho.js";
+export { kendallTau } from "./harness/kendall-tau.js";
+export { topKOverlap } from "./harness/top-k-overlap.js";
+export { optimumGap } from "./harness/optimum-gap.js";
+export { exactEvaluator } from "./harness/exact-evaluator.js";
+export type { CountingEvaluator } from "./harness/exact-evaluator.js";
+export { surrogateEvaluator } from "./harness/surrogate-evaluator.js";
+export type { BatchPredictor } from "./harness/surrogate-evaluator.js";
+export { findExactOptimum } from "./harness/find-exact-optimum.js";
+export type { ExactOptimum } from "./harness/find-exact-optimum.js";
+export { reevaluateSurrogateOptimum } from "./harness/reevaluate-surrogate-optimum.js";
+export type { ReevaluatedOptimum, ReportedSource } from "./harness/reevaluate-surrogate-optimum.js";
+export { runProblem } from "./harness/run-problem.js";
+export type { RunProblemOptions, TrialPlan } from "./harness/run-problem.js";
+export { BENCH_CAUTION, runBench } from "./harness/run-bench.js";
+export type { RunBenchOptions } from "./harness/run-bench.js";
+export { runSuite } from "./harness/run-suite.js";
+export type { RunSuiteOptions } from "./harness/run-suite.js";
+export { benchSettings } from "./harness/bench-settings.js";
+export type { BenchSettings } from "./harness/bench-settings.js";
+export { writeBenchReport } from "./harness/write-bench-report.js";
+export { renderBenchMarkdown } from "./harness/bench-report-markdown.js";
+export { renderBenchHtml } from "./harness/bench-report-html.js";
+export { massingDrawingSpec } from "./harness/massing-drawing-spec.js";
+export type {
+  BenchReport,
+  EvaluationsToTarget,
+  ExactOptimumRecord,
+  GapSummary,
+  ProblemReport,
+  ReportedDesign,
+  SurrogateOptimumRecord,
+  TrialSeconds,
+} from "./harness/bench-report-types.js";

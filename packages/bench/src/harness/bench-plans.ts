@@ -30,7 +30,7 @@ export function benchPlans(
     seeds: settings.seeds,
   }));
   if (peer) {
-    for (const t of peerTrainers(peer, vars)) {
+    for (const t of peerTrainers(peer, vars, quick)) {
       plans.push({ trainer: t, sampler: "lhs-maximin", sizes: settings.peerSizes, seeds: settings.seeds });
     }
     plans.push({

@@ -13,14 +13,15 @@ interface PeerModel extends BatchPredictor {
  * peer server's pipe.
  * @param peer - a running peer server.
  * @param variables - the surrogate's input variables (declared bounds scale the inputs).
+ * @param quick - the demo's cheaper fits: as many GP optimiser starts as floorcast's GP makes (2, else 3).
  */
-export function peerTrainers(peer: PeerProcess, variables: readonly OptimisationVariable[]): BenchTrainer[] {
+export function peerTrainers(peer: PeerProcess, variables: readonly OptimisationVariable[], quick = false): BenchTrainer[] {
   const lower = variables.map((v) => (v.kind === "categorical" ? 0 : v.min));
   const upper = variables.map((v) => (v.kind === "categorical" ? Math.max(1, v.levels.length - 1) : v.max));
   const make = (kind: "gp" | "mlp"): BenchTrainer => ({
     name: `sklearn-${kind}`,
     async fit(data, seed) {
-      const { id } = await peer.request<{ id: number }>({ op: "fit", kind, x: data.x, y: data.y, lower, upper, seed });
+      const { id } = await peer.request<{ id: number }>({ op: "fit", kind, x: data.x, y: data.y, lower, upper, seed, restarts: quick ? 1 : 2 });
       const model: PeerModel = {
         peerId: id,
         targets: data.targets,
