@@ -88,7 +88,7 @@ async function runAssess(opts: AssessOptions, ctx: CommandContext): Promise<void
   try {
     json = JSON.parse(text);
   } catch (e) {
-    throw new UsageError(`assess: ${basename(opts.model)} is not JSON (${(e as Error).message})`);
+    throw new UsageError(`assess: ${basename(opts.model)} is not JSON (${(e as Error).message.replace(/\s+/g, " ")})`);
   }
   const model = loadSurrogate(json, basename(opts.model));
   if (!model.targets.includes(opts.target)) {
