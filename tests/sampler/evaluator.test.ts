@@ -80,6 +80,32 @@ describe("commandEvaluator (JSON Lines to an external program)", () => {
       await e.close();
     }
   });
+  it("processes: N runs N copies; the dataset does not depend on N", async () => {
+    const s = await loadScenario(scenarioPath);
+    const pidProgram = join(dir, "pid-model.mjs");
+    writeFileSync(
+      pidProgram,
+      `import { createInterface } from "node:readline";
+for await (const line of createInterface({ input: process.stdin })) {
+  const x = JSON.parse(line);
+  process.stdout.write(JSON.stringify({ area: x.frontage * x.depth, pid: process.pid }) + "\\n");
+}`,
+    );
+    const one = commandEvaluator(`${node} ${JSON.stringify(pidProgram)}`);
+    const three = commandEvaluator(`${node} ${JSON.stringify(pidProgram)}`, { processes: 3, window: 4 });
+    try {
+      const a = await collect(generateDataset(s, { n: 60, design: "random", seed: 4, evaluator: one }));
+      const b = await collect(generateDataset(s, { n: 60, design: "random", seed: 4, evaluator: three }));
+      expect(b.map((r) => r.area)).toEqual(a.map((r) => r.area));
+      expect(new Set(a.map((r) => r.pid)).size).toBe(1);
+      expect(new Set(b.map((r) => r.pid)).size).toBe(3);
+      expect(three.concurrency).toBe(12);
+    } finally {
+      await one.close();
+      await three.close();
+    }
+    expect(() => commandEvaluator("cat", { processes: 0 })).toThrow(/processes must be an integer ≥ 1/);
+  });
   it("reports a program that dies, quoting its status and stderr", async () => {
     const e = commandEvaluator(`${node} ${JSON.stringify(program)}`);
     await expect(e.evaluate({ frontage: 2, depth: 3 })).resolves.toEqual({ area: 6, perimeter: 10 });

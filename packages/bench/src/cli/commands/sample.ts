@@ -22,6 +22,7 @@ interface SampleOptions {
   resume?: boolean;
   force?: boolean;
   evaluatorCommand?: string;
+  processes?: string;
   out: string;
 }
 
@@ -50,6 +51,7 @@ export function registerSampleCommand(program: Command, ctx: CommandContext): vo
     .option("--resume", "continue an interrupted run from its last complete row")
     .option("--force", "replace an existing output file")
     .option("--evaluator-command <cmd>", "evaluate with an external program speaking JSON Lines on stdin/stdout")
+    .option("--processes <n>", "with --evaluator-command: copies of the program run side by side", "1")
     .requiredOption("--out <file.csv>", "output CSV (manifest written beside it)")
     .action(async (opts: SampleOptions) => {
       const n = wholeNumber("--n", opts.n, 1);
@@ -59,8 +61,12 @@ export function registerSampleCommand(program: Command, ctx: CommandContext): vo
       }
       const shard = opts.shard === undefined ? undefined : parseShard(opts.shard);
       const scenario = await loadScenario(opts.scenario);
+      const processes = wholeNumber("--processes", opts.processes ?? "1", 1);
+      if (processes > 1 && opts.evaluatorCommand === undefined) {
+        throw new UsageError("sample: --processes needs --evaluator-command");
+      }
       const evaluator: Evaluator | undefined =
-        opts.evaluatorCommand === undefined ? undefined : commandEvaluator(opts.evaluatorCommand);
+        opts.evaluatorCommand === undefined ? undefined : commandEvaluator(opts.evaluatorCommand, { processes });
       let bar: ReturnType<typeof createProgressBar> | undefined;
       try {
         const manifest = await writeDataset(scenario, {
