@@ -77,6 +77,11 @@ describe("writeDataset", () => {
     expect(existsSync(`${out}.partial`)).toBe(false);
     expect(existsSync(`${out}.partial.json`)).toBe(false);
   });
+  it("an output folder that does not exist is a RangeError naming it", async () => {
+    await expect(writeDataset(scenario, { out: join(root, "no", "such", "x.csv"), ...run })).rejects.toThrow(
+      /the folder of .*x\.csv does not exist/,
+    );
+  });
   it("an interrupted run leaves only the temporary file; the output name appears when complete", async () => {
     const out = join(fresh(), "all.csv");
     let calls = 0;

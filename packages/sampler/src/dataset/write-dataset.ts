@@ -1,6 +1,6 @@
 import { existsSync } from "node:fs";
 import { readFile, rename, rm, stat, writeFile } from "node:fs/promises";
-import { basename } from "node:path";
+import { basename, dirname } from "node:path";
 import { createCsvWriter, type CsvWriter } from "../csv/create-csv-writer.js";
 import type { DesignKind } from "../design/create-design.js";
 import type { Evaluator, EvaluatorFunction } from "../evaluator/evaluator.js";
@@ -58,6 +58,7 @@ export async function writeDataset(scenario: Scenario, options: WriteDatasetOpti
   if (existsSync(out) && options.force !== true) {
     throw new RangeError(`${fn}: ${out} already exists; use --force (force: true) to replace it`);
   }
+  if (!existsSync(dirname(out))) throw new RangeError(`${fn}: the folder of ${out} does not exist`);
   const shard = options.shard ?? { index: 1, count: 1 };
   const { start, end } = shardRange(options.n, shard);
   const evaluator: Evaluator =
