@@ -107,3 +107,19 @@ describe("floorcast assess", () => {
     expect(missing.code).toBe(2);
   });
 });
+
+describe("floorcast assess refits ensembles and conformal wrappers", () => {
+  it("k-fold cross-validation of a conformal GP file (fitted by floorcast fit) reports interval coverage", async () => {
+    const model = join(dir, "conformal.json");
+    const fit = await runCli(["fit", "--data", join(dir, "train.csv"), "--inputs", "frontage,depth", "--target", "gfa", "--conformal", "0.9", "--out", model]);
+    expect(fit.code, fit.err).toBe(0);
+    const out = join(dir, "conformal-report");
+    const r = await runCli(["assess", "--model", model, "--data", join(dir, "test.csv"), "--target", "gfa", "--train", join(dir, "train.csv"), "--folds", "3", "--out", out]);
+    expect(r.code, r.err).toBe(0);
+    const report = JSON.parse(await readFile(join(out, "report.json"), "utf8"));
+    expect(report.model.kind).toBe("conformal");
+    expect(report.crossValidation.method).toBe("k-fold");
+    expect(report.intervalCoverage.nominal).toBe(0.9);
+    expect(report.intervalCoverage.n).toBe(40);
+  });
+});
