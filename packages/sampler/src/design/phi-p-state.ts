@@ -4,8 +4,8 @@
  * Distances are measured in units of 1/n (a stratum width), so for Latin designs the terms stay in range;
  * φp itself is (S)^(1/p) / n.
  *
- * Squared distances are stored in an n×n matrix up to `MATRIX_LIMIT` points and recomputed from the
- * coordinates (O(n·d) per exchange, still linear in n) above it.
+ * Squared distances and terms are stored in n×n matrices up to `matrixLimit` points (default 3,000) and
+ * recomputed from the coordinates (O(n·d) per exchange, still linear in n) above it.
  */
 export class PhiPState {
   /** Points in units of 1/n, column-major: x[k·n + i]. */
@@ -22,6 +22,7 @@ export class PhiPState {
     points: readonly (readonly number[])[],
     readonly dims: number,
     readonly p: number,
+    matrixLimit = MATRIX_LIMIT,
   ) {
     const n = points.length;
     this.n = n;
@@ -30,7 +31,7 @@ export class PhiPState {
     this.half = p / 2;
     this.intHalf = Number.isInteger(this.half) && this.half > 0 && this.half <= 64;
     this.scratch = [new Float64Array(2 * n), new Float64Array(2 * n)];
-    const keep = n <= MATRIX_LIMIT;
+    const keep = n <= matrixLimit;
     this.d2 = keep ? new Float64Array(n * n) : undefined;
     this.tm = keep ? new Float64Array(n * n) : undefined;
     this.sum = 0;
@@ -38,6 +39,11 @@ export class PhiPState {
   }
 
   readonly n: number;
+
+  /** The current sum S (in stratum units). */
+  get total(): number {
+    return this.sum;
+  }
 
   /** φp of the current design in unit-cube distances. */
   phi(sum = this.sum): number {
@@ -140,7 +146,11 @@ export class PhiPState {
     return this.sum + delta;
   }
 
-  /** Exchanges column k of rows a and b and sets S to `newSum` (from sumAfterExchange). O(n). */
+  /**
+   * Exchanges column k of rows a and b and sets S to `newSum` (from sumAfterExchange). O(n).
+   * Note: a candidate sum S + Δ carries an absolute error of about n·ε·S, so when S + Δ ≪ S its relative
+   * error grows as S / (S + Δ); ranking candidates is unaffected, and the re-sum below restores accuracy.
+   */
   exchange(a: number, b: number, k: number, newSum: number): void {
     const n = this.n;
     const col = this.x.subarray(k * n, (k + 1) * n);
@@ -170,7 +180,11 @@ export class PhiPState {
     }
     col[a] = xb;
     col[b] = xa;
+    // A large drop (the closest pair broken up) leaves S with the absolute rounding error of the old, larger
+    // sum: re-sum then (rare, O(n²)), so the current S stays accurate to float64 rounding.
+    const drop = newSum < this.sum * 1e-3;
     this.sum = newSum;
+    if (drop) this.resum();
   }
 
   /** A copy of the current coordinates (stratum units, column-major), for points(). */
