@@ -122,4 +122,17 @@ describe("floorcast assess refits ensembles and conformal wrappers", () => {
     expect(report.intervalCoverage.nominal).toBe(0.9);
     expect(report.intervalCoverage.n).toBe(40);
   });
+
+  it("k-fold cross-validation of an MLP file (refitted per fold); the early-stopping epoch reaches the diagnostics", async () => {
+    const model = join(dir, "mlp.json");
+    const fit = await runCli(["fit", "--data", join(dir, "train.csv"), "--inputs", "frontage,depth", "--target", "gfa", "--model", "nn", "--epochs", "20", "--out", model]);
+    expect(fit.code, fit.err).toBe(0);
+    const out = join(dir, "mlp-report");
+    const r = await runCli(["assess", "--model", model, "--data", join(dir, "test.csv"), "--target", "gfa", "--train", join(dir, "train.csv"), "--folds", "2", "--out", out]);
+    expect(r.code, r.err).toBe(0);
+    const report = JSON.parse(await readFile(join(out, "report.json"), "utf8"));
+    expect(report.crossValidation.folds).toBe(2);
+    expect(report.calibration).toBeNull(); // a single MLP gives no sd
+    expect(report.diagnostics.earlyStoppingEpoch).toEqual([{ path: "training.bestEpoch", value: expect.any(Number) }]);
+  });
 });

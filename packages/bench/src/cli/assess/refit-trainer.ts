@@ -6,7 +6,7 @@ type FileLike = { modelType?: string; payload?: Record<string, unknown>; trainin
 /**
  * A trainer that refits a model of the same family and settings as a model file, for cross-validation
  * and learning curves: a GP with the file's kernel and ARD choice; an MLP with the file's hidden layer
- * widths and activation (other training options at their defaults); an ensemble with as many members,
+ * widths, activation and the epochs, batch size, learning rate and L2 its training summary records; an ensemble with as many members,
  * each refitted like its first member; a split-conformal wrapper with the same coverage, score and
  * calibration fraction around a base refitted like its own.
  * @param file - the parsed model file.
@@ -22,9 +22,15 @@ export function refitTrainer(file: unknown, fileName: string): SurrogateTrainer 
   if (f.modelType === "mlp") {
     const p = f.payload as { activation: "relu" | "tanh" | "elu"; layers: { shape: [number, number] }[] };
     const hidden = p.layers.slice(0, -1).map((l) => l.shape[1]);
+    // Training settings the file records (fit-mlp's training summary); absent ones take fitMlp's defaults.
+    const recorded: Record<string, number> = {};
+    for (const key of ["epochs", "batchSize", "learningRate", "l2"] as const) {
+      const v = f.training?.[key];
+      if (typeof v === "number") recorded[key] = v;
+    }
     return async (data, seed) => {
       const { fitMlp } = await import("@floorcast/surrogate/nn");
-      return fitMlp(data, { layers: hidden, activation: p.activation, seed });
+      return fitMlp(data, { ...recorded, layers: hidden, activation: p.activation, seed });
     };
   }
   if (f.modelType === "ensemble") {
