@@ -5,7 +5,8 @@ stdin JSON: {"xTrain": [[...]], "yTrain": [[...]], "xTest": [[...]], "yTest": [[
              "batchSize": 32, "maxIter": 300, "patience": 30, "validationFraction": 0.15, "seed": 0}
 Inputs are min-max scaled to [-1, 1] and targets standardised on the training rows, as floorcast's
 MLP does, so both networks see the same problem. Early stopping on a validation split.
-stdout JSON: {"predictions": [[...]], "rmse": [...], "fitSeconds": s, "nIter": k, "sklearn": version}
+stdout JSON: {"predictions": [[...]], "rmse": [...], "fitSeconds": wall s, "fitCpuSeconds": CPU s, "nIter": k,
+             "sklearn": version}
 """
 import json
 import sys
@@ -41,11 +42,13 @@ model = MLPRegressor(
     random_state=req.get("seed", 0),
 )
 t0 = time.perf_counter()
+c0 = time.process_time()
 model.fit(xs.transform(x_train), ys.transform(y_train) if y_train.shape[1] > 1 else ys.transform(y_train).ravel())
 fit_seconds = time.perf_counter() - t0
+fit_cpu_seconds = time.process_time() - c0
 pred = model.predict(xs.transform(x_test)).reshape(len(x_test), -1)
 pred = ys.inverse_transform(pred)
-out = {"predictions": pred.tolist(), "fitSeconds": fit_seconds, "nIter": int(model.n_iter_), "sklearn": sklearn.__version__}
+out = {"predictions": pred.tolist(), "fitSeconds": fit_seconds, "fitCpuSeconds": fit_cpu_seconds, "nIter": int(model.n_iter_), "sklearn": sklearn.__version__}
 if y_test is not None:
     out["rmse"] = np.sqrt(np.mean((pred - y_test) ** 2, axis=0)).tolist()
 json.dump(out, sys.stdout)

@@ -3,7 +3,7 @@ import * as tf from "@tensorflow/tfjs";
 import fc from "fast-check";
 import seedrandom from "seedrandom";
 import { fitMlp, mlpTrainer, useNnBackend } from "@floorcast/surrogate/nn";
-import { loadPredictor } from "@floorcast/surrogate/predict";
+import { createMlpPredictor, loadPredictor } from "@floorcast/surrogate/predict";
 
 /** A smooth 3-input, 2-target test map (derived; any smooth map serves). */
 function toyData(n: number, seed: string) {
@@ -86,11 +86,14 @@ describe("fitMlp", () => {
         up[k]! += h;
         dn[k]! -= h;
         const [pu, pd] = p.predict([up, dn]).mean;
+        const backprop = createMlpPredictor(m.toJSON()).gradient(x);
         for (let j = 0; j < 2; j++) {
           const fd = (pu![j]! - pd![j]!) / (2 * h);
           const scale = m.toJSON().outputScaling.std[j]! / spans[k]!;
           // float32 autodiff vs float64 differences: 1e-4 of the target sd per input span (common practice).
           expect(Math.abs(g[j]![k]! - fd)).toBeLessThan(1e-4 * scale + 1e-4 * Math.abs(fd));
+          // Float64 back-propagation of the file against the same differences (h² truncation: 1e-6).
+          expect(Math.abs(backprop[j]![k]! - fd)).toBeLessThan(1e-6 * scale + 1e-6 * Math.abs(fd));
         }
       }
     }

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { MlpSurrogate, useNnBackend, type MlpModelFile } from "@floorcast/surrogate/nn";
-import { loadPredictor } from "@floorcast/surrogate/predict";
+import { createMlpPredictor, loadPredictor } from "@floorcast/surrogate/predict";
 import { loadSurrogate } from "@floorcast/surrogate";
 
 /**
@@ -67,6 +67,14 @@ describe("hand-set 2-2-1 network reproduces the worked example", () => {
       const tanh = load(file("tanh"));
       expect(Math.abs(tanh.predict([[5, 3]]).mean[0]![0]! - 96.69378142325104)).toBeLessThan(1e-10);
     }
+    // Float64 back-propagation of the loaded file: the hand-worked gradients.
+    const g = (loadSurrogate(file("relu")) as unknown as { gradient(x: number[]): number[][] }).gradient([5, 3]);
+    expect(g[0]![0]).toBeCloseTo(12, 12);
+    expect(g[0]![1]).toBeCloseTo(-10, 12);
+    const gt = createMlpPredictor(file("tanh")).gradient([5, 3]);
+    expect(gt[0]![0]).toBeCloseTo(8.242945346145618, 12);
+    expect(gt[0]![1]).toBeCloseTo(5.786015709590808, 12);
+    expect(() => createMlpPredictor(file("tanh")).gradient([5, Number.NaN])).toThrow(/x\[0\]\[1\]/);
   });
 
   it("a zero-width input bound maps that input to 0 (documented in mlp-payload.ts)", () => {

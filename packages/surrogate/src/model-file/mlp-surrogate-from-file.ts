@@ -35,6 +35,15 @@ export class MlpFileSurrogate implements Surrogate {
     return { mean: this.#predictor.predict(x).mean };
   }
 
+  /**
+   * Gradient of every target with respect to every input at one row (targets × inputs, original
+   * units), by back-propagation in Float64 (no tfjs).
+   * @throws RangeError naming the column of a non-finite value.
+   */
+  gradient(x: readonly number[]): number[][] {
+    return this.#predictor.gradient(x);
+  }
+
   /** The model file it was loaded from. */
   toJSON(): MlpModelFileParsed {
     return this.#file;

@@ -14,6 +14,12 @@ export interface MlpPredictor extends Predictor {
    * original units), without allocating. Inputs are not checked.
    */
   predictInto(x: Float64Array, rows: number, out: Float64Array): void;
+  /**
+   * Gradient of every target with respect to every input at one row, in original units (targets ×
+   * inputs), by back-propagation through the layers (chain rule through both scalings).
+   * @throws RangeError naming the column of a non-finite value.
+   */
+  gradient(x: readonly number[]): number[][];
 }
 
 /**
@@ -92,8 +98,49 @@ export function createMlpPredictor(file: ModelFileShape): MlpPredictor {
     }
   }
 
+  function gradient(x: readonly number[]): number[][] {
+    const z = packRows("gradient", [x as number[]], nIn);
+    for (let j = 0; j < nIn; j++) z[j] = scale[j]! * z[j]! + shift[j]!;
+    // Forward pass keeping every layer's pre-activation.
+    const pre: Float64Array[] = [];
+    let h = z;
+    for (let l = 0; l < nLayers; l++) {
+      const a = new Float64Array(dims[l + 1]!);
+      denseLayer(h, 1, dims[l]!, wts[l]!, biases[l]!, dims[l + 1]!, a, 0);
+      pre.push(a);
+      h = l === nLayers - 1 ? a : a.map((v) => (act === 1 ? (v > 0 ? v : 0) : act === 2 ? Math.tanh(v) : v > 0 ? v : Math.expm1(v)));
+    }
+    const grads: number[][] = [];
+    for (let t = 0; t < nOut; t++) {
+      let g: Float64Array = new Float64Array(nOut);
+      g[t] = yStd[t]!;
+      for (let l = nLayers - 1; l >= 0; l--) {
+        const din = dims[l]!;
+        const dout = dims[l + 1]!;
+        const back = new Float64Array(din);
+        const wt = wts[l]!;
+        for (let j = 0; j < dout; j++) {
+          const gj = g[j]!;
+          if (gj === 0) continue;
+          for (let k = 0; k < din; k++) back[k]! += gj * wt[j * din + k]!;
+        }
+        if (l > 0) {
+          const a = pre[l - 1]!;
+          for (let k = 0; k < din; k++) {
+            const v = a[k]!;
+            back[k]! *= act === 1 ? (v > 0 ? 1 : 0) : act === 2 ? 1 - Math.tanh(v) ** 2 : v > 0 ? 1 : Math.exp(v);
+          }
+        }
+        g = back;
+      }
+      grads.push(Array.from(g, (v, k) => v * scale[k]!));
+    }
+    return grads;
+  }
+
   return {
     modelType: "mlp",
+    gradient,
     inputs: [...file.inputs],
     targets: [...file.targets],
     predictInto,
