@@ -73,6 +73,13 @@ describe("floorcast assess", () => {
     const r2 = JSON.parse(await readFile(join(noTrain, "report.json"), "utf8"));
     expect(r2.domain.outsideRows).toContain(5);
     expect(r2.crossValidation).toBeNull();
+    expect(r2.notes.join(" ")).toMatch(/Cross-validation not run/);
+    // A --train file that is not the GP's own training data: LOO is skipped with a note.
+    const other = join(dir, "other-train");
+    expect((await runCli(["assess", "--model", join(dir, "model.json"), "--data", join(dir, "outside.csv"), "--target", "gfa", "--train", join(dir, "test.csv"), "--out", other])).code).toBe(0);
+    const r3 = JSON.parse(await readFile(join(other, "report.json"), "utf8"));
+    expect(r3.crossValidation).toBeNull();
+    expect(r3.notes.join(" ")).toMatch(/Leave-one-out skipped: test\.csv is not the model's own training data/);
   });
 
   it("--strict refuses test rows outside the domain, naming them (exit 2, one line, no stack trace)", async () => {

@@ -82,6 +82,7 @@ const CAUTION =
  * @param args.domain - validity domain; when absent, the model's own (if it carries one).
  * @param args.design - training design quality (min distance, centred discrepancy) for the diagnostics.
  * @param args.sources - file names for the record.
+ * @param args.notes - the caller's remarks, placed first in `notes`.
  * @returns the report and the figure data.
  */
 export function buildTrustReport(args: {
@@ -96,6 +97,7 @@ export function buildTrustReport(args: {
   domain?: ValidityDomain | null;
   design?: { minDistance?: number | null; centredDiscrepancy?: number | null };
   sources?: { model?: string; data?: string };
+  notes?: readonly string[];
 }): { report: TrustReport; figures: TrustFigureData } {
   const fn = "buildTrustReport";
   const { model, target } = args;
@@ -105,7 +107,7 @@ export function buildTrustReport(args: {
   checkMatrix(fn, "x", args.x, model.inputs.length);
   const y = checkVector(fn, "y", args.y, args.x.length);
   if (y.length === 0) throw new RangeError(`${fn}: the test set must have at least one row`);
-  const notes: string[] = [];
+  const notes: string[] = [...(args.notes ?? [])];
   const pred = model.predict(args.x);
   const mean = pred.mean.map((r) => r[j]!);
   const bad = mean.findIndex((v) => !Number.isFinite(v));

@@ -106,11 +106,15 @@ async function runAssess(opts: AssessOptions, ctx: CommandContext): Promise<void
   }
   const design = domain ? { minDistance: minPairwiseDistance(domain.points), centredDiscrepancy: centredL2Discrepancy(domain.points.map((p) => p.map(clamp01))) } : undefined;
 
+  const notes: string[] = [];
   let crossValidation: CrossValidationResult | null = null;
   if (trainData && folds !== undefined) {
     crossValidation = await kFoldCrossValidation(refitTrainer(json, basename(opts.model)), trainData, { folds, seed });
-  } else if (trainData && hasLeaveOneOut(model) && sameTrainingRows(model, trainData, domain)) {
-    crossValidation = leaveOneOutValidation(model, trainData);
+  } else if (trainData && hasLeaveOneOut(model)) {
+    if (sameTrainingRows(model, trainData, domain)) crossValidation = leaveOneOutValidation(model, trainData);
+    else notes.push(`Leave-one-out skipped: ${basename(opts.train!)} is not the model's own training data in its order (use --folds for k-fold).`);
+  } else if (!trainData) {
+    notes.push("Cross-validation not run: give the training data (--train) for leave-one-out (GP) or --folds.");
   }
   let curve: LearningCurve | null = null;
   if (trainData && opts.learningCurve) {
@@ -129,6 +133,7 @@ async function runAssess(opts: AssessOptions, ctx: CommandContext): Promise<void
     domain,
     ...(design ? { design } : {}),
     sources: { model: basename(opts.model), data: basename(opts.data) },
+    notes,
   });
   await mkdir(opts.out, { recursive: true });
   await writeFile(join(opts.out, "report.json"), JSON.stringify(report, null, 2) + "\n");
