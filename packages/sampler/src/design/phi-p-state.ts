@@ -52,10 +52,10 @@ export class PhiPState {
 
   /**
    * Re-sums S from the stored terms (O(n²), no distances), removing the drift of many incremental
-   * updates; without matrices, the same as recompute().
+   * updates; without matrices it does nothing (call recompute(), O(n²·d), now and then instead).
    */
   resum(): number {
-    if (this.tm === undefined) return this.recompute();
+    if (this.tm === undefined) return this.sum;
     const n = this.n;
     const t = this.tm;
     let s = 0;
@@ -181,10 +181,13 @@ export class PhiPState {
     col[a] = xb;
     col[b] = xa;
     // A large drop (the closest pair broken up) leaves S with the absolute rounding error of the old, larger
-    // sum: re-sum then (rare, O(n²)), so the current S stays accurate to float64 rounding.
+    // sum: re-sum then (rare; O(n²), or O(n²·d) without matrices), so the current S stays accurate.
     const drop = newSum < this.sum * 1e-3;
     this.sum = newSum;
-    if (drop) this.resum();
+    if (drop) {
+      if (this.tm !== undefined) this.resum();
+      else this.recompute();
+    }
   }
 
   /** A copy of the current coordinates (stratum units, column-major), for points(). */
