@@ -61,6 +61,15 @@ describe("the harness never reports an exactly infeasible design as optimal", ()
     expect(r.exact!.feasible).toBe(true);
     expect(r.evaluations).toBe(6); // first choice, then the other five
   });
+  it("the ranked list skips near-copies of a design already on it", async () => {
+    // twenty near-copies of the infeasible 0.8 (within 0.02 of each other), then 0.49 further down
+    const searched = [...Array.from({ length: 20 }, (_, i) => 0.8 - i * 0.0005), 0.49].map(surrogateScore);
+    const r = await reevaluateSurrogateOptimum(problem, searched, exact);
+    expect(r.exact!.design.x).toBe(0.49);
+    expect(r.evaluations).toBe(2);
+    const plain = await reevaluateSurrogateOptimum(problem, searched, exact, [], 10, 0);
+    expect(plain.exact).toBeNull(); // without the spacing the list is ten copies of one infeasible point
+  });
   it("falls back to the training set when the whole list is infeasible, and to nothing when that is too", async () => {
     const searched = [0.9, 0.8].map(surrogateScore);
     const training = [0.2, 0.4, 0.7].map((x) => scoreOutputs(problem, { x }, exactOutputs({ x })));

@@ -16,7 +16,17 @@ export interface ReevaluatedOptimum {
   readonly evaluations: number;
 }
 
-const key = (e: EvaluatedDesign): string => JSON.stringify(e.design);
+/** Distance of two designs in the unit cube of the problem's variables (a categorical counts 0 or 1). */
+function unitDistance(problem: OptimisationProblem, a: EvaluatedDesign, b: EvaluatedDesign): number {
+  let s = 0;
+  for (const v of problem.variables) {
+    const x = a.design[v.name];
+    const y = b.design[v.name];
+    if (v.kind === "categorical") s += x === y ? 0 : 1;
+    else s += (((x as number) - (y as number)) / (v.max - v.min || 1)) ** 2;
+  }
+  return Math.sqrt(s);
+}
 
 /**
  * The harness's rule: every design reported as an optimum is re-evaluated exactly, and an exactly
@@ -24,12 +34,14 @@ const key = (e: EvaluatedDesign): string => JSON.stringify(e.design);
  * infeasible, the next `listLength − 1` distinct designs of the surrogate search (ranked by the
  * surrogate with Deb's feasibility rules) are evaluated and the best exactly-feasible one is
  * reported; failing that, the best exactly-feasible design of `fallback` (already exact, e.g. the
- * training set) is; failing that, nothing is.
+ * training set) is; failing that, nothing is. The list skips designs within `minDistance` (unit-cube
+ * distance) of one already on it, so it is not ten copies of one infeasible point.
  * @param problem - single-objective problem (the first objective ranks).
  * @param searched - the surrogate search's evaluated designs (history or final population), surrogate-scored.
  * @param exact - the exact evaluator.
  * @param fallback - exactly evaluated designs to fall back on.
  * @param listLength - length of the ranked list tried (default 10).
+ * @param minDistance - least unit-cube distance between listed designs (default 0.02).
  */
 export async function reevaluateSurrogateOptimum(
   problem: OptimisationProblem,
@@ -37,13 +49,11 @@ export async function reevaluateSurrogateOptimum(
   exact: Evaluator,
   fallback: readonly EvaluatedDesign[] = [],
   listLength = 10,
+  minDistance = 0.02,
 ): Promise<ReevaluatedOptimum> {
   const ranked: EvaluatedDesign[] = [];
-  const seen = new Set<string>();
   for (const e of [...searched].filter((e) => e.valid).sort((a, b) => compareFeasibility(problem, a, b))) {
-    const k = key(e);
-    if (seen.has(k)) continue;
-    seen.add(k);
+    if (ranked.some((r) => unitDistance(problem, r, e) < minDistance)) continue;
     ranked.push(e);
     if (ranked.length >= listLength) break;
   }

@@ -63,7 +63,7 @@ export async function runSiteTrial(
   const optimise = (performance.now() - t0) / 1000;
   const t1 = performance.now();
   // the surrogate's ranked list of sites, each at its surrogate-best design
-  const chosen = await reevaluateSurrogateOptimum(op, perSite, exactEvaluator(problem), train.designs);
+  const chosen = await reevaluateSurrogateOptimum(op, perSite, exactEvaluator(problem), train.designs, 10, 0);
   const reevaluate = (performance.now() - t1) / 1000;
   const reported = chosen.exact ? reportDesign(problem, chosen.exact) : null;
   const sense = op.objectives[0]!.sense;
