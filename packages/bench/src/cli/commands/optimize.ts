@@ -1,6 +1,7 @@
 import { mkdir, readFile, writeFile } from "node:fs/promises";
 import { join } from "node:path";
 import type { Command } from "commander";
+import cliProgress from "cli-progress";
 import { loadSurrogate } from "@floorcast/surrogate";
 import type { CommandContext } from "../command-context.js";
 import { UsageError } from "../usage-error.js";
@@ -74,7 +75,20 @@ export function registerOptimizeCommand(program: Command, ctx: CommandContext): 
         evaluator = surrogateEvaluator(model, problem.trainingVariables);
       }
       const t0 = performance.now();
-      const result = await runOptimizer(name, problem.optimisation, evaluator, { seed, budget, gridPoints: problem.exact.gridPoints });
+      const tty = (ctx.stderr as { isTTY?: boolean }).isTTY === true;
+      const bar = tty ? new cliProgress.SingleBar({ stream: ctx.stderr as NodeJS.WriteStream, format: `${name} [{bar}] {value}/{total} evaluations`, fps: 5 }, cliProgress.Presets.shades_classic) : null;
+      let started = false;
+      const result = await runOptimizer(name, problem.optimisation, evaluator, {
+        seed,
+        budget,
+        gridPoints: problem.exact.gridPoints,
+        onProgress: (done, total) => {
+          if (bar && !started) bar.start(Number.isFinite(total) ? total : budget, 0);
+          started = true;
+          bar?.update(done);
+        },
+      });
+      bar?.stop();
       const seconds = (performance.now() - t0) / 1000;
       const op = problem.optimisation;
       let designs;
