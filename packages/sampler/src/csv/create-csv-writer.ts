@@ -48,7 +48,7 @@ export function createCsvWriter(
   if (new Set(columns).size !== columns.length) throw new RangeError("createCsvWriter: columns must be unique");
   const names = [...columns];
   const sink: Writable =
-    typeof target === "string" ? createWriteStream(target, { flags: options.append === true ? "a" : "w" }) : target;
+    typeof target === "string" ? createWriteStream(target, { flags: options.append === true ? "a" : "w", highWaterMark: 1 << 20 }) : target;
   const stringifier = stringify({ record_delimiter: "unix", quoted_match: /\r/ });
   const done = pipeline(stringifier, sink);
   let failure: unknown;

