@@ -5,7 +5,7 @@ A JSON-lines server: each stdin line is one request, each stdout line its reply.
   {"op": "lhs", "n": n, "d": d, "seed": s}             -> {"rows": [[...], ...]}  scipy.stats.qmc.LatinHypercube
   {"op": "fit", "kind": "gp"|"mlp", "x": X, "y": Y,
    "lower": [...], "upper": [...], "seed": s,
-   "restarts": r}                                     -> {"id": k, "seconds": t}   (r: GP optimiser restarts)
+   "restarts": r, "maxIter": m}                       -> {"id": k, "seconds": t}   (GP optimiser restarts, MLP epochs)
   {"op": "predict", "id": k, "x": X}                  -> {"mean": [[...], ...]}
   {"op": "release", "id": k}                          -> {"ok": true}
 Errors reply {"error": message}. Inputs are scaled to the unit cube by the declared bounds and
@@ -68,8 +68,8 @@ def fit(req):
             models.append(gp)
         model = ("gp", models, s)
     else:
-        mlp = MLPRegressor(hidden_layer_sizes=(64, 64), max_iter=2000, learning_rate_init=0.003,
-                           random_state=seed, tol=1e-6, n_iter_no_change=50)
+        mlp = MLPRegressor(hidden_layer_sizes=(64, 64), max_iter=int(req.get("maxIter", 2000)),
+                           learning_rate_init=0.003, random_state=seed, tol=1e-6, n_iter_no_change=50)
         mlp.fit(s.x(x), z)
         model = ("mlp", mlp, s)
     seconds = time.perf_counter() - t0

@@ -13,7 +13,8 @@ interface PeerModel extends BatchPredictor {
  * peer server's pipe.
  * @param peer - a running peer server.
  * @param variables - the surrogate's input variables (declared bounds scale the inputs).
- * @param quick - the demo's cheaper fits: as many GP optimiser starts as floorcast's GP makes (2, else 3).
+ * @param quick - the demo's cheaper fits: as many GP optimiser starts as floorcast's GP makes (2, else 3),
+ *   and at most 500 MLP epochs (else 2000).
  */
 export function peerTrainers(peer: PeerProcess, variables: readonly OptimisationVariable[], quick = false): BenchTrainer[] {
   const lower = variables.map((v) => (v.kind === "categorical" ? 0 : v.min));
@@ -21,7 +22,7 @@ export function peerTrainers(peer: PeerProcess, variables: readonly Optimisation
   const make = (kind: "gp" | "mlp"): BenchTrainer => ({
     name: `sklearn-${kind}`,
     async fit(data, seed) {
-      const { id } = await peer.request<{ id: number }>({ op: "fit", kind, x: data.x, y: data.y, lower, upper, seed, restarts: quick ? 1 : 2 });
+      const { id } = await peer.request<{ id: number }>({ op: "fit", kind, x: data.x, y: data.y, lower, upper, seed, restarts: quick ? 1 : 2, maxIter: quick ? 500 : 2000 });
       const model: PeerModel = {
         peerId: id,
         targets: data.targets,

@@ -36,8 +36,10 @@ export async function trainForTrial(
   },
 ): Promise<TrainedTrial> {
   const key = `${setup.sampler ?? "lhs-maximin"}|${setup.trainingSize}|${setup.seed}`;
-  const train = setup.cache?.get(key) ?? sampleTrainingSet(problem, setup.trainingSize, `train-${setup.seed}`, setup.unitRows);
-  setup.cache?.set(key, train);
+  const cached = setup.cache?.get(key);
+  // a training set shared with an earlier trial costs this one no sampling time
+  const train = cached ? { ...cached, seconds: 0 } : sampleTrainingSet(problem, setup.trainingSize, `train-${setup.seed}`, setup.unitRows);
+  if (!cached) setup.cache?.set(key, train);
   const t0 = performance.now();
   const model = await setup.trainer.fit(
     { inputs: train.inputs, targets: train.targets, x: train.x, y: train.y },
