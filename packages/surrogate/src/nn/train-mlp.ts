@@ -65,7 +65,10 @@ export function trainMlp(
     })),
   );
   const flat = vars.flatMap((v) => [v.w, v.b]) as tf.Variable[];
-  const moments = tf.tidy(() => flat.map((v) => ({ m: tf.variable(tf.zerosLike(v)), v: tf.variable(tf.zerosLike(v)) })));
+  // Adam's moments for all parameters in two flat variables: a dozen tensor ops per step instead of a dozen per parameter.
+  const sizes = flat.map((v) => v.size);
+  const total = sizes.reduce((a, b) => a + b, 0);
+  const moments = tf.tidy(() => ({ m: tf.variable(tf.zeros([total])), v: tf.variable(tf.zeros([total])) }));
   // Mean squared error + (l2 / rows) Σ W², i.e. scikit-learn's ½ MSE + α/(2·rows) Σ W² doubled (same minimiser).
   const loss = (x: tf.Tensor2D, y: tf.Tensor2D, rows: number): tf.Scalar => {
     const mse = tf.mean(tf.squaredDifference(mlpForward(x, vars, o.activation), y)) as tf.Scalar;
@@ -92,13 +95,11 @@ export function trainMlp(
           const xb = tf.tensor2d(gather(trainIdx, start, rows, zx, d), [rows, d]);
           const yb = tf.tensor2d(gather(trainIdx, start, rows, zy, t), [rows, t]);
           const { grads } = tf.variableGrads(() => loss(xb, yb, rows), flat);
-          flat.forEach((p, i) => {
-            const g = grads[p.name]!;
-            const mo = moments[i]!;
-            mo.m.assign(tf.add(tf.mul(BETA1, mo.m), tf.mul(1 - BETA1, g)));
-            mo.v.assign(tf.add(tf.mul(BETA2, mo.v), tf.mul(1 - BETA2, tf.square(g))));
-            p.assign(tf.sub(p, tf.mul(lrT, tf.div(mo.m, tf.add(tf.sqrt(mo.v), EPS)))));
-          });
+          const g = tf.concat(flat.map((p) => tf.reshape(grads[p.name]!, [-1])));
+          moments.m.assign(tf.add(tf.mul(BETA1, moments.m), tf.mul(1 - BETA1, g)));
+          moments.v.assign(tf.add(tf.mul(BETA2, moments.v), tf.mul(1 - BETA2, tf.square(g))));
+          const step = tf.split(tf.mul(lrT, tf.div(moments.m, tf.add(tf.sqrt(moments.v), EPS))), sizes);
+          flat.forEach((p, i) => p.assign(tf.sub(p, tf.reshape(step[i]!, p.shape))));
         });
       }
       const checkLoss = tf.tidy(() => tf.mean(tf.squaredDifference(mlpForward(xCheck, vars, o.activation), yCheck)).dataSync()[0]!);
@@ -120,7 +121,7 @@ export function trainMlp(
       if (nVal > 0 && sinceBest >= o.patience) break;
     }
   } finally {
-    tf.dispose([xCheck, yCheck, ...flat, ...moments.flatMap((m) => [m.m, m.v])]);
+    tf.dispose([xCheck, yCheck, ...flat, moments.m, moments.v]);
   }
   if (!Number.isFinite(best)) throw new RangeError("fitMlp: training diverged (loss is not finite); lower options.learningRate");
   return {
