@@ -56,6 +56,22 @@ describe("mapUnitToSpace", () => {
     expect(single.map((r) => r.storeys)).toEqual([6, 6]); // not Latin (both in one stratum): ⌊0.99·5⌋ = 4 → 6
   });
 
+  it("maps a single row (always Latin) by its own coordinate: ⌊x·L⌋", () => {
+    const levelOf = (x: number) => (mapUnitToSpace({ parameters: [storeys, use] }, [[x, x]])[0] as Record<string, number | string>);
+    expect(levelOf(0.1)).toEqual({ storeys: 2, use: "residential" });
+    expect(levelOf(0.5)).toEqual({ storeys: 4, use: "mixed" });
+    expect(levelOf(0.95)).toEqual({ storeys: 6, use: "office" });
+    expect(levelOf(1)).toEqual({ storeys: 6, use: "office" });
+  });
+
+  it("uses every level over seeds when n < L (the stratum rule is shifted by the column's own offset)", () => {
+    const seen = new Set<number>();
+    for (let seed = 0; seed < 40; seed++) {
+      for (const r of mapUnitToSpace({ parameters: [storeys] }, createDesign({ n: 2, dims: 1, design: "lhs", seed }))) seen.add(r.storeys as number);
+    }
+    expect([...seen].sort()).toEqual([2, 3, 4, 5, 6]);
+  });
+
   it("returns no records for no rows, and rejects bad rows naming the parameter", () => {
     expect(mapUnitToSpace(space, [])).toEqual([]);
     expect(() => mapUnitToSpace(space, [[0.1, 0.2, 0.3]])).toThrow(/^mapUnitToSpace: unitRows\[0\] must have 4/);

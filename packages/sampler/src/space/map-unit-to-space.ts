@@ -8,11 +8,11 @@ import { latinStrata, stratumIndex } from "../design/stratum-index.js";
  *
  * - continuous: min + x·(max − min); with `log`, exp(ln min + x·(ln max − ln min)).
  * - integer (L = max − min + 1 levels) and categorical (L levels): when the column is Latin (one point in
- *   each of the n strata, as every LHS column is), the point in stratum k gets level ⌊(k + ½)·L/n⌋, so each level
- *   holds ⌊n/L⌋ or ⌈n/L⌉ points (derived: level ℓ gets the integers k in [ℓn/L − ½, (ℓ+1)n/L − ½), an
- *   interval of length n/L). Otherwise the
- *   level is ⌊x·L⌋ (x = 1 goes to the last level), which is balanced for Sobol' nets whose size is a
- *   multiple of L.
+ *   each of the n strata, as every LHS column is), the point in stratum k gets level ⌊(k + c)·L/n⌋, where
+ *   c ∈ [0, 1) is the offset n·x of the point in stratum 0 (½ for centred designs; x·L itself when n = 1).
+ *   Each level then holds ⌊n/L⌋ or ⌈n/L⌉ points (derived: level ℓ gets the integers k in
+ *   [ℓn/L − c, (ℓ+1)n/L − c), an interval of length n/L). Otherwise the level is ⌊x·L⌋ (x = 1 goes to the
+ *   last level), which is balanced for Sobol' nets whose size is a multiple of L.
  * @param space - the design space (validated).
  * @param unitRows - rows of coordinates in [0, 1], each as long as the parameter list.
  * @returns one record per row, keyed by parameter name.
@@ -72,6 +72,10 @@ function levelMapper(p: Parameter, column: readonly number[], n: number): (x: nu
 
 function levelIndexer(column: readonly number[], n: number, levels: number): (x: number, i: number) => number {
   const strata = latinStrata(column);
-  if (strata !== undefined) return (_x, i) => Math.floor((((strata[i] as number) + 0.5) * levels) / n);
+  if (strata !== undefined) {
+    const first = strata.indexOf(0);
+    const c = Math.min(Math.max((column[first] as number) * n, 0), 1 - Number.EPSILON);
+    return (_x, i) => Math.min(levels - 1, Math.floor((((strata[i] as number) + c) * levels) / n));
+  }
   return (x) => stratumIndex(x, levels);
 }
