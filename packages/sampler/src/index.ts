@@ -42,13 +42,10 @@ export { shardRange } from "./dataset/shard-range.js";
 export { writeDataset } from "./dataset/write-dataset.js";
 export type { WriteDatasetOptions } from "./dataset/write-dataset.js";
 export { mergeShards } from "./dataset/merge-shards.js";
-export {
-  DATASET_CAUTION,
-  datasetManifestSchema,
-  formatManifest,
-  manifestPathFor,
-  readManifest,
-} from "./dataset/dataset-manifest.js";
+export { DATASET_CAUTION, datasetManifestSchema } from "./dataset/dataset-manifest.js";
+export { formatManifest } from "./dataset/format-manifest.js";
+export { manifestPathFor } from "./dataset/manifest-path-for.js";
+export { readManifest } from "./dataset/read-manifest.js";
 export type { DatasetManifest } from "./dataset/dataset-manifest.js";
 export { sha256File } from "./dataset/sha256-file.js";
 export { recoverPartial } from "./dataset/recover-partial.js";

@@ -1,5 +1,3 @@
-import { readFile } from "node:fs/promises";
-import { basename } from "node:path";
 import { z } from "zod";
 
 /** Shown in every manifest: what the numbers are and are not. */
@@ -31,50 +29,3 @@ export const datasetManifestSchema = z.strictObject({
  * seed, n, shard, evaluator, package version) and the SHA-256 (FIPS 180-4) of the CSV's bytes.
  */
 export type DatasetManifest = z.infer<typeof datasetManifestSchema>;
-
-/**
- * The manifest path of a dataset CSV: `name.csv` → `name.manifest.json` (other names get `.manifest.json` appended).
- * @param csvPath - the CSV path.
- * @returns the manifest path beside it.
- */
-export function manifestPathFor(csvPath: string): string {
-  return csvPath.endsWith(".csv") ? `${csvPath.slice(0, -4)}.manifest.json` : `${csvPath}.manifest.json`;
-}
-
-/**
- * Serialises a manifest deterministically (fixed key order, two-space indent, final newline).
- * @param manifest - the manifest.
- * @returns its JSON text.
- */
-export function formatManifest(manifest: DatasetManifest): string {
-  return `${JSON.stringify(datasetManifestSchema.parse(manifest), null, 2)}\n`;
-}
-
-/**
- * Reads and validates the manifest beside a dataset CSV.
- * @param csvPath - the CSV path (its manifest is manifestPathFor(csvPath)).
- * @param caller - starts error messages.
- * @returns the manifest.
- * @throws RangeError naming the manifest file and, for schema errors, the path and problem.
- */
-export async function readManifest(csvPath: string, caller = "readManifest"): Promise<DatasetManifest> {
-  const path = manifestPathFor(csvPath);
-  let text: string;
-  try {
-    text = await readFile(path, "utf8");
-  } catch (error) {
-    throw new RangeError(`${caller}: cannot read the manifest ${path}: ${(error as NodeJS.ErrnoException).code ?? String(error)}`);
-  }
-  let value: unknown;
-  try {
-    value = JSON.parse(text);
-  } catch (error) {
-    throw new RangeError(`${caller}: ${basename(path)}: not valid JSON: ${(error as Error).message}`);
-  }
-  const r = datasetManifestSchema.safeParse(value);
-  if (!r.success) {
-    const problems = r.error.issues.map((i) => `${i.path.map(String).join(".") || "(top level)"}: ${i.message}`);
-    throw new RangeError(`${caller}: ${basename(path)}: ${problems.join("; ")}`);
-  }
-  return r.data;
-}

@@ -2,7 +2,10 @@ import { createReadStream, createWriteStream, existsSync } from "node:fs";
 import { open, rename, stat, writeFile } from "node:fs/promises";
 import { basename } from "node:path";
 import { pipeline } from "node:stream/promises";
-import { formatManifest, manifestPathFor, readManifest, type DatasetManifest } from "./dataset-manifest.js";
+import type { DatasetManifest } from "./dataset-manifest.js";
+import { formatManifest } from "./format-manifest.js";
+import { manifestPathFor } from "./manifest-path-for.js";
+import { readManifest } from "./read-manifest.js";
 import { sha256File } from "./sha256-file.js";
 
 async function headerLength(path: string): Promise<number> {
