@@ -1,6 +1,7 @@
 import type { ConformalModelFile } from "../model-file/conformal-model-file-schema.js";
 import { loadSurrogate } from "../model-file/load-surrogate.js";
 import { ConformalSurrogate } from "./conformal-surrogate.js";
+import { sameColumns } from "./same-columns.js";
 
 /**
  * Loader for "conformal" model files (one line in surrogate-loaders.ts): loads the nested base file
@@ -11,7 +12,7 @@ import { ConformalSurrogate } from "./conformal-surrogate.js";
  */
 export function conformalFromFile(file: ConformalModelFile, fileName = "model file"): ConformalSurrogate {
   const base = loadSurrogate(file.payload.base, `${fileName} payload.base`);
-  if (base.inputs.join("\u0000") !== file.inputs.join("\u0000") || base.targets.join("\u0000") !== file.targets.join("\u0000")) {
+  if (!sameColumns(base, file)) {
     throw new RangeError(`loadSurrogate: ${fileName}: payload.base must have the file's inputs and targets`);
   }
   const p = file.payload;

@@ -1,6 +1,7 @@
 import type { EnsembleModelFile } from "../model-file/ensemble-model-file-schema.js";
 import { loadSurrogate } from "../model-file/load-surrogate.js";
 import { EnsembleSurrogate } from "./ensemble-surrogate.js";
+import { sameColumns } from "./same-columns.js";
 
 /**
  * Loader for "ensemble" model files (one line in surrogate-loaders.ts): loads and validates every
@@ -12,7 +13,7 @@ import { EnsembleSurrogate } from "./ensemble-surrogate.js";
 export function ensembleFromFile(file: EnsembleModelFile, fileName = "model file"): EnsembleSurrogate {
   const members = file.payload.members.map((m, i) => loadSurrogate(m, `${fileName} payload.members[${i}]`));
   members.forEach((m, i) => {
-    if (m.inputs.join("\u0000") !== file.inputs.join("\u0000") || m.targets.join("\u0000") !== file.targets.join("\u0000")) {
+    if (!sameColumns(m, file)) {
       throw new RangeError(`loadSurrogate: ${fileName}: payload.members[${i}] must have the ensemble's inputs and targets`);
     }
   });

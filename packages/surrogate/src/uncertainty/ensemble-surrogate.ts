@@ -1,6 +1,7 @@
 import type { Prediction, Surrogate } from "../surrogate-types.js";
 import { mixtureOfMembers } from "../predict/mixture-of-members.js";
 import { memberEnvelope } from "./member-envelope.js";
+import { sameColumns } from "./same-columns.js";
 
 /** Training summary of an ensemble file. */
 export interface EnsembleTraining {
@@ -35,7 +36,7 @@ export class EnsembleSurrogate implements Surrogate {
     if (!Array.isArray(members) || members.length === 0) throw new RangeError(`${fn}: members must hold at least one surrogate`);
     const first = members[0]!;
     members.forEach((m, i) => {
-      if (m.inputs.join("\u0000") !== first.inputs.join("\u0000") || m.targets.join("\u0000") !== first.targets.join("\u0000")) {
+      if (!sameColumns(m, first)) {
         throw new RangeError(`${fn}: members[${i}] must have the inputs and targets of members[0]`);
       }
     });

@@ -1,6 +1,6 @@
 import seedrandom from "seedrandom";
 import type { SurrogateTrainer, TrainingData } from "../surrogate-types.js";
-import { checkTrainingData } from "../check-training-data.js";
+import { checkWrapperArgs } from "./check-wrapper-args.js";
 import { shuffleInPlace } from "../seeded-shuffle.js";
 import { calibrateConformal, type ConformalOptions } from "./calibrate-conformal.js";
 import type { ConformalSurrogate } from "./conformal-surrogate.js";
@@ -29,13 +29,10 @@ export async function fitConformal(
   options: FitConformalOptions = {},
 ): Promise<ConformalSurrogate> {
   const fn = "fitConformal";
-  if (typeof trainer !== "function") throw new TypeError(`${fn}: trainer must be a function (data, seed) => Promise<Surrogate>`);
-  checkTrainingData(fn, data);
+  const seed = checkWrapperArgs(fn, trainer, data, options.seed);
   const f = options.calibrationFraction ?? 0.25;
   if (typeof f !== "number") throw new TypeError(`${fn}: options.calibrationFraction must be a number`);
   if (!(f > 0 && f < 1)) throw new RangeError(`${fn}: options.calibrationFraction must be in (0, 1), got ${f}`);
-  const seed = options.seed ?? 0;
-  if (typeof seed !== "number" || !Number.isFinite(seed)) throw new RangeError(`${fn}: options.seed must be a finite number`);
   const n = data.x.length;
   const nCal = Math.round(n * f);
   if (nCal < 1 || n - nCal < 1) throw new RangeError(`${fn}: data.x needs rows for both training and calibration, got ${n}`);

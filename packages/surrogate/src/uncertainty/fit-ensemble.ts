@@ -1,6 +1,6 @@
 import seedrandom from "seedrandom";
 import type { SurrogateTrainer, TrainingData } from "../surrogate-types.js";
-import { checkTrainingData } from "../check-training-data.js";
+import { checkWrapperArgs } from "./check-wrapper-args.js";
 import { EnsembleSurrogate } from "./ensemble-surrogate.js";
 
 /** Options of {@link fitEnsemble}. */
@@ -26,13 +26,10 @@ export async function fitEnsemble(
   options: EnsembleOptions = {},
 ): Promise<EnsembleSurrogate> {
   const fn = "fitEnsemble";
-  if (typeof trainer !== "function") throw new TypeError(`${fn}: trainer must be a function (data, seed) => Promise<Surrogate>`);
-  checkTrainingData(fn, data);
+  const seed = checkWrapperArgs(fn, trainer, data, options.seed);
   const k = options.members ?? 5;
   if (typeof k !== "number") throw new TypeError(`${fn}: options.members must be a number`);
   if (!Number.isInteger(k) || k < 1) throw new RangeError(`${fn}: options.members must be an integer ≥ 1, got ${k}`);
-  const seed = options.seed ?? 0;
-  if (typeof seed !== "number" || !Number.isFinite(seed)) throw new RangeError(`${fn}: options.seed must be a finite number`);
   const started = performance.now();
   const rng = seedrandom(`floorcast-ensemble:${seed}`);
   const memberSeeds = Array.from({ length: k }, () => Math.floor(rng() * 2 ** 31));
