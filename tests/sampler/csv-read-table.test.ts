@@ -68,6 +68,10 @@ describe("readTable: errors name the file, the row and the column", () => {
     );
     await expect(readTable(p, { categorical: ["limitedBy"] })).rejects.toThrow(/missing column "limitedBy"/);
   });
+  it("a semicolon- or tab-separated file gets a hint", async () => {
+    await expect(readTable(file("a;b\n1;2\n"), { columns: ["a"] })).rejects.toThrow(/looks ";"-separated/);
+    await expect(readTable(file("a\tb\n1\t2\n"), { columns: ["b"] })).rejects.toThrow(/looks "\\t"-separated/);
+  });
   it("a non-numeric cell names row, line and column", async () => {
     const p = file("a,b\n1,2\n3,abc\n");
     await expect(readTable(p)).rejects.toThrow(/t\d+\.csv row 2 \(line 3\), column "b": "abc" is not a number/);

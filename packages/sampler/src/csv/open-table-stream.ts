@@ -87,8 +87,10 @@ export async function openTableStreamAs(
   const missing = [...columns, ...categorical].filter((c) => !seen.has(c));
   if (missing.length > 0) {
     close();
+    const other = header.length === 1 ? [";", "\t", "|"].find((d) => header[0]!.includes(d)) : undefined;
+    const hint = other === undefined ? "" : ` (the header looks ${JSON.stringify(other)}-separated; fields must be separated by commas)`;
     throw new RangeError(
-      `${caller}: ${file} is missing column${missing.length > 1 ? "s" : ""} ${quoteList(missing)}; it has ${quoteList(header)}`,
+      `${caller}: ${file} is missing column${missing.length > 1 ? "s" : ""} ${quoteList(missing)}; it has ${quoteList(header)}${hint}`,
     );
   }
   const both = columns.filter((c) => categorical.includes(c));
