@@ -150,6 +150,25 @@ describe("scrambled Sobol' points", () => {
     expect(mean(cds) * 3, `ratio ${mean(rnd) / mean(cds)}`).toBeLessThan(mean(rnd));
   });
 
+  it("the linear matrix scramble mixes lower digits: point 2 is not point 1 ± ½ as under a digital shift alone", () => {
+    // Derived: unscrambled, points 1 and 2 differ only in the leading bit (direction number V1 = ½ in every
+    // dimension), and an XOR shift keeps that, so |x2 − x1| = ½ exactly. A lower-triangular L turns V1 into ½
+    // plus random lower bits, so |x2 − x1| = ½ only when all 29 lower bits of L's first column are 0.
+    let half = 0;
+    let total = 0;
+    for (let seed = 0; seed < 10; seed++) {
+      const [p1, p2] = sobolPoints(2, 12, { seed }) as [number[], number[]];
+      p1.forEach((x, k) => {
+        total++;
+        if (Math.abs(x - (p2[k] as number)) === 0.5) half++;
+      });
+    }
+    const [u1, u2] = sobolPoints(2, 12) as [number[], number[]];
+    expect(u1.every((x, k) => Math.abs(x - (u2[k] as number)) === 0.5)).toBe(true);
+    expect(half).toBe(0);
+    expect(total).toBe(120);
+  });
+
   it("validates its arguments", () => {
     expect(() => sobolPoints(0, 2)).toThrow(/^sobolPoints: n/);
     expect(() => sobolPoints(4, 0)).toThrow(/^sobolPoints: d/);
