@@ -145,12 +145,13 @@ describe("continuous constrained problem: min x² + y² s.t. x + y ≥ 1 (optimu
     constraints: [{ output: "s", op: ">=", value: 1 }],
   };
   const e = () => fnEvaluator((d) => ({ f: (d.x as number) ** 2 + (d.y as number) ** 2, s: (d.x as number) + (d.y as number) }));
-  // Tolerances: PSO 1e-3; the GA 5e-3, since on an active constraint about half of its offspring are
-  // infeasible and discarded, so it closes in more slowly (common practice); the penalty method 1e-2
+  // Tolerances: PSO 1e-3; the GA 2e-2: its coordinate-wise operators close in slowly along an active
+  // constraint at 45° (measured relative errors 2e-4 … 9e-3 over seeds 0–9 at 3000 evaluations, so this
+  // bound is a regression check, not a precision claim); the penalty method 1e-2
   // (the quadratic penalty's minimiser sits slightly outside, and the best feasible point it meets is
   // reported); BO 5e-2 at only 35 evaluations.
   it.each([
-    ["GA", () => geneticAlgorithm(p, e(), { seed: 2, maxEvaluations: 3000 }), 5e-3],
+    ["GA", () => geneticAlgorithm(p, e(), { seed: 2, maxEvaluations: 3000 }), 2e-2],
     ["PSO", () => particleSwarm(p, e(), { seed: 2, maxEvaluations: 3000 }), 1e-3],
     ["gradient (penalty)", () => projectedGradient(p, e(), { seed: 2, maxEvaluations: 3000 }), 1e-2],
     ["BO (probability of feasibility)", () => bayesianOptimisation(p, e(), { seed: 2, maxEvaluations: 35 }), 5e-2],

@@ -1,4 +1,4 @@
-import { fitGaussianProcess, type Prediction, type TrainingData } from "@floorcast/surrogate";
+import { fitGaussianProcess, type GivenHyperparameters, type Prediction, type TrainingData } from "@floorcast/surrogate";
 import type { CommonOptions, EvaluatedDesign, Evaluator, OptimisationProblem, OptimisationResult } from "./optimisation-problem.js";
 import type { DesignCodec } from "./design-codec.js";
 import { EvaluationSession } from "./evaluation-session.js";
@@ -17,12 +17,19 @@ export interface AcquisitionModel {
 export interface BayesianOptimisationOptions extends CommonOptions {
   /** Initial Latin-hypercube designs (default max(5, 5·dims), at most maxEvaluations). */
   readonly initialSamples?: number;
-  /** Random candidates scored per iteration before local refinement of the best (default 2000). */
+  /** Random candidates scored per iteration before local refinement of the best (default 1000). */
   readonly candidates?: number;
   /** Acquisition starts refined by pattern search on the model (default 5). */
   readonly acquisitionStarts?: number;
   /** Stop when the largest EI falls below this fraction of max(1, |best|) (default 0: spend the budget). */
   readonly eiTolerance?: number;
+  /**
+   * Default model only: hyperparameters are re-learned at every iteration while the GP has at most
+   * 40 points, then whenever the number of points has grown by this factor since the last search
+   * (default 1.2; 1 re-learns every iteration); in between the GP is conditioned on all points with
+   * the last learned hyperparameters (one factorisation instead of a likelihood search).
+   */
+  readonly refitGrowth?: number;
   /**
    * Fits the model to (unit-coded inputs, [loss, g₁, …]) — default a Matérn-5/2 ARD GP from
    * fitGaussianProcess with its own seeded restarts; each target gets its own GP.
@@ -50,13 +57,24 @@ function targetsOf(problem: OptimisationProblem, e: EvaluatedDesign): number[] {
   return [objectiveLoss(problem, e), ...g];
 }
 
-const defaultFit = (data: TrainingData, seed: number): AcquisitionModel =>
-  fitGaussianProcess(data, {
-    seed,
-    kernel: "matern52",
-    inputBounds: { lower: data.inputs.map(() => 0), upper: data.inputs.map(() => 1) },
-    noiseFloor: 1e-8,
-  });
+function defaultFit(growth: number): (data: TrainingData, seed: number) => AcquisitionModel {
+  let last: GivenHyperparameters[] | undefined;
+  let lastSearchSize = 0;
+  return (data, seed) => {
+    const n = data.x.length;
+    const reuse = last !== undefined && n > 40 && n < growth * lastSearchSize;
+    if (!reuse) lastSearchSize = n;
+    const gp = fitGaussianProcess(data, {
+      seed,
+      kernel: "matern52",
+      inputBounds: { lower: data.inputs.map(() => 0), upper: data.inputs.map(() => 1) },
+      noiseFloor: 1e-8,
+      ...(reuse ? { hyperparameters: last } : {}),
+    });
+    last = gp.hyperparameters();
+    return gp;
+  };
+}
 
 /**
  * Bayesian optimisation with expected improvement (EGO; Jones, Schonlau & Welch 1998, J. Global
@@ -85,11 +103,11 @@ export async function bayesianOptimisation(
   if (Number.isNaN(budget)) throw new RangeError(`${fn}: options.maxEvaluations must be given (finite)`);
   const dims = problem.variables.length;
   const n0 = Math.min(budget, numberOption(fn, "initialSamples", options.initialSamples, Math.max(5, 5 * dims), 1, true));
-  const nCand = numberOption(fn, "candidates", options.candidates, 2000, 1, true);
+  const nCand = numberOption(fn, "candidates", options.candidates, 1000, 1, true);
   const nStarts = numberOption(fn, "acquisitionStarts", options.acquisitionStarts, 5, 1, true);
   const eiTol = numberOption(fn, "eiTolerance", options.eiTolerance, 0, 0);
   if (options.fitModel !== undefined && typeof options.fitModel !== "function") throw new TypeError(`${fn}: options.fitModel must be a function`);
-  const fit = options.fitModel ?? defaultFit;
+  const fit = options.fitModel ?? defaultFit(numberOption(fn, "refitGrowth", options.refitGrowth, 1.2, 1));
   const session = new EvaluationSession("bayesian-optimisation", problem, evaluator, options, budget);
   const { codec } = session;
   const rng = createRng(options.seed);
@@ -126,19 +144,24 @@ export async function bayesianOptimisation(
       const cands = unitSamples(nCand, dims, "random", rng).map((u) => codec.fromUnit(u));
       const sc = score(cands);
       const order = sc.map((s, i) => [s, i] as const).sort((a, b) => b[0] - a[0]).slice(0, nStarts);
-      let bestScore = -1;
-      for (const [s0, i0] of order) {
-        let x = cands[i0]!;
-        let s = s0;
-        for (let delta = 0.05, steps = 0; delta > 1e-5 && steps < 200; steps++) {
-          const polls = pollPoints(codec, x, delta);
-          const ps = score(polls);
-          const k = ps.reduce((bi, v, i) => (v > ps[bi]! ? i : bi), 0);
-          if (polls.length > 0 && ps[k]! > s) [x, s] = [polls[k]!, ps[k]!];
-          else delta /= 2;
-        }
-        if (s > bestScore) [next, bestScore] = [x, s];
+      // Pattern search on the model from every start at once (one predict call per step).
+      const starts = order.map(([s0, i0]) => ({ x: cands[i0]!, s: s0, delta: 0.05 }));
+      for (let steps = 0; steps < 60; steps++) {
+        const active = starts.filter((st) => st.delta > 1e-4);
+        if (active.length === 0) break;
+        const polls = active.map((st) => pollPoints(codec, st.x, st.delta));
+        const ps = score(polls.flat());
+        let at = 0;
+        active.forEach((st, a) => {
+          const mine = ps.slice(at, at + polls[a]!.length);
+          at += mine.length;
+          const k = mine.reduce((bi, v, i) => (v > mine[bi]! ? i : bi), 0);
+          if (mine.length > 0 && mine[k]! > st.s) [st.x, st.s] = [polls[a]![k]!, mine[k]!];
+          else st.delta /= 2;
+        });
       }
+      let bestScore = -1;
+      for (const st of starts) if (st.s > bestScore) [next, bestScore] = [st.x, st.s];
       if (eiTol > 0 && session.best && bestScore < eiTol * Math.max(1, Math.abs(best))) return session.result("converged");
       if (bestScore <= 0) next = undefined;
     }

@@ -3,7 +3,7 @@ import { EvaluationSession } from "./evaluation-session.js";
 import { compareFeasibility } from "./feasibility-rules.js";
 import { createRng, unitSamples } from "./unit-samples.js";
 import { numberOption, validateProblem } from "./validate-problem.js";
-import { avoidDuplicate, polynomialMutation, sbxCrossover, variationSettings, type VariationSettings } from "./variation-operators.js";
+import { makeOffspring, variationSettings, type VariationSettings } from "./variation-operators.js";
 
 /** Options of {@link geneticAlgorithm}. */
 export interface GeneticAlgorithmOptions extends CommonOptions, Partial<VariationSettings> {
@@ -62,16 +62,7 @@ export async function geneticAlgorithm(
     return winner;
   };
   while (session.remaining > 0 && population.length > 0) {
-    const children: number[][] = [];
-    const taken = new Set(population.map((m) => m.x.join(",")));
-    while (children.length < pop) {
-      const [a, b] = sbxCrossover(session.codec, tournament().x, tournament().x, settings, rng);
-      for (const c of [a, b]) {
-        polynomialMutation(session.codec, c, settings, rng);
-        avoidDuplicate(session.codec, c, taken, settings, rng);
-        children.push(c);
-      }
-    }
+    const children = makeOffspring(session.codec, pop, () => tournament().x, population.map((m) => m.x), settings, rng);
     const scored = await session.evaluate(children);
     const merged = [...population, ...scored.map((e, i) => ({ x: children[i]!, e }))];
     merged.sort(cmp);

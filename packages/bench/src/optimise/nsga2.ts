@@ -4,7 +4,7 @@ import { objectiveLoss } from "./feasibility-rules.js";
 import { crowdingDistance, fastNonDominatedSort } from "./nondominated-sort.js";
 import { createRng, unitSamples } from "./unit-samples.js";
 import { numberOption, validateProblem } from "./validate-problem.js";
-import { polynomialMutation, sbxCrossover, variationSettings, type VariationSettings } from "./variation-operators.js";
+import { makeOffspring, variationSettings, type VariationSettings } from "./variation-operators.js";
 
 /** Options of {@link nsga2}. */
 export interface Nsga2Options extends CommonOptions, Partial<VariationSettings> {
@@ -26,7 +26,7 @@ interface Individual {
  * fast non-dominated sort and crowding distance under constrained domination (§VI), binary
  * tournament by the crowded-comparison operator, SBX crossover and polynomial mutation (with the
  * mixed-variable handling of the genetic algorithm: lattice values stay on the lattice,
- * categoricals are exchanged and resampled), and elitist (N + N) survival. Invalid (NaN)
+ * categoricals are exchanged and resampled, duplicates mutated again), and elitist (N + N) survival. Invalid (NaN)
  * designs carry infinite violation, so they rank last.
  * @param problem - problem with ≥ 2 objectives.
  * @param evaluator - the function evaluated.
@@ -84,13 +84,7 @@ export async function nsga2(
     return a.crowding >= b.crowding ? a : b;
   };
   while (session.remaining > 0 && pop.length > 0) {
-    const children: number[][] = [];
-    while (children.length < n) {
-      const [a, b] = sbxCrossover(session.codec, tournament().x, tournament().x, settings, rng);
-      polynomialMutation(session.codec, a, settings, rng);
-      polynomialMutation(session.codec, b, settings, rng);
-      children.push(a, b);
-    }
+    const children = makeOffspring(session.codec, n, () => tournament().x, pop.map((p) => p.x), settings, rng);
     const scored = await session.evaluate(children);
     pop = rankAndSelect([...pop, ...scored.map((e, i) => make(children[i]!, e))], n);
   }

@@ -31,7 +31,8 @@ function merit(problem: OptimisationProblem, e: EvaluatedDesign, mu: number): nu
 
 /**
  * Multi-start projected gradient descent with an Armijo backtracking line search (Bertsekas 1976,
- * IEEE TAC 21(2); Nocedal & Wright 2006, §3.1, §16.7) on the penalised merit
+ * IEEE TAC 21(2); Nocedal & Wright 2006, §3.1, §16.7) whose first trial step is the spectral
+ * Barzilai–Borwein step (Birgin, Martínez & Raydan 2000, SIAM J. Optim. 10(4)), on the penalised merit
  * F = loss + μ·Σ max(0, gᵢ)²: steps x ← P(x − α∇F) with P the projection onto the box, in unit
  * coordinates. The gradient comes from `evaluator.gradient` (e.g. a surrogate's analytic
  * gradient) or, without it, from central finite differences (one-sided at a bound), whose 2·d
@@ -111,11 +112,23 @@ export async function projectedGradient(
     let e = e0;
     let f = merit(problem, e, mu);
     let alpha = NaN;
+    let prev: { x: number[]; g: number[] } | null = null;
     for (let it = 0; it < maxIter && session.remaining > 0 && Number.isFinite(f); it++) {
       const g = await gradient(x, e, mu);
       if (g === null || g.every((v) => v === 0)) break;
-      if (Number.isNaN(alpha)) alpha = 0.1 / Math.max(...g.map(Math.abs));
-      else alpha *= 4;
+      if (prev === null) alpha = 0.1 / Math.max(...g.map(Math.abs));
+      else {
+        // Spectral (Barzilai–Borwein) first trial step sᵀs/sᵀy in unit coordinates.
+        let ss = 0;
+        let sy = 0;
+        for (let j = 0; j < dims; j++) {
+          const sj = (x[j]! - prev.x[j]!) / (range[j]! || 1);
+          ss += sj * sj;
+          sy += sj * (g[j]! - prev.g[j]!);
+        }
+        alpha = sy > 0 ? Math.min(1e10, Math.max(1e-12, ss / sy)) : alpha * 4;
+      }
+      prev = { x, g };
       let moved = false;
       for (let bt = 0; bt < 30 && session.remaining > 0; bt++, alpha /= 2) {
         const y = x.map((v, j) => (free[j] ? codec.snap(j, v - alpha * g[j]! * range[j]!) : v));

@@ -1,4 +1,5 @@
 import seedrandom from "seedrandom";
+import { createDesign } from "@floorcast/sampler";
 
 /** A seeded uniform generator on [0, 1) (seedrandom's ARC4). */
 export type Rng = () => number;
@@ -12,26 +13,16 @@ export function createRng(seed: number | string | undefined): Rng {
 }
 
 /**
- * Points of the unit cube, either independent uniform ("random") or a random Latin hypercube
- * ("lhs": each axis cut into n equal strata, one point per stratum, strata paired by random
- * permutations; McKay, Beckman & Conover 1979, Technometrics 21(2)).
- * @param n - number of points.
+ * Points of the unit cube from @floorcast/sampler's createDesign: independent uniform ("random")
+ * or a random Latin hypercube ("lhs"; McKay, Beckman & Conover 1979), seeded by the next draw of
+ * `rng` so that a run stays one deterministic stream.
+ * @param n - number of points (0 gives none).
  * @param dims - dimension.
  * @param design - "random" or "lhs".
  * @param rng - seeded generator.
  * @returns n rows of dims coordinates in [0, 1).
  */
 export function unitSamples(n: number, dims: number, design: "random" | "lhs", rng: Rng): number[][] {
-  const rows = Array.from({ length: n }, () => new Array<number>(dims).fill(0));
-  for (let j = 0; j < dims; j++) {
-    const perm = Array.from({ length: n }, (_, i) => i);
-    for (let i = n - 1; i > 0; i--) {
-      const k = Math.floor(rng() * (i + 1));
-      [perm[i], perm[k]] = [perm[k]!, perm[i]!];
-    }
-    for (let i = 0; i < n; i++) {
-      rows[i]![j] = design === "lhs" ? (perm[i]! + rng()) / n : rng();
-    }
-  }
-  return rows;
+  const seed = Math.floor(rng() * 2 ** 32);
+  return n === 0 ? [] : createDesign({ n, dims, design, seed });
 }

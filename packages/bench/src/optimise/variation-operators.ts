@@ -113,6 +113,30 @@ export function avoidDuplicate(codec: DesignCodec, x: number[], taken: Set<strin
 }
 
 /**
+ * Makes `n` offspring (n even): pairs of parents from `pick`, SBX crossover, polynomial mutation,
+ * duplicate avoidance against `existing` and each other (the GA's and NSGA-II's variation step).
+ */
+export function makeOffspring(
+  codec: DesignCodec,
+  n: number,
+  pick: () => readonly number[],
+  existing: readonly (readonly number[])[],
+  s: VariationSettings,
+  rng: Rng,
+): number[][] {
+  const children: number[][] = [];
+  const taken = new Set(existing.map((x) => x.join(",")));
+  while (children.length < n) {
+    for (const c of sbxCrossover(codec, pick(), pick(), s, rng)) {
+      polynomialMutation(codec, c, s, rng);
+      avoidDuplicate(codec, c, taken, s, rng);
+      children.push(c);
+    }
+  }
+  return children;
+}
+
+/**
  * Reads the variation settings from options, with NSGA-II's usual defaults (Deb et al. 2002).
  * @param fn - public function name, for messages.
  */
