@@ -171,6 +171,22 @@ describe("grid: step-aware axes and a degenerate bound", () => {
   });
 });
 
+describe("a degenerate bound (min = max) is a fixed variable, not an error", () => {
+  // Branin plus a variable fixed at 3 that the function ignores: the optimum stays 5/(4π) (VLSE).
+  const p: OptimisationProblem = { ...braninProblem, variables: [...braninProblem.variables, { kind: "continuous", name: "fixed", min: 3, max: 3 }] };
+  it.each([
+    ["GA", () => geneticAlgorithm(p, braninEvaluator(), { seed: 1, maxEvaluations: 300, keepHistory: true })],
+    ["PSO", () => particleSwarm(p, braninEvaluator(), { seed: 1, maxEvaluations: 300, keepHistory: true })],
+    ["gradient", () => projectedGradient(p, braninEvaluator(), { seed: 1, maxEvaluations: 300, keepHistory: true })],
+    ["BO", () => bayesianOptimisation(p, braninEvaluator(), { seed: 1, maxEvaluations: 15, keepHistory: true })],
+    ["pattern", () => patternSearch(p, braninEvaluator(), { x1: 0, x2: 5, fixed: 3 }, { maxEvaluations: 100, keepHistory: true })],
+  ])("%s keeps it at 3 and still optimises the rest", async (_, run) => {
+    const r = await run();
+    expect(r.history!.every((e) => e.design.fixed === 3)).toBe(true);
+    expect(r.best!.objectives[0]!).toBeLessThan(5); // the box's range of Branin is ≈ 0.4 … 308 (VLSE plot)
+  }, 30_000);
+});
+
 describe("codec property: every coded vector is legal (fast-check)", () => {
   it("fromUnit and snap stay in bounds, on the lattice, on a level", () => {
     const p: OptimisationProblem = {

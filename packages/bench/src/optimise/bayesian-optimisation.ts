@@ -1,6 +1,6 @@
 import { fitGaussianProcess, type GivenHyperparameters, type Prediction, type TrainingData } from "@floorcast/surrogate";
 import type { CommonOptions, EvaluatedDesign, Evaluator, OptimisationProblem, OptimisationResult } from "./optimisation-problem.js";
-import type { DesignCodec } from "./design-codec.js";
+import { createDesignCodec, type DesignCodec } from "./design-codec.js";
 import { EvaluationSession } from "./evaluation-session.js";
 import { expectedImprovement, probabilityOfFeasibility } from "./expected-improvement.js";
 import { objectiveLoss } from "./feasibility-rules.js";
@@ -15,7 +15,7 @@ export interface AcquisitionModel {
 
 /** Options of {@link bayesianOptimisation}. */
 export interface BayesianOptimisationOptions extends CommonOptions {
-  /** Initial Latin-hypercube designs (default max(5, 5·dims), at most maxEvaluations). */
+  /** Initial Latin-hypercube designs (default max(5, 5·d), d = variables with more than one value; at most maxEvaluations). */
   readonly initialSamples?: number;
   /** Random candidates scored per iteration before local refinement of the best (default 1000). */
   readonly candidates?: number;
@@ -102,7 +102,8 @@ export async function bayesianOptimisation(
   const budget = numberOption(fn, "maxEvaluations", options.maxEvaluations, NaN, 0, true);
   if (Number.isNaN(budget)) throw new RangeError(`${fn}: options.maxEvaluations must be given (finite)`);
   const dims = problem.variables.length;
-  const n0 = Math.min(budget, numberOption(fn, "initialSamples", options.initialSamples, Math.max(5, 5 * dims), 1, true));
+  const free = createDesignCodec(problem).count.filter((c) => c > 1).length;
+  const n0 = Math.min(budget, numberOption(fn, "initialSamples", options.initialSamples, Math.max(5, 5 * free), 1, true));
   const nCand = numberOption(fn, "candidates", options.candidates, 1000, 1, true);
   const nStarts = numberOption(fn, "acquisitionStarts", options.acquisitionStarts, 5, 1, true);
   const eiTol = numberOption(fn, "eiTolerance", options.eiTolerance, 0, 0);
