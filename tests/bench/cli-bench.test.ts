@@ -37,6 +37,12 @@ async function usage(args: string[], re: RegExp): Promise<void> {
 }
 
 describe("floorcast bench / optimize: usage errors", () => {
+  it("the commands are registered", async () => {
+    const r = await inProcess(["--help"]);
+    for (const c of ["bench", "optimize", "demo"]) expect(r.stdout).toMatch(new RegExp(`\\n\\s+${c}\\b`));
+    const d = await inProcess(["demo", "--help"]);
+    expect(d.stdout).toMatch(/--out <dir>/);
+  });
   it("bench", async () => {
     await usage(["bench", "--suite", "nope", "--out", join(dir, "x")], /suite "nope"; suites: demo, standard/);
     await usage(["bench", "--seeds", "abc", "--out", join(dir, "x")], /--seeds must be a whole number/);
