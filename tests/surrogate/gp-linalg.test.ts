@@ -7,6 +7,7 @@ import {
   conditionEstimate,
   logDeterminant,
   solveLower,
+  solveLowerMany,
   solveLowerTransposed,
 } from "@floorcast/surrogate";
 
@@ -72,6 +73,18 @@ describe("triangular solves, log-determinant, inverse, condition number", () => 
       const ref = inverse(am);
       for (let i = 0; i < n; i++)
         for (let j = 0; j <= i; j++) expect(Math.abs(inv[i * n + j]! - ref.get(i, j))).toBeLessThan(1e-10 * Math.max(1, Math.abs(ref.get(i, j))));
+    }
+  });
+
+  it("solveLowerMany gives bit for bit the single-column solves", () => {
+    const n = 17;
+    const m = 5;
+    const f = choleskyWithJitter(spd(n, 9), n);
+    const b = Float64Array.from({ length: n * m }, (_, i) => Math.sin(i * 0.31));
+    const many = solveLowerMany(f.factor, n, b.slice(), m);
+    for (let c = 0; c < m; c++) {
+      const col = solveLower(f.factor, n, Float64Array.from({ length: n }, (_, i) => b[i * m + c]!));
+      for (let i = 0; i < n; i++) expect(many[i * m + c]).toBe(col[i]);
     }
   });
 

@@ -35,7 +35,7 @@ export { createOutputScaling, standardiseTarget } from "./scaling/output-scaling
 export type { OutputScaling } from "./scaling/output-scaling.js";
 export { choleskyWithJitter } from "./linalg/cholesky-with-jitter.js";
 export type { CholeskyFactor } from "./linalg/cholesky-with-jitter.js";
-export { solveLower, solveLowerTransposed } from "./linalg/triangular-solve.js";
+export { solveLower, solveLowerMany, solveLowerTransposed } from "./linalg/triangular-solve.js";
 export { logDeterminant } from "./linalg/log-determinant.js";
 export { choleskyInverseInPlace } from "./linalg/cholesky-inverse.js";
 export { conditionEstimate } from "./linalg/condition-estimate.js";

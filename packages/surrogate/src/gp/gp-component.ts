@@ -2,11 +2,14 @@ import { choleskyInverseInPlace } from "../linalg/cholesky-inverse.js";
 import type { CholeskyFactor } from "../linalg/cholesky-with-jitter.js";
 import { choleskyWithJitter } from "../linalg/cholesky-with-jitter.js";
 import { logDeterminant } from "../linalg/log-determinant.js";
-import { solveLower, solveLowerTransposed } from "../linalg/triangular-solve.js";
+import { solveLower, solveLowerMany, solveLowerTransposed } from "../linalg/triangular-solve.js";
 import type { KernelHyperparameters } from "./kernels/kernel-hyperparameters.js";
 import { crossKernelRow, kernelMatrix } from "./kernels/kernel-matrix.js";
 import type { KernelName } from "./kernels/kernel-name.js";
 import { radialProfile } from "./kernels/radial-profile.js";
+
+/** Query rows whose variances share one pass over the Cholesky factor. */
+const PREDICT_BLOCK = 64;
 
 /** Flat scaled training inputs shared by every target's component. */
 export interface TrainingInputs {
@@ -76,7 +79,8 @@ export class GpComponent {
   }
 
   /**
-   * Standardised posterior mean k*ᵀα and latent variance σ_f² − vᵀv, v = L⁻¹k* (R&W Alg. 2.1) per query row.
+   * Standardised posterior mean k*ᵀα and latent variance σ_f² − vᵀv, v = L⁻¹k* (R&W Alg. 2.1) per query row;
+   * the solves run 64 query rows at a time (same arithmetic per row as one solve).
    * @param q - flat scaled queries (m × d).
    * @param m - rows.
    * @param withVariance - skip the O(n²) solves when false.
@@ -87,16 +91,24 @@ export class GpComponent {
     const variance = new Float64Array(m);
     const ks = new Float64Array(n);
     const l = withVariance ? this.factor().factor : undefined;
-    for (let r = 0; r < m; r++) {
-      crossKernelRow(q, r * d, x, n, d, this.kernel, this.hyperparameters, ks);
-      let mu = 0;
-      for (let i = 0; i < n; i++) mu += ks[i]! * this.alpha[i]!;
-      mean[r] = mu;
-      if (l) {
-        solveLower(l, n, ks);
-        let vv = 0;
-        for (let i = 0; i < n; i++) vv += ks[i]! * ks[i]!;
-        variance[r] = Math.max(0, this.hyperparameters.signalVariance - vv);
+    const block = Math.min(PREDICT_BLOCK, Math.max(1, m));
+    const kb = l ? new Float64Array(n * block) : undefined;
+    for (let r0 = 0; r0 < m; r0 += block) {
+      const mb = Math.min(block, m - r0);
+      for (let c = 0; c < mb; c++) {
+        crossKernelRow(q, (r0 + c) * d, x, n, d, this.kernel, this.hyperparameters, ks);
+        let mu = 0;
+        for (let i = 0; i < n; i++) mu += ks[i]! * this.alpha[i]!;
+        mean[r0 + c] = mu;
+        if (kb) for (let i = 0; i < n; i++) kb[i * mb + c] = ks[i]!;
+      }
+      if (l && kb) {
+        solveLowerMany(l, n, kb, mb);
+        for (let c = 0; c < mb; c++) {
+          let vv = 0;
+          for (let i = 0; i < n; i++) vv += kb[i * mb + c]! * kb[i * mb + c]!;
+          variance[r0 + c] = Math.max(0, this.hyperparameters.signalVariance - vv);
+        }
       }
     }
     return { mean, variance };

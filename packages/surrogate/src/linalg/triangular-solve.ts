@@ -31,3 +31,28 @@ export function solveLowerTransposed(l: Float64Array, n: number, b: Float64Array
   }
   return b;
 }
+
+/**
+ * Solves L X = B for m right-hand sides at once (forward substitution; B row-major n × m, overwritten), so L is
+ * streamed once per block instead of once per column; each column gets exactly the operations of {@link solveLower}.
+ * @param l - factor (only the lower triangle is read).
+ * @param n - order.
+ * @param b - n × m right-hand sides, overwritten with X.
+ * @param m - number of right-hand sides.
+ * @returns b (now X).
+ */
+export function solveLowerMany(l: Float64Array, n: number, b: Float64Array, m: number): Float64Array {
+  for (let i = 0; i < n; i++) {
+    const r = i * n;
+    const bi = i * m;
+    for (let k = 0; k < i; k++) {
+      const lik = l[r + k]!;
+      if (lik === 0) continue;
+      const bk = k * m;
+      for (let c = 0; c < m; c++) b[bi + c] = b[bi + c]! - lik * b[bk + c]!;
+    }
+    const lii = l[r + i]!;
+    for (let c = 0; c < m; c++) b[bi + c] = b[bi + c]! / lii;
+  }
+  return b;
+}
