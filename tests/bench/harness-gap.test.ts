@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { optimumGap } from "../../packages/bench/src/harness/optimum-gap.js";
+import { formatPercent } from "../../packages/bench/src/harness/format-percent.js";
 import { reevaluateSurrogateOptimum } from "../../packages/bench/src/harness/reevaluate-surrogate-optimum.js";
 import { runSingleTrial } from "../../packages/bench/src/harness/run-single-trial.js";
 import { sampleTrainingSet } from "../../packages/bench/src/harness/sample-training-set.js";
@@ -119,5 +120,14 @@ describe("the harness never reports an exactly infeasible design as optimal", ()
     expect(r.gap).toBeCloseTo(optimumGap(0.5, r.value!), 15);
     expect(r.gap!).toBeGreaterThanOrEqual(0);
     expect(r.evaluations).toBe(8 + r.evaluationsBreakdown.reevaluation);
+  });
+});
+
+describe("formatPercent", () => {
+  it("formats shares, never prints -0.00%, and marks undefined values", () => {
+    expect(formatPercent(0.0523)).toBe("5.23%");
+    expect(formatPercent(-1e-9)).toBe("0.00%");
+    expect(formatPercent(-0.25)).toBe("-25.00%");
+    for (const v of [null, undefined, Number.NaN, Number.POSITIVE_INFINITY, Number.NEGATIVE_INFINITY]) expect(formatPercent(v)).toBe("—");
   });
 });

@@ -9,8 +9,9 @@ import type { BenchReport, ProblemReport, SurrogateOptimumRecord } from "./bench
 import { fitRatio } from "./fit-ratio.js";
 import { headlineTable } from "./headline-table.js";
 import { massingDrawingSpec } from "./massing-drawing-spec.js";
+import { formatPercent } from "./format-percent.js";
 
-const pct = (v: number | null): string => (v === null || !Number.isFinite(v) ? "—" : `${(v * 100).toFixed(2)}%`);
+const pct = formatPercent;
 const isMassing = (input: unknown): input is MassingInput => typeof input === "object" && input !== null && "parcel" in input;
 
 /** The surrogate-driven optimum drawn beside the exact one: floorcast's GP at its largest size, first seed. */

@@ -1,11 +1,12 @@
 import type { BenchReport, ProblemReport } from "./bench-report-types.js";
 import { fitRatio } from "./fit-ratio.js";
 import { headlineTable } from "./headline-table.js";
+import { formatPercent } from "./format-percent.js";
 
 const cell = (s: string): string => s.replace(/\|/g, "\\|");
 const table = (header: readonly string[], rows: readonly (readonly string[])[]): string =>
   [`| ${header.map(cell).join(" | ")} |`, `| ${header.map(() => "---").join(" | ")} |`, ...rows.map((r) => `| ${r.map(cell).join(" | ")} |`)].join("\n");
-const pct = (v: number | null): string => (v === null || !Number.isFinite(v) ? "—" : `${(v * 100).toFixed(2)}%`);
+const pct = formatPercent;
 const fmt = (v: number | null | undefined): string => (v === null || v === undefined || !Number.isFinite(v) ? "—" : String(Number(v.toPrecision(4))));
 
 function problemSection(p: ProblemReport): string {

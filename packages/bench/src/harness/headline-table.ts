@@ -1,6 +1,7 @@
 import type { BenchReport, GapSummary, ProblemReport } from "./bench-report-types.js";
+import { formatPercent } from "./format-percent.js";
 
-const pct = (v: number | null | undefined): string => (v === null || v === undefined || !Number.isFinite(v) ? "—" : `${(v * 100).toFixed(2)}%`);
+const pct = formatPercent;
 const num = (v: number | null | undefined, d = 3): string => (v === null || v === undefined || !Number.isFinite(v) ? "—" : Number(v.toPrecision(d)).toString());
 
 /** The headline rows of one problem: each surrogate at its largest training size. */
