@@ -26,9 +26,10 @@ export interface EseResult {
  * accepted when φp(try) − φp(current) ≤ T·u (u uniform); the outer loop adapts the threshold T (improving
  * phase: T·0.8 when the acceptance ratio is above 0.1 and not every acceptance improved, T/0.8 when it is
  * below 0.1; exploring phase: warm by T/0.7 until the ratio exceeds 0.8, then cool by T·0.9 until it falls
- * below 0.1). J = min(n_e/5, 50) and M = min(2·n_e·d/J, 100) with n_e = C(n, 2), T0 = 0.005·φp(start), as in
- * the paper. Exchanges keep the Latin property; φp is updated in O(n) per exchange (PhiPState).
- * @param start - a Latin design in the unit cube (at least 2 points, 2 dimensions; otherwise returned as is).
+ * below 0.1). J = min(n_e/5, 50) and M = min(2·n_e·d/J, 100) with n_e = C(n, 2), T0 = 0.005·φp(start): the
+ * paper's settings, from memory. Exchanges keep the Latin property; φp is updated in O(n) per exchange
+ * (PhiPState), and re-summed exactly after each outer iteration.
+ * @param start - a Latin design in the unit cube (at least 3 points and 2 dimensions; otherwise returned as is).
  * @param rng - seeded generator.
  * @returns the best design found and its φp before and after.
  */
