@@ -30,7 +30,7 @@ function problemSection(p: ProblemReport): string {
     out.push(table(["surrogate", "n", "seed", "Spearman rho", "Kendall tau-b", `top-${ranked[0]!.ranking!.shortlist} overlap`], ranked.map((r) => [r.surrogate, String(r.trainingSize), String(r.seed), fmt(r.ranking!.spearman), fmt(r.ranking!.kendall), pct(r.ranking!.topOverlap)])));
   }
   if (p.evaluationsToTarget.length > 0) {
-    out.push("", `### Exact evaluations to come within ${p.target * 100}% of the exact optimum`, "");
+    out.push("", `### Exact evaluations to come within ${p.target * 100}% of the exact ${p.kind === "two-objective" ? "front's hypervolume" : "optimum"}`, "");
     out.push(table(["method", "median", "per seed", "budget", "seconds"], p.evaluationsToTarget.map((t) => [t.method, t.median === null ? "not reached" : String(t.median), t.evaluations.map((v) => (v === null ? "—" : String(v))).join(", "), String(t.budget), fmt(t.seconds)])));
   }
   if (p.notes.length > 0) out.push("", ...p.notes.map((n) => `> ${n}`));

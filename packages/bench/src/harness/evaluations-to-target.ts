@@ -7,6 +7,7 @@ import type { OptimisationResult } from "../optimise/optimisation-problem.js";
 import type { BenchProblem } from "../problem/bench-problem.js";
 import type { EvaluationsToTarget } from "./bench-report-types.js";
 import { exactEvaluator } from "./exact-evaluator.js";
+import { medianEvaluations } from "./median-evaluations.js";
 
 /** Budgets of the evaluations-to-target runs. */
 export interface TargetBudgets {
@@ -69,7 +70,7 @@ export async function evaluationsToTarget(
       const hit = gaps.findIndex((g) => g <= target);
       evaluations.push(hit < 0 ? null : hit + 1);
     }
-    out.push({ method, evaluations, median: medianOrNull(evaluations), budget, curve, seconds: (performance.now() - t0) / 1000 });
+    out.push({ method, evaluations, median: medianEvaluations(evaluations), budget, curve, seconds: (performance.now() - t0) / 1000 });
   }
   onStep?.("grid");
   const t0 = performance.now();
@@ -90,13 +91,6 @@ export async function evaluationsToTarget(
   }
   out.push({ method: "grid", evaluations: [found], median: found, budget: cap, curve, seconds: (performance.now() - t0) / 1000 });
   return out;
-}
-
-/** Median of the reached counts, a run that never reached the target counting as worse than all; null when half or more never reached it. */
-function medianOrNull(v: readonly (number | null)[]): number | null {
-  const sorted = [...v].map((x) => x ?? Infinity).sort((a, b) => a - b);
-  const m = sorted.length % 2 === 1 ? sorted[(sorted.length - 1) / 2]! : (sorted[sorted.length / 2 - 1]! + sorted[sorted.length / 2]!) / 2;
-  return Number.isFinite(m) ? m : null;
 }
 
 /** (evaluations, shortfall) pairs of a trace, at most ~100 of them, skipping the infeasible start. */

@@ -3,6 +3,7 @@ import type { ExactOptimumRecord, ProblemReport, SurrogateOptimumRecord } from "
 import type { BenchTrainer } from "./bench-trainer.js";
 import { evaluationsToTarget, type TargetBudgets } from "./evaluations-to-target.js";
 import { findExactOptimum } from "./find-exact-optimum.js";
+import { frontEvaluationsToTarget } from "./front-evaluations-to-target.js";
 import { frontHypervolume, frontReference } from "./front-hypervolume.js";
 import { reportDesign } from "./report-design.js";
 import { runFrontTrial } from "./run-front-trial.js";
@@ -41,8 +42,8 @@ export interface RunProblemOptions {
 /**
  * Measures one problem: the exact optimum (grid + exact refinement, or per site, or the exact
  * front), an independent test set, every planned surrogate trial (sample, fit, assess, optimise on
- * the surrogate, exact re-evaluation, gap, refinement), and for single-objective problems the
- * exact evaluations each optimiser needs to come within the target.
+ * the surrogate, exact re-evaluation, gap, refinement), and the exact evaluations each optimiser
+ * needs to come within the target (of the optimum, or of the exact front's hypervolume).
  * @param problem - the problem.
  * @param options - trial plans, budgets and progress callback.
  * @returns the problem's section of report.json.
@@ -123,7 +124,12 @@ export async function runProblem(problem: BenchProblem, options: RunProblemOptio
     }
   }
   step("evaluations to target", done, total);
-  const toTarget = problem.kind === "single" ? await evaluationsToTarget(problem, exactValue, options.targets) : [];
+  const toTarget =
+    problem.kind === "single"
+      ? await evaluationsToTarget(problem, exactValue, options.targets)
+      : problem.kind === "two-objective"
+        ? await frontEvaluationsToTarget(problem, reference, exactValue, options.targets)
+        : [];
   step("done", total, total);
   return {
     name: problem.name,
