@@ -57,10 +57,11 @@ describe("loadPredictor matches the trainers", () => {
   });
 });
 
-describe("blocked MLP kernel", () => {
-  // 7 inputs, widths 5 and 6 (not multiples of 4), 3 targets: every remainder path of the 2 × 4 blocking.
-  const rng = seedrandom("kernel");
-  const widths = [7, 5, 6, 3];
+describe.each(["elu", "relu"] as const)("blocked MLP kernel (%s)", (activation) => {
+  // 7 inputs, widths 9 and 13 (not multiples of 4 or 8), 3 targets: every remainder path of the 2 × 4 dense
+  // blocking and, for relu, of the gathering kernel (one block of eight, four left over, then one).
+  const rng = seedrandom(`kernel-${activation}`);
+  const widths = [7, 9, 13, 3];
   const file = {
     kind: "floorcast.surrogate",
     formatVersion: 1,
@@ -70,7 +71,7 @@ describe("blocked MLP kernel", () => {
     inputScaling: { lower: Array(7).fill(0), upper: Array(7).fill(10) },
     outputScaling: { mean: [1, 2, 3], std: [2, 3, 4] },
     payload: {
-      activation: "elu",
+      activation,
       layers: widths.slice(1).map((w, l) => ({
         shape: [widths[l]!, w] as [number, number],
         weights: Array.from({ length: widths[l]! * w }, () => rng() * 2 - 1),
@@ -80,6 +81,7 @@ describe("blocked MLP kernel", () => {
     training: { n: 0, seed: 0, fitTimeMs: 0 },
   };
   const p = createMlpPredictor(file);
+  const hidden = (v: number) => (activation === "relu" ? Math.max(v, 0) : v > 0 ? v : Math.expm1(v));
 
   /** Naive reference: the textbook forward pass, one row at a time (derived from mlp-payload.ts). */
   function naive(x: number[]): number[] {
@@ -87,7 +89,7 @@ describe("blocked MLP kernel", () => {
     file.payload.layers.forEach((l, li) => {
       const out = l.bias.slice();
       for (let k = 0; k < l.shape[0]; k++) for (let j = 0; j < l.shape[1]; j++) out[j]! += h[k]! * l.weights[k * l.shape[1] + j]!;
-      h = li === file.payload.layers.length - 1 ? out : out.map((v) => (v > 0 ? v : Math.expm1(v)));
+      h = li === file.payload.layers.length - 1 ? out : out.map(hidden);
     });
     return h.map((v, j) => file.outputScaling.mean[j]! + file.outputScaling.std[j]! * v);
   }

@@ -1,4 +1,5 @@
 import { denseLayer, type ActivationCode } from "./dense-layer.js";
+import { interleaveWeights, sparseInputLayer } from "./sparse-input-layer.js";
 import type { ModelFileShape } from "./model-file-shape.js";
 import type { Predictor, PredictorOutput } from "./predictor.js";
 import { finiteVector, objectField, packRows, unpackRows } from "./predictor-checks.js";
@@ -72,6 +73,10 @@ export function createMlpPredictor(file: ModelFileShape): MlpPredictor {
     throw new RangeError(`${FN}: the last layer must have ${nOut} outputs (one per target), got ${dims[dims.length - 1]}`);
   }
   const widest = Math.max(...dims);
+  // Layers fed by a ReLU layer see mostly exact zeros: they run the gathering kernel (same sums).
+  const interleaved = wts.map((wt, l) => (l > 0 && act === 1 ? interleaveWeights(wt, dims[l]!, dims[l + 1]!) : null));
+  const idxBuf = new Int32Array(widest);
+  const valBuf = new Float64Array(widest);
   const bufA = new Float64Array(BLOCK * widest);
   const bufB = new Float64Array(BLOCK * widest);
   const nLayers = wts.length;
@@ -86,7 +91,10 @@ export function createMlpPredictor(file: ModelFileShape): MlpPredictor {
       let src = bufA;
       let dst = bufB;
       for (let l = 0; l < nLayers; l++) {
-        denseLayer(src, m, dims[l]!, wts[l]!, biases[l]!, dims[l + 1]!, dst, l === nLayers - 1 ? 0 : act!);
+        const a = l === nLayers - 1 ? 0 : act!;
+        const iw = interleaved[l];
+        if (iw) sparseInputLayer(src, m, dims[l]!, iw, biases[l]!, dims[l + 1]!, dst, a, idxBuf, valBuf);
+        else denseLayer(src, m, dims[l]!, wts[l]!, biases[l]!, dims[l + 1]!, dst, a);
         const t = src;
         src = dst;
         dst = t;
