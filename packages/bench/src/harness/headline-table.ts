@@ -37,7 +37,7 @@ export function headlineTable(report: BenchReport): { header: string[]; rows: st
         String(s.trainingSize),
         pct(s.medianGap),
         pct(s.worstGap),
-        p.kind === "single" ? pct(s.medianGapRefined) : "—",
+        p.kind === "two-objective" ? "—" : pct(s.medianGapRefined),
         num(s.medianR2),
         String(Math.round(s.medianEvaluations)),
         `${num(p.exactOptimum.value, 6)} (${p.exactOptimum.evaluations})`,
