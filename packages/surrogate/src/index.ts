@@ -58,6 +58,9 @@ export { modelFileSchema } from "./model-file/model-file-schema.js";
 export type { ModelFile } from "./model-file/model-file-schema.js";
 export { parseModelFile } from "./model-file/parse-model-file.js";
 export { loadSurrogate } from "./model-file/load-surrogate.js";
+export { sealModelFile, nodeSha256Hex } from "./model-file/seal-model-file.js";
+export { checkModelChecksum, CHECKSUM_PREFIX } from "./predict/check-model-checksum.js";
+export { canonicalJson } from "./predict/canonical-json.js";
 // Uncertainty for any surrogate: deep ensembles and split-conformal intervals (uncertainty/)
 export { EnsembleSurrogate } from "./uncertainty/ensemble-surrogate.js";
 export type { EnsembleTraining } from "./uncertainty/ensemble-surrogate.js";

@@ -5,6 +5,7 @@ import type { Prediction, Surrogate } from "../surrogate-types.js";
 import { checkMatrix } from "../check-training-data.js";
 import { MODEL_FILE_KIND, MODEL_FORMAT_VERSION } from "../model-file/model-file-version.js";
 import type { GpModelFile } from "../model-file/gp-model-file-schema.js";
+import { sealModelFile } from "../model-file/seal-model-file.js";
 import type { GpComponent } from "./gp-component.js";
 import type { GpDiagnostics } from "./gp-diagnostics.js";
 import type { KernelName } from "./kernels/kernel-name.js";
@@ -136,7 +137,7 @@ export class GaussianProcess implements Surrogate {
     const train = p.components[0]!.train;
     const xs: number[][] = [];
     for (let i = 0; i < train.n; i++) xs.push(Array.from(train.x.subarray(i * train.d, (i + 1) * train.d)));
-    return {
+    return sealModelFile({
       kind: MODEL_FILE_KIND,
       formatVersion: MODEL_FORMAT_VERSION,
       modelType: "gp",
@@ -164,7 +165,7 @@ export class GaussianProcess implements Surrogate {
         hyperparameterRows: p.diagnostics.hyperparameterRows,
         diagnostics: p.diagnostics.targets.map((t) => ({ ...t, conditionNumber: finiteOrNull(t.conditionNumber) })),
       },
-    };
+    });
   }
 }
 

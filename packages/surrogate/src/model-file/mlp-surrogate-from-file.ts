@@ -1,6 +1,7 @@
 import type { Prediction, Surrogate } from "../surrogate-types.js";
 import { createMlpPredictor, type MlpPredictor } from "../predict/mlp-predictor.js";
 import type { MlpModelFileParsed } from "./mlp-model-file-schema.js";
+import { sealModelFile } from "./seal-model-file.js";
 
 /**
  * An MLP loaded from its model file that predicts by plain Float64 arithmetic (the dependency-free
@@ -46,7 +47,7 @@ export class MlpFileSurrogate implements Surrogate {
 
   /** The model file it was loaded from. */
   toJSON(): MlpModelFileParsed {
-    return this.#file;
+    return sealModelFile(this.#file);
   }
 }
 

@@ -3,6 +3,7 @@ import type { Prediction, Surrogate } from "../surrogate-types.js";
 import type { ModelFileShape } from "../predict/model-file-shape.js";
 import type { MlpPayload } from "../predict/mlp-payload.js";
 import { checkMatrix } from "../check-training-data.js";
+import { sealModelFile } from "../model-file/seal-model-file.js";
 import { mlpForward, type DenseTensors } from "./mlp-forward.js";
 
 /** An "mlp" model file (the shared envelope with an {@link MlpPayload}). */
@@ -94,6 +95,6 @@ export class MlpSurrogate implements Surrogate {
 
   /** The versioned model file (JSON-ready). */
   toJSON(): MlpModelFile {
-    return this.#file;
+    return sealModelFile(this.#file);
   }
 }

@@ -1,4 +1,5 @@
 export { loadPredictor } from "./load-predictor.js";
+export { sha256Hex } from "./sha256.js";
 export type { Predictor, PredictorOutput } from "./predictor.js";
 export type { MlpPredictor } from "./mlp-predictor.js";
 export { createMlpPredictor } from "./mlp-predictor.js";

@@ -5,6 +5,8 @@ import { createMlpPredictor } from "./mlp-predictor.js";
 import { createGpPredictor } from "./gp-predictor.js";
 import { createEnsemblePredictor } from "./ensemble-predictor.js";
 import { createConformalPredictor } from "./conformal-predictor.js";
+import { checkModelChecksum } from "./check-model-checksum.js";
+import { sha256Hex } from "./sha256.js";
 
 const FN = "loadPredictor";
 
@@ -22,9 +24,18 @@ function names(label: string, v: unknown): string[] {
  * @param modelJson - the model file, as an object or a JSON string.
  * @returns `{ modelType, inputs, targets, predict(x) }`; predict takes rows × inputs in original
  *   units and gives `mean` (and `sd`, and for conformal files `interval`) as rows × targets.
- * @throws TypeError / RangeError naming the faulty field (wrong kind, unsupported format version, bad payload).
+ * The stored payload checksum ("sha256:…" over the canonical JSON, checked with the plain-TypeScript sha256Hex)
+ * must match: an edited or damaged file is refused; a file without one is accepted. A "__proto__" key is refused.
+ * @throws TypeError / RangeError naming the faulty field (wrong kind, unsupported format version, bad payload, checksum).
  */
 export function loadPredictor(modelJson: unknown): Predictor {
+  const predictor = buildPredictor(modelJson);
+  const raw = typeof modelJson === "string" ? (JSON.parse(modelJson) as Record<string, unknown>) : (modelJson as Record<string, unknown>);
+  checkModelChecksum(raw, sha256Hex, FN, "model file");
+  return predictor;
+}
+
+function buildPredictor(modelJson: unknown): Predictor {
   let raw = modelJson;
   if (typeof modelJson === "string") {
     try {

@@ -1,6 +1,7 @@
 import type { Prediction, Surrogate } from "../surrogate-types.js";
 import { conformalInterval } from "../predict/conformal-interval.js";
 import { memberEnvelope } from "./member-envelope.js";
+import { sealModelFile } from "../model-file/seal-model-file.js";
 
 /** The calibration a {@link ConformalSurrogate} carries. */
 export interface ConformalCalibration {
@@ -67,6 +68,6 @@ export class ConformalSurrogate implements Surrogate {
 
   /** The "conformal" model file, nesting the base's file. */
   toJSON(): Record<string, unknown> {
-    return this.#file;
+    return sealModelFile(this.#file);
   }
 }

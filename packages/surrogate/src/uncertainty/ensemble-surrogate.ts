@@ -2,6 +2,7 @@ import type { Prediction, Surrogate } from "../surrogate-types.js";
 import { mixtureOfMembers } from "../predict/mixture-of-members.js";
 import { memberEnvelope } from "./member-envelope.js";
 import { sameColumns } from "./same-columns.js";
+import { sealModelFile } from "../model-file/seal-model-file.js";
 
 /** Training summary of an ensemble file. */
 export interface EnsembleTraining {
@@ -71,6 +72,6 @@ export class EnsembleSurrogate implements Surrogate {
 
   /** The "ensemble" model file, nesting every member's file. */
   toJSON(): Record<string, unknown> {
-    return this.#file;
+    return sealModelFile(this.#file);
   }
 }
