@@ -42,8 +42,10 @@ function sampleLevel(q: readonly number[], rng: Rng): number {
  * Clerc & Kennedy (2002, IEEE TEC 6(1)): v ← χ[v + c1·r1·(p − x) + c2·r2·(g − x)], x ← x + v with
  * χ ≈ 0.7298 and c1 = c2 = 2.05 (φ = 4.1), global-best topology, velocities clamped to each
  * variable's range and absorbing walls. Personal and global bests compare by Deb's feasibility rules.
- * After `stallIterations` iterations in which no personal best improves, all particles but the leader
- * restart from a fresh Latin hypercube (a lattice swarm otherwise freezes once it collapses).
+ * After `stallIterations` iterations in which no personal best improves, or once the swarm has
+ * collapsed onto the leader’s best (within 1e-4 of each range), all particles but the leader
+ * restart from a fresh Latin hypercube (a lattice swarm otherwise freezes once it collapses, and a
+ * continuous one has spent its diversity).
  * A position already evaluated in the run is looked up rather than re-evaluated (no budget spent);
  * the run ends "converged" after 100 iterations without a new design.
  * Mixed variables: lattice coordinates (integer, stepped) are snapped to the lattice inside every
@@ -166,6 +168,10 @@ export async function particleSwarm(
       }
     });
     stall = improved ? 0 : stall + 1;
+    // A collapsed swarm (every particle within 1e-4 of the range of the leader's best) also restarts.
+    const g2 = leader().best;
+    const collapsed = swarm.every((p) => p.x.every((v, i) => (codec.categorical[i] ? v === g2[i] : Math.abs(v - g2[i]!) <= 1e-4 * (range[i]! || 1))));
+    if (collapsed) stall = stallLimit;
   }
   return session.result("budget");
 }
