@@ -40,7 +40,7 @@ export async function main(argv: readonly string[], io?: Partial<CommandContext>
       if (error.exitCode === 0) return EXIT_CODES.success;
       return EXIT_CODES.usage;
     }
-    if (error instanceof UsageError || error instanceof RangeError || error instanceof TypeError) {
+    if (error instanceof UsageError || error instanceof RangeError || error instanceof TypeError || isPathError(error)) {
       ctx.stderr.write(`floorcast: ${error.message}\n`);
       return EXIT_CODES.usage;
     }
@@ -48,4 +48,14 @@ export async function main(argv: readonly string[], io?: Partial<CommandContext>
     return EXIT_CODES.someFailed;
   }
   return exitCode;
+}
+
+/** File-system codes that mean a path the user gave cannot be read or written (a usage error, exit 2). */
+const PATH_ERROR_CODES = new Set(["ENOENT", "EACCES", "EPERM", "EISDIR", "ENOTDIR", "EEXIST", "EROFS", "ENAMETOOLONG"]);
+
+/** A Node system error about a path (not about starting a program: an evaluator that fails exits 1). */
+function isPathError(error: unknown): error is Error {
+  if (!(error instanceof Error)) return false;
+  const { code, syscall } = error as { code?: unknown; syscall?: unknown };
+  return typeof code === "string" && PATH_ERROR_CODES.has(code) && !(typeof syscall === "string" && syscall.startsWith("spawn"));
 }

@@ -10,8 +10,13 @@ const DECIMAL = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
 export function parseNumericCell(cell: string): number | string {
   const text = cell.trim();
   if (text === "") return "is empty";
-  if (!DECIMAL.test(text)) return `${JSON.stringify(cell)} is not a number`;
+  if (!DECIMAL.test(text)) return `${quoteCell(cell)} is not a number`;
   const value = Number(text);
-  if (!Number.isFinite(value)) return `${JSON.stringify(cell)} is not a finite number`;
+  if (!Number.isFinite(value)) return `${quoteCell(cell)} is not a finite number`;
   return value;
+}
+
+/** The cell quoted for a message, cut to its first 40 characters (a very long cell would flood the terminal). */
+function quoteCell(cell: string): string {
+  return cell.length > 40 ? `${JSON.stringify(cell.slice(0, 40))}… (${cell.length} characters)` : JSON.stringify(cell);
 }

@@ -45,6 +45,10 @@ export function createDesign(options: CreateDesignOptions): number[][] {
   if (typeof options !== "object" || options === null) throw new TypeError(`${fn}: options must be an object`);
   const n = checkCount(fn, "n", options.n);
   const dims = checkCount(fn, "dims", options.dims);
+  if (n * dims > MAX_DESIGN_VALUES) {
+    // A design is held whole (about 8 bytes per value plus per-row overhead): refuse before running out of memory.
+    throw new RangeError(`${fn}: n × dims = ${n * dims} values is more than a design held in memory may have (${MAX_DESIGN_VALUES})`);
+  }
   const rng = seededRandom(fn, options.seed);
   switch (options.design) {
     case "random":
@@ -70,6 +74,9 @@ export function createDesign(options: CreateDesignOptions): number[][] {
       throw new RangeError(`${fn}: design must be one of ${DESIGN_KINDS.join(", ")}, got ${String(options.design)}`);
   }
 }
+
+/** Most values (n × dims) a design may have: 5e7 doubles, about 0.4 GB before per-row overhead (common practice: fail with a message, not an out-of-memory crash). */
+const MAX_DESIGN_VALUES = 5e7;
 
 /** The default ESE outer-iteration count for n points (see CreateDesignOptions.eseIterations). */
 function defaultEseIterations(n: number): number {

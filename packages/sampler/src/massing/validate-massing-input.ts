@@ -1,5 +1,8 @@
 import type { MassingInput } from "./massing-types.js";
 
+/** Largest coordinate magnitude of a parcel vertex, in metres. */
+const MAX_COORDINATE = 1e9;
+
 const FN = "evaluateMassing";
 const LOT_LINE_KINDS = new Set(["front", "side", "rear", "street"]);
 const INPUT_KEYS = new Set([
@@ -83,6 +86,9 @@ export function validateMassingInput(input: unknown): asserts input is MassingIn
       const c: unknown = v[j];
       if (typeof c !== "number") throw typeError(`parcel.vertices[${i}][${j}]`, "a number", c);
       if (!Number.isFinite(c)) throw rangeError(`parcel.vertices[${i}][${j}]`, `must be finite, got ${c}`);
+      // Beyond 1e9 m (25 times the Earth's circumference) products of coordinates lose the lot's area to
+      // rounding and, near 1e154, overflow (derived); no parcel is that large.
+      if (Math.abs(c) > MAX_COORDINATE) throw rangeError(`parcel.vertices[${i}][${j}]`, `must be within ±1e9 m, got ${c}`);
     }
   }
   const lotLines = parcel.lotLines;

@@ -40,7 +40,7 @@ interface AssessOptions {
 }
 
 const int = (flag: string, v: string, min: number): number => {
-  const n = Number(v);
+  const n = v.trim() === "" ? NaN : Number(v); // Number("") is 0: a blank value is not zero
   if (!Number.isInteger(n) || n < min) throw new UsageError(`assess: ${flag} must be an integer ≥ ${min}, got ${v}`);
   return n;
 };

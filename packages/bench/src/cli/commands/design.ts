@@ -41,6 +41,7 @@ export function registerDesignCommand(program: Command, ctx: CommandContext): vo
     .action(async (opts: DesignOptions) => {
       const n = wholeNumber("n", opts.n);
       const dims = wholeNumber("dims", opts.dims);
+      wholeNumber("seed", opts.seed); // a seed is a whole number, as for sample and optimize
       if (!(DESIGN_KINDS as readonly string[]).includes(opts.design)) {
         throw new UsageError(`design: --design must be one of ${DESIGN_KINDS.join(", ")}, got ${JSON.stringify(opts.design)}`);
       }

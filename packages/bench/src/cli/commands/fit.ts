@@ -31,7 +31,7 @@ const names = (flag: string, v: string): string[] => {
 };
 
 const integer = (flag: string, v: string, min: number): number => {
-  const n = Number(v);
+  const n = v.trim() === "" ? NaN : Number(v); // Number("") is 0: a blank value is not zero
   if (!Number.isInteger(n) || n < min) throw new UsageError(`fit: ${flag} must be an integer ≥ ${min}, got ${v}`);
   return n;
 };
@@ -50,7 +50,7 @@ function addGpOptions(cmd: Command): void {
 const fitGp: FamilyFitter = async (data, opts, seed, say) => {
   const kernel = String(opts.kernel);
   if (!(KERNEL_NAMES as readonly string[]).includes(kernel)) throw new UsageError(`fit: --kernel must be one of ${KERNEL_NAMES.join(", ")}, got ${kernel}`);
-  const noise = opts.noise === undefined ? undefined : Number(opts.noise);
+  const noise = opts.noise === undefined ? undefined : String(opts.noise).trim() === "" ? NaN : Number(opts.noise);
   if (noise !== undefined && !(Number.isFinite(noise) && noise >= 0)) throw new UsageError(`fit: --noise must be a number ≥ 0, got ${String(opts.noise)}`);
   const subset = integer("--subset", String(opts.subset), 0);
   const gp = fitGaussianProcess(data, {

@@ -1,0 +1,60 @@
+import { Readable, Writable } from "node:stream";
+import { spawn } from "node:child_process";
+import { fileURLToPath } from "node:url";
+import { expect } from "vitest";
+import { main } from "@floorcast/bench";
+
+/** What one CLI run printed and returned. */
+export interface CliOutcome {
+  code: number;
+  out: string;
+  err: string;
+}
+
+/**
+ * Runs `floorcast` in-process (main, as bin/floorcast.js does) with captured streams and a given stdin.
+ * @param args - arguments after `floorcast`.
+ * @param stdin - text fed to the command's stdin.
+ */
+export async function runCliWithInput(args: string[], stdin = ""): Promise<CliOutcome> {
+  let out = "";
+  let err = "";
+  const sink = (f: (s: string) => void) => new Writable({ write: (c, _e, cb) => (f(String(c)), cb()) });
+  const code = await main(["node", "floorcast", ...args], {
+    stdin: Readable.from([stdin]),
+    stdout: sink((s) => (out += s)),
+    stderr: sink((s) => (err += s)),
+  });
+  return { code, out, err };
+}
+
+const BIN = fileURLToPath(new URL("../../packages/bench/bin/floorcast.js", import.meta.url));
+
+/**
+ * Spawns the real `floorcast` process, killed after `timeoutMs` (a hang fails the test, never blocks it).
+ * @returns exit status (null when killed), stdout, stderr.
+ */
+export function spawnCli(args: string[], stdin = "", timeoutMs = 20_000): Promise<{ code: number | null; out: string; err: string }> {
+  return new Promise((resolve) => {
+    const child = spawn(process.execPath, [BIN, ...args], { stdio: ["pipe", "pipe", "pipe"], timeout: timeoutMs, killSignal: "SIGKILL" });
+    let out = "";
+    let err = "";
+    child.stdout.on("data", (c: Buffer) => (out += c.toString()));
+    child.stderr.on("data", (c: Buffer) => (err += c.toString()));
+    child.on("close", (code) => resolve({ code, out, err }));
+    child.stdin.on("error", () => undefined);
+    child.stdin.end(stdin);
+  });
+}
+
+/**
+ * The shared contract of every command's outcome: the exit status is one of `allowed` (0 success, 1 some
+ * inputs failed, 2 usage error), no stack-trace frame ("    at ") anywhere, and a usage error says what is
+ * wrong in one line on stderr ("floorcast: …" or commander's "error: …").
+ */
+export function expectCleanOutcome(r: { code: number | null; out: string; err: string }, allowed: readonly number[], label = ""): void {
+  expect(allowed, `${label} exit ${r.code}: ${r.err.slice(0, 300)}`).toContain(r.code);
+  expect(r.err, label).not.toMatch(/^\s{4}at /m);
+  expect(r.out, label).not.toMatch(/^\s{4}at /m);
+  if (r.code === 2) expect(r.err, label).toMatch(/^(floorcast: \S|error: \S)/m);
+}
