@@ -23,8 +23,8 @@ export class MlpSurrogate implements Surrogate {
   readonly inputs: readonly string[];
   readonly targets: readonly string[];
   readonly #file: MlpModelFile;
-  readonly #scale: Float32Array;
-  readonly #shift: Float32Array;
+  readonly #lower: Float64Array;
+  readonly #scale: Float64Array;
   readonly #layers: { shape: [number, number]; w: Float32Array; b: Float32Array }[];
 
   /** @param file - a validated "mlp" model file. */
@@ -33,13 +33,30 @@ export class MlpSurrogate implements Surrogate {
     this.inputs = file.inputs;
     this.targets = file.targets;
     const { lower, upper } = file.inputScaling;
-    this.#scale = Float32Array.from(lower, (lo, j) => (upper[j]! > lo ? 2 / (upper[j]! - lo) : 0));
-    this.#shift = Float32Array.from(lower, (lo, j) => (upper[j]! > lo ? -1 - (2 * lo) / (upper[j]! - lo) : 0));
+    this.#lower = Float64Array.from(lower);
+    this.#scale = Float64Array.from(lower, (lo, j) => (upper[j]! > lo ? 2 / (upper[j]! - lo) : 0));
     this.#layers = file.payload.layers.map((l) => ({
       shape: [l.shape[0], l.shape[1]],
       w: Float32Array.from(l.weights),
       b: Float32Array.from(l.bias),
     }));
+  }
+
+  /**
+   * Rows mapped to [-1, 1] in float64 exactly as training maps them, z = 2 (x − lower) / (upper − lower) − 1, then
+   * stored as float32: scaling inside float32 tensors overflows for tiny spans (2/span > 3.4e38) and loses large offsets.
+   */
+  #scaled(x: readonly (readonly number[])[]): Float32Array {
+    const d = this.inputs.length;
+    const { upper } = this.#file.inputScaling;
+    const z = new Float32Array(x.length * d);
+    for (let i = 0; i < x.length; i++) {
+      for (let j = 0; j < d; j++) {
+        const w = upper[j]! - this.#lower[j]!;
+        z[i * d + j] = w > 0 ? (2 * (x[i]![j]! - this.#lower[j]!)) / w - 1 : 0;
+      }
+    }
+    return z;
   }
 
   #tensors(): DenseTensors[] {
@@ -57,7 +74,7 @@ export class MlpSurrogate implements Surrogate {
     const d = this.inputs.length;
     const t = this.targets.length;
     const out = tf.tidy(() => {
-      const z = tf.add(tf.mul(tf.tensor2d(x as number[][], [x.length, d]), this.#scale), this.#shift) as tf.Tensor2D;
+      const z = tf.tensor2d(this.#scaled(x), [x.length, d]);
       return mlpForward(z, this.#tensors(), this.#file.payload.activation).dataSync();
     });
     const { mean, std } = this.#file.outputScaling;
@@ -86,7 +103,7 @@ export class MlpSurrogate implements Surrogate {
         const layers = this.#tensors();
         const f = (z: tf.Tensor): tf.Scalar =>
           tf.sum(tf.slice(mlpForward(z as tf.Tensor2D, layers, this.#file.payload.activation), [0, j], [1, 1]));
-        const z = tf.add(tf.mul(tf.tensor2d([x as number[]], [1, d]), this.#scale), this.#shift);
+        const z = tf.tensor2d(this.#scaled([x]), [1, d]);
         const g = tf.grad(f)(z).dataSync();
         return Array.from({ length: d }, (_, k) => std[j]! * g[k]! * this.#scale[k]!);
       }),

@@ -49,7 +49,7 @@ export function createMlpPredictor(file: ModelFileShape): MlpPredictor {
   for (let j = 0; j < nIn; j++) {
     const w = upper[j]! - lower[j]!;
     scale[j] = w > 0 ? 2 / w : 0;
-    shift[j] = w > 0 ? -1 - scale[j]! * lower[j]! : 0;
+    shift[j] = w > 0 ? -1 : 0; // z = scale·(x − lower) − 1: subtracting lower first keeps large offsets exact
   }
   const dims: number[] = [nIn];
   const wts: Float64Array[] = [];
@@ -86,7 +86,7 @@ export function createMlpPredictor(file: ModelFileShape): MlpPredictor {
       const m = Math.min(BLOCK, rows - start);
       const base = start * nIn;
       for (let i = 0; i < m; i++) {
-        for (let j = 0; j < nIn; j++) bufA[i * nIn + j] = scale[j]! * x[base + i * nIn + j]! + shift[j]!;
+        for (let j = 0; j < nIn; j++) bufA[i * nIn + j] = scale[j]! * (x[base + i * nIn + j]! - lower[j]!) + shift[j]!;
       }
       let src = bufA;
       let dst = bufB;
@@ -108,7 +108,7 @@ export function createMlpPredictor(file: ModelFileShape): MlpPredictor {
 
   function gradient(x: readonly number[]): number[][] {
     const z = packRows("gradient", [x as number[]], nIn);
-    for (let j = 0; j < nIn; j++) z[j] = scale[j]! * z[j]! + shift[j]!;
+    for (let j = 0; j < nIn; j++) z[j] = scale[j]! * (z[j]! - lower[j]!) + shift[j]!;
     // Forward pass keeping every layer's pre-activation.
     const pre: Float64Array[] = [];
     let h = z;
