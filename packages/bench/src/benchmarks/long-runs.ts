@@ -1,0 +1,102 @@
+/**
+ * Long runs in bounded memory, measured side by side in one run (a script, not a test: `npm run bench:long` after
+ * a build). Each phase runs in its own child process, so its peak resident memory (process.resourceUsage().maxRSS,
+ * plus process.memoryUsage().rss sampled every 20 ms) is its own:
+ * - write: writeDataset streams a 1,000,000-row Ferrow Corner dataset (design "lhs") to CSV;
+ * - read: openTableStream reads it back one row at a time;
+ * - gp: a GP fitted on 1,000 rows predicts the mean and sd of 10,000 new points.
+ * Reported: rows per second and the peak RSS beside the size of the data (CSV bytes; 10,000 × 1,000 doubles for the
+ * GP's query × training cross-kernel if it were held whole). `FLOORCAST_LONG_ROWS` overrides the row count.
+ */
+import { execFileSync } from "node:child_process";
+import { mkdtempSync, rmSync, statSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { fileURLToPath } from "node:url";
+import { createDesign, loadScenario, openTableStream, writeDataset } from "@floorcast/sampler";
+import { fitGaussianProcess } from "@floorcast/surrogate";
+
+const ROWS = Number(process.env.FLOORCAST_LONG_ROWS ?? "1000000");
+const scenarioPath = fileURLToPath(new URL("../../../../datasets/scenarios/ferrow-corner.json", import.meta.url));
+
+interface PhaseResult {
+  phase: string;
+  items: number;
+  seconds: number;
+  peakRssMb: number;
+  sampledPeakRssMb: number;
+  startRssMb: number;
+  dataMb: number;
+}
+
+const mb = (bytes: number) => bytes / 2 ** 20;
+
+/** Runs one phase in this process, sampling RSS, and prints its result as JSON on stdout. */
+async function runPhase(phase: string, csv: string): Promise<void> {
+  const startRss = process.memoryUsage().rss;
+  let sampled = startRss;
+  const timer = setInterval(() => (sampled = Math.max(sampled, process.memoryUsage().rss)), 20);
+  const t0 = performance.now();
+  let items = 0;
+  let dataBytes = 0;
+  if (phase === "write") {
+    await writeDataset(await loadScenario(scenarioPath), { out: csv, n: ROWS, design: "lhs", seed: 11, force: true });
+    items = ROWS;
+    dataBytes = statSync(csv).size;
+  } else if (phase === "read") {
+    for await (const row of await openTableStream(csv, { categorical: ["limitedBy"] })) {
+      void row;
+      items++;
+    }
+    dataBytes = statSync(csv).size;
+  } else {
+    const d = 6;
+    const f = (r: number[]) => r.reduce((s, v, k) => s + Math.sin(3 * v + k) * (k + 1), 0);
+    const x = createDesign({ n: 1000, dims: d, design: "lhs", seed: 1 });
+    const gp = fitGaussianProcess({ inputs: ["a", "b", "c", "d", "e", "f"], targets: ["y"], x, y: x.map((r) => [f(r)]) }, { seed: 1, restarts: 1 });
+    const q = createDesign({ n: 10_000, dims: d, design: "random", seed: 2 });
+    const t1 = performance.now();
+    const p = gp.predict(q);
+    items = p.mean.length;
+    if (!p.sd || p.sd.some((r) => !Number.isFinite(r[0]))) throw new Error("gp: non-finite sd");
+    dataBytes = 8 * 10_000 * 1000;
+    clearInterval(timer);
+    const rss = Math.max(sampled, process.memoryUsage().rss);
+    console.log(JSON.stringify({ phase: "gp predict", items, seconds: (performance.now() - t1) / 1000, peakRssMb: process.resourceUsage().maxRSS / 1024, sampledPeakRssMb: mb(rss), startRssMb: mb(startRss), dataMb: mb(dataBytes) }));
+    return;
+  }
+  clearInterval(timer);
+  const rss = Math.max(sampled, process.memoryUsage().rss);
+  const result: PhaseResult = {
+    phase,
+    items,
+    seconds: (performance.now() - t0) / 1000,
+    peakRssMb: process.resourceUsage().maxRSS / 1024,
+    sampledPeakRssMb: mb(rss),
+    startRssMb: mb(startRss),
+    dataMb: mb(dataBytes),
+  };
+  console.log(JSON.stringify(result));
+}
+
+if (process.argv[2] === "--phase") {
+  await runPhase(process.argv[3]!, process.argv[4]!);
+} else {
+  const dir = mkdtempSync(join(tmpdir(), "floorcast-long-"));
+  const csv = join(dir, "long.csv");
+  const self = fileURLToPath(import.meta.url);
+  try {
+    console.log(`Long runs (each phase in its own process; peak RSS = process.resourceUsage().maxRSS)\n`);
+    console.log("phase | items | items/s | seconds | peak RSS (MB) | sampled peak RSS (MB) | data (MB) | peak RSS ÷ data");
+    for (const phase of ["write", "read", "gp"]) {
+      const out = execFileSync(process.execPath, [self, "--phase", phase, csv], { encoding: "utf8", maxBuffer: 1 << 20 });
+      const r = JSON.parse(out.trim().split("\n").at(-1)!) as PhaseResult;
+      console.log(
+        [r.phase, r.items.toLocaleString("en"), Math.round(r.items / r.seconds).toLocaleString("en"), r.seconds.toFixed(1), r.peakRssMb.toFixed(0), r.sampledPeakRssMb.toFixed(0), r.dataMb.toFixed(0), (r.peakRssMb / r.dataMb).toFixed(2)].join(" | "),
+      );
+    }
+    console.log("\nThe datasets are estimates for early feasibility studies, not a zoning determination.");
+  } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
+}
