@@ -89,6 +89,11 @@ describe("fitGaussianProcess edge cases", () => {
     const y = x.map((r) => [Math.sin(3 * r[0]!) + r[1]!]);
     const gp = fitGaussianProcess(data(x, y), { hyperparameterSubset: 40 });
     expect(gp.diagnostics.hyperparameterRows).toBe(40);
+    expect(gp.diagnostics.polishIterations).toBe(10);
+    // The polish starts at the subset optimum and only accepts likelihood increases (derived: monotone line search).
+    const unpolished = fitGaussianProcess(data(x, y), { hyperparameterSubset: 40, polishIterations: 0 });
+    expect(unpolished.diagnostics.polishIterations).toBe(0);
+    expect(gp.logMarginalLikelihood()[0]!).toBeGreaterThanOrEqual(unpolished.logMarginalLikelihood()[0]!);
     expect(gp.toJSON().payload.trainingInputs).toHaveLength(120);
     const full = fitGaussianProcess(data(x, y), { hyperparameterSubset: false });
     expect(full.diagnostics.hyperparameterRows).toBe(120);

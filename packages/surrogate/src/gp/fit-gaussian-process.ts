@@ -19,7 +19,8 @@ const FN = "fitGaussianProcess";
 /**
  * Fits a Gaussian-process surrogate: inputs to the unit cube, each target standardised, one independent GP per
  * target; hyperparameters by type-II maximum likelihood (analytic gradient, bounded projected L-BFGS, seeded
- * Latin-hypercube restarts), optionally on a greedy maximin subset of the rows, then conditioned on all rows
+ * Latin-hypercube restarts), optionally on a greedy maximin subset of the rows (then polished by a few iterations
+ * on all rows), then conditioned on all rows
  * (Rasmussen & Williams 2006, Alg. 2.1 and §5.4.1).
  * @param data - training rows (finite numbers; at least one row).
  * @param options - kernel, ARD, noise, bounds, restarts, seed, subset size, memory budget (see GaussianProcessOptions).
@@ -34,7 +35,8 @@ export function fitGaussianProcess(data: TrainingData, options: GaussianProcessO
   const d = data.inputs.length;
   const t = data.targets.length;
   const m = o.fixed ? 0 : o.subset === false ? n : Math.min(n, o.subset);
-  checkGpMemory(FN, n, d, t, m, o.memoryBudgetBytes);
+  const polish = m < n ? (o.polishIterations ?? (n <= 2000 ? 10 : 0)) : 0;
+  checkGpMemory(FN, n, d, t, polish > 0 ? n : m, o.memoryBudgetBytes);
   const inputScaling = createInputScaling(data.x, o.inputBounds);
   const outputScaling = createOutputScaling(data.y);
   const x = scaleInputs(inputScaling, data.x);
@@ -58,16 +60,14 @@ export function fitGaussianProcess(data: TrainingData, options: GaussianProcessO
       h = o.fixed[j]!;
     } else {
       const yFit = subsetRows ? Float64Array.from(subsetRows, (i) => y[i]!) : y;
-      const fit = fitHyperparameters(xFit, yFit, {
-        kernel: o.kernel,
-        layout,
-        ...o.search(layout),
-        restarts: o.restarts,
-        seed: o.seed + 7919 * j,
-        maxIterations: o.maxIterations,
-      });
-      h = hyperparametersFromTheta(layout, fit.theta);
+      const search = { kernel: o.kernel, layout, ...o.search(layout), restarts: o.restarts, seed: o.seed + 7919 * j, maxIterations: o.maxIterations };
+      let fit = fitHyperparameters(xFit, yFit, search);
       restarts = fit.restarts.map((r) => r.logMarginalLikelihood);
+      if (polish > 0) {
+        // Polish the subset's optimum on all rows: a few L-BFGS iterations from it (documented option).
+        fit = fitHyperparameters(x, y, { ...search, starts: [fit.theta], maxIterations: polish });
+      }
+      h = hyperparametersFromTheta(layout, fit.theta);
       onBounds = fit.onBound.flatMap((b, i) => (b ? [`${thetaName(layout, data.inputs, i)}=${b}`] : []));
     }
     const c = GpComponent.condition(train, y, o.kernel, h);
@@ -96,7 +96,7 @@ export function fitGaussianProcess(data: TrainingData, options: GaussianProcessO
     ard: o.ard,
     components,
     seed: o.seed,
-    diagnostics: { targets: diagnostics, fitTimeMs: performance.now() - started, hyperparameterRows: o.fixed ? 0 : m },
+    diagnostics: { targets: diagnostics, fitTimeMs: performance.now() - started, hyperparameterRows: o.fixed ? 0 : m, polishIterations: polish },
   });
 }
 

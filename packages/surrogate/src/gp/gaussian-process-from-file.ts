@@ -55,6 +55,7 @@ export function gaussianProcessFromFile(file: GpModelFile, fileName = "model fil
       targets,
       fitTimeMs: file.training.fitTimeMs,
       hyperparameterRows: typeof file.training.hyperparameterRows === "number" ? file.training.hyperparameterRows : n,
+      polishIterations: typeof file.training.polishIterations === "number" ? file.training.polishIterations : 0,
     },
   });
 }

@@ -38,6 +38,11 @@ export interface GaussianProcessOptions {
    * rows; `false` always fits on all rows [600].
    */
   readonly hyperparameterSubset?: number | false;
+  /**
+   * After a subset fit, at most this many L-BFGS iterations on all rows from the subset's optimum
+   * [10 when n ≤ 2,000, else 0]; 0 turns the polish off.
+   */
+  readonly polishIterations?: number;
   /** Refuse (RangeError) fits estimated to need more bytes than this [2 GiB]. */
   readonly memoryBudgetBytes?: number;
 }

@@ -163,6 +163,7 @@ export class GaussianProcess implements Surrogate {
         seed: p.seed,
         fitTimeMs: p.diagnostics.fitTimeMs,
         hyperparameterRows: p.diagnostics.hyperparameterRows,
+        polishIterations: p.diagnostics.polishIterations,
         diagnostics: p.diagnostics.targets.map((t) => ({ ...t, conditionNumber: finiteOrNull(t.conditionNumber) })),
       },
     });

@@ -20,4 +20,6 @@ export interface GpDiagnostics {
   readonly fitTimeMs: number;
   /** Rows the hyperparameters were fitted on (n when no subset was used). */
   readonly hyperparameterRows: number;
+  /** L-BFGS iterations on all rows after a subset fit (0 when none). */
+  readonly polishIterations: number;
 }

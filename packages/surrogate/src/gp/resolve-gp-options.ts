@@ -15,6 +15,7 @@ export interface ResolvedGpOptions {
   readonly seed: number;
   readonly maxIterations: number;
   readonly subset: number | false;
+  readonly polishIterations: number | undefined;
   readonly memoryBudgetBytes: number;
   /** Log-space bounds and start box for a layout. */
   search(layout: HyperparameterLayout): { logLower: Float64Array; logUpper: Float64Array; startLower: Float64Array; startUpper: Float64Array };
@@ -90,6 +91,7 @@ export function resolveGpOptions(fn: string, o: GaussianProcessOptions, d: numbe
     seed,
     maxIterations: int("options.maxIterations", o.maxIterations, 200, 1),
     subset,
+    polishIterations: o.polishIterations === undefined ? undefined : int("options.polishIterations", o.polishIterations, 0, 0),
     memoryBudgetBytes: positiveNumber(fn, "options.memoryBudgetBytes", o.memoryBudgetBytes ?? DEFAULT_GP_MEMORY_BUDGET),
     search(layout) {
       const nl = layout.ard ? layout.dims : 1;

@@ -43,7 +43,8 @@ function addGpOptions(cmd: Command): void {
     .option("--shared-lengthscale", "gp: one lengthscale for every input instead of one per input (ARD)")
     .option("--noise <variance>", "gp: fix the noise variance (standardised target units) instead of learning it")
     .option("--restarts <n>", "gp: optimiser starts per target", "3")
-    .option("--subset <m>", "gp: fit hyperparameters on a maximin subset of m rows, then condition on all (0 = all rows)", "600");
+    .option("--subset <m>", "gp: fit hyperparameters on a maximin subset of m rows, then condition on all (0 = all rows)", "600")
+    .option("--polish <k>", "gp: after a subset fit, at most k optimiser iterations on all rows (default 10 up to 2,000 rows, else 0)");
 }
 
 /** Fits `--model gp`. */
@@ -60,6 +61,7 @@ const fitGp: FamilyFitter = async (data, opts, seed, say) => {
     restarts: integer("--restarts", String(opts.restarts), 1),
     seed,
     hyperparameterSubset: subset === 0 ? false : subset,
+    polishIterations: opts.polish === undefined ? undefined : integer("--polish", String(opts.polish), 0),
   });
   gp.diagnostics.targets.forEach((t, j) => {
     say(`fit: ${t.target}: log marginal likelihood ${gp.logMarginalLikelihood()[j]!.toFixed(3)} (standardised target)`);

@@ -16,6 +16,8 @@ export interface HyperparameterSearch {
   readonly restarts: number;
   readonly seed: number;
   readonly maxIterations: number;
+  /** Start from these points instead of the Latin-hypercube starts (e.g. to polish a subset's optimum). */
+  readonly starts?: readonly Float64Array[];
 }
 
 /** One restart's outcome. */
@@ -60,7 +62,7 @@ export function fitHyperparameters(x: Float64Array, y: Float64Array, search: Hyp
       throw error;
     }
   };
-  const starts = latinStarts(Math.max(1, search.restarts), search.startLower, search.startUpper, search.seed, true);
+  const starts = search.starts ?? latinStarts(Math.max(1, search.restarts), search.startLower, search.startUpper, search.seed, true);
   const restarts: RestartSummary[] = [];
   let best: { theta: Float64Array; value: number } | undefined;
   for (const start of starts) {
