@@ -2,18 +2,21 @@
  * Long runs in bounded memory, measured side by side in one run (a script, not a test: `npm run bench:long` after
  * a build). Each phase runs in its own child process, so its peak resident memory (process.resourceUsage().maxRSS,
  * plus process.memoryUsage().rss sampled every 20 ms) is its own:
+ * - design: the part of writing held whole, the 1,000,000-row design and its parameter records (createDesign and
+ *   mapUnitToSpace; integer and categorical levels are balanced over the whole design, so it is computed whole);
  * - write: writeDataset streams a 1,000,000-row Ferrow Corner dataset (design "lhs") to CSV;
  * - read: openTableStream reads it back one row at a time;
  * - gp: a GP fitted on 1,000 rows predicts the mean and sd of 10,000 new points.
- * Reported: rows per second and the peak RSS beside the size of the data (CSV bytes; 10,000 × 1,000 doubles for the
- * GP's query × training cross-kernel if it were held whole). `FLOORCAST_LONG_ROWS` overrides the row count.
+ * Reported: rows per second, the RSS at the phase's start and its peak, and the growth beside the size of the data
+ * (CSV bytes; for the GP, 10,000 × 1,000 doubles: the query × training cross-kernel if it were held whole).
+ * `FLOORCAST_LONG_ROWS` overrides the row count.
  */
 import { execFileSync } from "node:child_process";
 import { mkdtempSync, rmSync, statSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
-import { createDesign, loadScenario, openTableStream, writeDataset } from "@floorcast/sampler";
+import { createDesign, loadScenario, mapUnitToSpace, openTableStream, writeDataset } from "@floorcast/sampler";
 import { fitGaussianProcess } from "@floorcast/surrogate";
 
 const ROWS = Number(process.env.FLOORCAST_LONG_ROWS ?? "1000000");
@@ -39,7 +42,12 @@ async function runPhase(phase: string, csv: string): Promise<void> {
   const t0 = performance.now();
   let items = 0;
   let dataBytes = 0;
-  if (phase === "write") {
+  if (phase === "design") {
+    const s = await loadScenario(scenarioPath);
+    const records = mapUnitToSpace({ parameters: s.parameters }, createDesign({ n: ROWS, dims: s.parameters.length, design: "lhs", seed: 11 }));
+    items = records.length;
+    dataBytes = statSync(csv).size;
+  } else if (phase === "write") {
     await writeDataset(await loadScenario(scenarioPath), { out: csv, n: ROWS, design: "lhs", seed: 11, force: true });
     items = ROWS;
     dataBytes = statSync(csv).size;
@@ -87,12 +95,23 @@ if (process.argv[2] === "--phase") {
   const self = fileURLToPath(import.meta.url);
   try {
     console.log(`Long runs (each phase in its own process; peak RSS = process.resourceUsage().maxRSS)\n`);
-    console.log("phase | items | items/s | seconds | peak RSS (MB) | sampled peak RSS (MB) | data (MB) | peak RSS ÷ data");
-    for (const phase of ["write", "read", "gp"]) {
+    console.log("phase | items | items/s | seconds | start RSS (MB) | peak RSS (MB) | sampled peak (MB) | growth (MB) | data (MB) | growth ÷ data");
+    for (const phase of ["write", "design", "read", "gp"]) {
       const out = execFileSync(process.execPath, [self, "--phase", phase, csv], { encoding: "utf8", maxBuffer: 1 << 20 });
       const r = JSON.parse(out.trim().split("\n").at(-1)!) as PhaseResult;
       console.log(
-        [r.phase, r.items.toLocaleString("en"), Math.round(r.items / r.seconds).toLocaleString("en"), r.seconds.toFixed(1), r.peakRssMb.toFixed(0), r.sampledPeakRssMb.toFixed(0), r.dataMb.toFixed(0), (r.peakRssMb / r.dataMb).toFixed(2)].join(" | "),
+        [
+          r.phase,
+          r.items.toLocaleString("en"),
+          Math.round(r.items / r.seconds).toLocaleString("en"),
+          r.seconds.toFixed(1),
+          r.startRssMb.toFixed(0),
+          r.peakRssMb.toFixed(0),
+          r.sampledPeakRssMb.toFixed(0),
+          (r.peakRssMb - r.startRssMb).toFixed(0),
+          r.dataMb.toFixed(0),
+          ((r.peakRssMb - r.startRssMb) / r.dataMb).toFixed(2),
+        ].join(" | "),
       );
     }
     console.log("\nThe datasets are estimates for early feasibility studies, not a zoning determination.");
