@@ -244,6 +244,20 @@ describe("every floorcast command under hostile input (in-process)", () => {
     }
   });
 
+  it("a model file without a checksum (written before checksums) is used, with a one-line note on stderr", async () => {
+    const { checksum, ...legacy } = JSON.parse(readFileSync(model, "utf8"));
+    expect(checksum).toMatch(/^sha256:/);
+    const m = file(JSON.stringify(legacy), "json");
+    const p = await run(["predict", "--model", m, "--data", goodCsv, "--out", outPath()]);
+    expectCleanOutcome(p, [0], "predict legacy");
+    expect(p.err).toMatch(/^predict: note: f\d+\.json has no checksum/m);
+    const a = await run(["assess", "--model", m, "--data", goodCsv, "--target", "y", "--out", outPath("d")]);
+    expectCleanOutcome(a, [0], "assess legacy");
+    expect(a.err).toMatch(/^assess: note: .* has no checksum/m);
+    const sealed = await run(["predict", "--model", model, "--data", goodCsv, "--out", outPath()]);
+    expect(sealed.err).not.toMatch(/no checksum/);
+  });
+
   it("sample, optimize and bench refuse hostile scenario and problem files with exit 2", async () => {
     const scen = readFileSync(scenario, "utf8");
     const prob = readFileSync(branin, "utf8");

@@ -22,6 +22,7 @@ import type { CommandContext } from "../command-context.js";
 import { UsageError } from "../usage-error.js";
 import { refitTrainer } from "../assess/refit-trainer.js";
 import { refuseOutsideDomain } from "../refuse-outside-domain.js";
+import { noteUnsealedModel } from "../note-unsealed-model.js";
 import { renderTrustHtml } from "../../report/trust-report-html.js";
 import { renderTrustMarkdown } from "../../report/trust-report-markdown.js";
 
@@ -91,6 +92,7 @@ async function runAssess(opts: AssessOptions, ctx: CommandContext): Promise<void
     throw new UsageError(`assess: ${basename(opts.model)} is not JSON (${(e as Error).message.replace(/\s+/g, " ")})`);
   }
   const model = loadSurrogate(json, basename(opts.model));
+  noteUnsealedModel("assess", basename(opts.model), json, ctx);
   if (!model.targets.includes(opts.target)) {
     throw new UsageError(`assess: --target ${opts.target} is not a target of the model (${model.targets.join(", ")})`);
   }

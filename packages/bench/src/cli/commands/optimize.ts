@@ -12,6 +12,7 @@ import { reevaluateSurrogateOptimum } from "../../harness/reevaluate-surrogate-o
 import { reportDesign } from "../../harness/report-design.js";
 import { OPTIMIZER_NAMES, runOptimizer, type OptimizerName } from "../../harness/run-optimizer.js";
 import { BENCH_CAUTION } from "../../harness/run-bench.js";
+import { noteUnsealedModel } from "../note-unsealed-model.js";
 
 interface OptimizeOptions {
   problem: string;
@@ -66,6 +67,7 @@ export function registerOptimizeCommand(program: Command, ctx: CommandContext): 
           throw new UsageError(`optimize: cannot read ${opts.surrogate} (${(error as NodeJS.ErrnoException).code ?? String(error)})`);
         }
         const model = loadSurrogate(text, opts.surrogate);
+        noteUnsealedModel("optimize", opts.surrogate, text, ctx);
         const want = problem.trainingVariables.map((v) => v.name);
         if (model.inputs.join(",") !== want.join(",")) {
           throw new UsageError(`optimize: ${opts.surrogate} has inputs ${model.inputs.join(", ")}; ${problem.name} needs ${want.join(", ")} in that order`);

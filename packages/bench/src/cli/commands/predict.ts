@@ -6,6 +6,7 @@ import { buildValidityDomain, domainOfModel, loadSurrogate } from "@floorcast/su
 import type { CommandContext } from "../command-context.js";
 import { UsageError } from "../usage-error.js";
 import { refuseOutsideDomain } from "../refuse-outside-domain.js";
+import { noteUnsealedModel } from "../note-unsealed-model.js";
 
 interface PredictOptions {
   model: string;
@@ -46,6 +47,7 @@ async function runPredict(opts: PredictOptions, ctx: CommandContext): Promise<vo
     throw new UsageError(`predict: cannot read model file ${opts.model}`);
   }
   const model = loadSurrogate(text, basename(opts.model));
+  noteUnsealedModel("predict", basename(opts.model), text, ctx);
   const table = await readTable(opts.data, { inputs: [...model.inputs], targets: [] });
   const trainX = opts.train ? (await readTable(opts.train, { inputs: [...model.inputs], targets: [] })).x : null;
   const domain = trainX ? buildValidityDomain(model.inputs, trainX) : domainOfModel(model);
