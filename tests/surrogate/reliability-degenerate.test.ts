@@ -33,6 +33,8 @@ const cases: { name: string; data: TrainingData; check?: (pred: number[], data: 
   { name: "targets spanning 0 to 1e12", data: make(base, base.map((r) => 1e11 * r[0]!)) },
   { name: "inputs near 1e15 with a span of 10", data: make(base.map((r) => [1e15 + r[0]!, r[1]!]), base.map(smooth)) },
   { name: "inputs of order 1e-300", data: make(base.map((r) => [r[0]! * 1e-300, r[1]!]), base.map(smooth)) },
+  { name: "targets of order 1e300 (their squares overflow)", data: make(base, base.map((r) => 1e299 * r[0]! - 5e299)) },
+  { name: "targets of both signs near 1e200", data: make(base, base.map((r) => (r[1]! - 2) * 1e200)) },
   { name: "two identical rows", data: make([[1, 1], [1, 1]], [5, 5]), check: (p) => p.forEach((v) => expect(v).toBeCloseTo(5, 6)) },
 ];
 

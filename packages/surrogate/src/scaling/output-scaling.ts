@@ -18,10 +18,23 @@ export function createOutputScaling(y: readonly (readonly number[])[]): OutputSc
   for (let j = 0; j < t; j++) {
     let s = 0;
     for (const row of y) s += row[j]!;
-    const m = s / n;
+    let m = s / n;
+    if (!Number.isFinite(m)) {
+      // The sum overflowed (targets near ±1.8e308): divide each term first.
+      m = 0;
+      for (const row of y) m += row[j]! / n;
+    }
     let ss = 0;
     for (const row of y) ss += (row[j]! - m) ** 2;
-    const sd = Math.sqrt(ss / n);
+    let sd = Math.sqrt(ss / n);
+    if (!Number.isFinite(sd)) {
+      // The squares overflowed (|y − mean| above ~1e154): scale by the largest deviation first (derived).
+      let big = 0;
+      for (const row of y) big = Math.max(big, Math.abs(row[j]! - m));
+      let rs = 0;
+      for (const row of y) rs += ((row[j]! - m) / big) ** 2;
+      sd = big * Math.sqrt(rs / n);
+    }
     mean.push(m);
     std.push(sd > 0 && Number.isFinite(sd) && sd > 1e-300 ? sd : 1);
   }
