@@ -12,7 +12,7 @@ const child = fileURLToPath(new URL("./helpers/read-rss.mjs", import.meta.url));
 // tests/sampler/dataset-memory.test.ts bounds the live heap while 200,000 generated rows are written and read;
 // this one bounds the resident set size (what the operating system sees) while a ~100 MB file is streamed.
 describe("streaming a large CSV keeps resident memory bounded", () => {
-  it("reading 66,000 rows of 1.5 kB (≈100 MB) grows RSS by well under a quarter of the file", () => {
+  it("reading 66,000 rows of 1.5 kB (≈100 MB) grows RSS by well under the size of the file", () => {
     const rows = 66_000;
     const text = execFileSync(process.execPath, ["--expose-gc", child, join(dir, "wide.csv"), String(rows), "1500"], {
       encoding: "utf8",
@@ -24,7 +24,7 @@ describe("streaming a large CSV keeps resident memory bounded", () => {
     expect(r.sum).toBe((rows * (rows - 1)) / 2); // every row read once, in order of a (derived: Σ i)
     expect(r.bytes).toBeGreaterThan(95e6);
     // Bound (derived): holding the rows, even only their text, would grow RSS by at least the file size; a stream
-    // holds one parser chunk and one row, so its growth stays under 25% of it (young-generation garbage included).
-    expect(r.peak - r.start).toBeLessThan(0.25 * r.bytes);
+    // holds one parser chunk and one row, so its growth stays well under it: measured 8–18 MB of a 100 MB file on an idle machine, more under load; the bound is 35% (the child collects garbage every 5,000 rows).
+    expect(r.peak - r.start, `RSS ${r.start} → ${r.peak} bytes for a ${r.bytes}-byte file`).toBeLessThan(0.35 * r.bytes);
   }, 60_000);
 });
