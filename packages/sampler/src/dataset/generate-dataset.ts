@@ -1,5 +1,5 @@
 import { createDesign, type DesignKind } from "../design/create-design.js";
-import { mapUnitToSpace } from "../space/map-unit-to-space.js";
+import { createUnitRowMapper } from "../space/unit-row-mapper.js";
 import type { Scenario } from "../scenario/scenario.js";
 import type { Evaluator, EvaluatorFunction, EvaluatorInput, EvaluatorOutput } from "../evaluator/evaluator.js";
 import { functionEvaluator } from "../evaluator/function-evaluator.js";
@@ -48,6 +48,9 @@ function checkOutput(out: unknown, sample: number, reserved: ReadonlySet<string>
   return keys;
 }
 
+/** Stands in for a unit row once its dataset row has been yielded. */
+const RELEASED: number[] = [];
+
 /**
  * Generates a dataset: the design (createDesign over the scenario's parameters, mapped by mapUnitToSpace), each
  * sample evaluated — by default with the exact massing rule — and yielded as a row in design order: `sample`,
@@ -78,8 +81,8 @@ export async function* generateDataset(scenario: Scenario, options: GenerateData
         ? functionEvaluator(options.evaluator)
         : options.evaluator;
   const unit = createDesign({ n: options.n, dims: scenario.parameters.length, design: options.design, seed: options.seed });
-  const records: (Record<string, number | string> | undefined)[] = mapUnitToSpace({ parameters: scenario.parameters }, unit);
-  unit.length = 0; // the unit rows are not needed any more; records are dropped as their rows are yielded
+  // Records are mapped row by row when needed (the rule of mapUnitToSpace): only the unit rows are held whole.
+  const recordOf = createUnitRowMapper({ parameters: scenario.parameters }, unit, "mapUnitToSpace");
   const names = scenario.parameters.map((p) => p.name);
   const reserved = new Set(["sample", ...names]);
   const inFlight: Promise<EvaluatorOutput>[] = [];
@@ -87,7 +90,7 @@ export async function* generateDataset(scenario: Scenario, options: GenerateData
   let next = start + skip;
   let columns: string[] | undefined;
   // Object.assign, not {...a, ...b}: V8 spreads two objects into one far more slowly (measured ~20×)
-  const inputOf = (i: number): EvaluatorInput => Object.assign({}, scenario.fixed, records[i]!);
+  const inputOf = (i: number): EvaluatorInput => Object.assign({}, scenario.fixed, recordOf(i));
   const launch = (i: number): void => {
     const p = Promise.resolve().then(() => evaluator.evaluate(inputOf(i)));
     p.catch(() => {});
@@ -105,8 +108,8 @@ export async function* generateDataset(scenario: Scenario, options: GenerateData
     }
     columns = checkOutput(out, i, reserved, columns);
     const row: Record<string, number | string | boolean> = { sample: i };
-    const record = records[i]!;
-    records[i] = undefined;
+    const record = recordOf(i);
+    unit[i] = RELEASED; // row i is never read again: free its coordinates as the run goes
     for (const name of names) row[name] = record[name]!;
     for (const k of columns) row[k] = out[k]!;
     yield row;
