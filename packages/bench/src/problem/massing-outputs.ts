@@ -1,19 +1,17 @@
+import { MASSING_OUTPUT_COLUMNS } from "@floorcast/sampler";
 import type { MassingResult } from "@floorcast/sampler";
 import type { Outputs } from "../optimise/optimisation-problem.js";
 
-/** The numeric MassingResult fields a problem may optimise or constrain. */
-export const MASSING_OUTPUTS = [
-  "lotArea",
-  "buildableArea",
-  "footprintArea",
-  "floors",
-  "height",
-  "gfa",
-  "far",
-  "coverage",
-  "openSpace",
-  "facadeLength",
-] as const;
+/** A numeric field of MassingResult. */
+type NumericMassingOutput = Exclude<(typeof MASSING_OUTPUT_COLUMNS)[number], "limitedBy" | "coverageCapped">;
+
+/**
+ * The numeric MassingResult fields a problem may optimise or constrain: the sampler's dataset
+ * columns without the categorical `limitedBy` and the flag `coverageCapped`.
+ */
+export const MASSING_OUTPUTS: readonly NumericMassingOutput[] = MASSING_OUTPUT_COLUMNS.filter(
+  (c): c is NumericMassingOutput => c !== "limitedBy" && c !== "coverageCapped",
+);
 
 /**
  * The numeric outputs of a massing result (every {@link MASSING_OUTPUTS} field), or all NaN when
