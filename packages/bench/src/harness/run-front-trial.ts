@@ -10,6 +10,7 @@ import { reportDesign } from "./report-design.js";
 import { surrogateEvaluator } from "./surrogate-evaluator.js";
 import type { TrialSetup } from "./run-single-trial.js";
 import { trainForTrial } from "./train-for-trial.js";
+import { trialRecordHead } from "./trial-record-head.js";
 
 /** The feasible non-dominated subset of exactly evaluated designs (objective senses respected). */
 function exactFront(problem: BenchProblem, designs: readonly EvaluatedDesign[]): EvaluatedDesign[] {
@@ -59,14 +60,7 @@ export async function runFrontTrial(
   const lead = [...survivors].sort((a, b) => (sense === "max" ? b.objectives[0]! - a.objectives[0]! : a.objectives[0]! - b.objectives[0]!))[0];
   const reported = lead ? reportDesign(problem, lead) : null;
   return {
-    surrogate: setup.trainer.name,
-    sampler: setup.sampler ?? "lhs-maximin",
-    trainingSize: setup.trainingSize,
-    seed: setup.seed,
-    design: reported?.design ?? null,
-    input: reported?.input ?? null,
-    result: reported?.result ?? null,
-    value: reported?.value ?? null,
+    ...trialRecordHead(setup, reported),
     gap: 1 - ratio,
     source,
     predicted: search.front[0]?.outputs ?? null,

@@ -11,6 +11,7 @@ import type { TrainingSet } from "./sample-training-set.js";
 import { trainForTrial } from "./train-for-trial.js";
 import { searchSurrogate } from "./search-surrogate.js";
 import { surrogateEvaluator } from "./surrogate-evaluator.js";
+import { trialRecordHead } from "./trial-record-head.js";
 
 /** What one surrogate trial needs besides the problem. */
 export interface TrialSetup {
@@ -79,14 +80,7 @@ export async function runSingleTrial(problem: BenchProblem, setup: TrialSetup): 
   const reported = chosen.exact ? reportDesign(problem, chosen.exact) : null;
   const training = train.designs.length;
   return {
-    surrogate: setup.trainer.name,
-    sampler: setup.sampler ?? "lhs-maximin",
-    trainingSize: setup.trainingSize,
-    seed: setup.seed,
-    design: reported?.design ?? null,
-    input: reported?.input ?? null,
-    result: reported?.result ?? null,
-    value: reported?.value ?? null,
+    ...trialRecordHead(setup, reported),
     gap: reported ? optimumGap(setup.exactValue, reported.value, sense) : null,
     source: chosen.source,
     predicted: chosen.predicted?.outputs ?? null,

@@ -16,6 +16,7 @@ import { spearmanRho } from "./spearman-rho.js";
 import { surrogateEvaluator } from "./surrogate-evaluator.js";
 import { topKOverlap } from "./top-k-overlap.js";
 import { trainForTrial } from "./train-for-trial.js";
+import { trialRecordHead } from "./trial-record-head.js";
 
 /**
  * One site-selection trial: a surrogate trained across sites estimates each site's best value by
@@ -86,14 +87,7 @@ export async function runSiteTrial(
   const senses = sense === "max" ? 1 : -1;
   const signed = (v: readonly number[]): number[] => v.map((x) => senses * x);
   return {
-    surrogate: setup.trainer.name,
-    sampler: setup.sampler ?? "lhs-maximin",
-    trainingSize: setup.trainingSize,
-    seed: setup.seed,
-    design: reported?.design ?? null,
-    input: reported?.input ?? null,
-    result: reported?.result ?? null,
-    value: reported?.value ?? null,
+    ...trialRecordHead(setup, reported),
     gap: reported ? optimumGap(setup.exactValue, reported.value, sense) : null,
     source: chosen.source,
     predicted: chosen.predicted?.outputs ?? null,
