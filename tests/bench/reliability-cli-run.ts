@@ -48,6 +48,28 @@ export function spawnCli(args: string[], stdin = "", timeoutMs = 20_000): Promis
 }
 
 /**
+ * Spawns the real `floorcast` process and SIGKILLs it as soon as `killNow(elapsedMs)` says so (polled every 5 ms),
+ * or after 120 s in any case.
+ * @returns exit status, the signal that ended it (SIGKILL when killed) and stderr.
+ */
+export function spawnUntil(args: string[], killNow: (elapsedMs: number) => boolean): Promise<{ code: number | null; signal: NodeJS.Signals | null; err: string }> {
+  return new Promise((resolve) => {
+    const t0 = Date.now();
+    const child = spawn(process.execPath, [BIN, ...args], { stdio: ["ignore", "ignore", "pipe"] });
+    let err = "";
+    child.stderr.on("data", (c: Buffer) => (err += c.toString()));
+    const timer = setInterval(() => {
+      const t = Date.now() - t0;
+      if (t > 120_000 || killNow(t)) child.kill("SIGKILL");
+    }, 5);
+    child.on("close", (code, signal) => {
+      clearInterval(timer);
+      resolve({ code, signal, err });
+    });
+  });
+}
+
+/**
  * The shared contract of every command's outcome: the exit status is one of `allowed` (0 success, 1 some
  * inputs failed, 2 usage error), no stack-trace frame ("    at ") anywhere, and a usage error says what is
  * wrong in one line on stderr ("floorcast: …" or commander's "error: …").

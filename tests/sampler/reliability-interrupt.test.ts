@@ -1,40 +1,18 @@
 import { afterAll, describe, expect, it } from "vitest";
-import { spawn } from "node:child_process";
 import { existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync, statSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import seedrandom from "seedrandom";
 import { loadScenario, writeDataset } from "@floorcast/sampler";
+import { spawnUntil } from "../bench/reliability-cli-run.js";
 
 const dir = mkdtempSync(join(tmpdir(), "floorcast-rel-kill-"));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
-const bin = fileURLToPath(new URL("../../packages/bench/bin/floorcast.js", import.meta.url));
 const scenarioPath = fileURLToPath(new URL("../../datasets/scenarios/ferrow-corner.json", import.meta.url));
 // n large enough that writing takes a second or two on the development machine.
 const N = 40_000;
 const args = ["sample", "--scenario", scenarioPath, "--n", String(N), "--seed", "3", "--design", "lhs"];
-
-/**
- * Runs `floorcast sample` and SIGKILLs it as soon as `killNow(elapsedMs)` says so (polled every 5 ms), or after
- * 60 s in any case: nothing may hang.
- */
-function runUntil(extra: string[], killNow: (elapsedMs: number) => boolean): Promise<{ code: number | null; signal: NodeJS.Signals | null; err: string }> {
-  return new Promise((resolve) => {
-    const t0 = Date.now();
-    const child = spawn(process.execPath, [bin, ...args, ...extra], { stdio: ["ignore", "ignore", "pipe"] });
-    let err = "";
-    child.stderr.on("data", (c: Buffer) => (err += c.toString()));
-    const timer = setInterval(() => {
-      const t = Date.now() - t0;
-      if (t > 60_000 || killNow(t)) child.kill("SIGKILL");
-    }, 5);
-    child.on("close", (code, signal) => {
-      clearInterval(timer);
-      resolve({ code, signal, err });
-    });
-  });
-}
 
 const sizeOf = (path: string) => (existsSync(path) ? statSync(path).size : 0);
 
@@ -61,7 +39,7 @@ describe("floorcast sample killed with SIGKILL and resumed", () => {
     while (!existsSync(out) && attempts < 8) {
       const killNow = attempts < plan.length ? plan[attempts]!() : () => false;
       attempts++;
-      const r = await runUntil(attempts === 1 ? ["--out", out] : ["--resume", "--out", out], killNow);
+      const r = await spawnUntil([...args, ...(attempts === 1 ? ["--out", out] : ["--resume", "--out", out])], killNow);
       if (r.signal === "SIGKILL") {
         kills++;
         // What a kill leaves behind is never the final file, and the rows on disk are a prefix of the true file
