@@ -1,6 +1,8 @@
 import type { Evaluator, EvaluatorInput } from "./evaluator.js";
 import { openCommandChannel } from "./command-channel.js";
 
+const MAX_TIMER_MS = 2_147_483_647;
+
 /** Options of {@link commandEvaluator}. */
 export interface CommandEvaluatorOptions {
   /** Inputs in flight per process (default 64): each program sees a stream, not one request at a time. */
@@ -9,6 +11,17 @@ export interface CommandEvaluatorOptions {
   readonly processes?: number;
   /** Working directory of the program. */
   readonly cwd?: string;
+  /**
+   * Longest wait for the next answer while samples are unanswered, in ms (default 300 000 = 5 minutes; 0 = no
+   * limit). Measured from the later of the sample's sending and the previous answer, so a full window of slow
+   * but steady answers does not count against it. When it passes, every program is stopped and the evaluation fails.
+   */
+  readonly timeoutMs?: number;
+  /**
+   * Time a program has to exit after the end of its input, and again after SIGTERM before SIGKILL, in ms
+   * (default: the smaller of 5 000 and timeoutMs, 5 000 when timeoutMs is 0).
+   */
+  readonly graceMs?: number;
 }
 
 /**
@@ -18,10 +31,14 @@ export interface CommandEvaluatorOptions {
  * and each sample goes to the copy with the fewest unanswered lines; the dataset generator still writes the
  * answers in design order, so the output does not depend on N.
  * @param command - a command line, run by the system shell (e.g. `python3 my_model.py`).
- * @param options - window per process, number of processes, working directory.
- * @returns the evaluator; `close` ends the programs' stdin and waits for them to exit.
- * @throws TypeError/RangeError for a bad command or option; evaluations reject when an answer is not a JSON object
- *   or a program exits early (its exit status and the end of its stderr are quoted).
+ * A program that does not answer within `timeoutMs` is stopped, with all its copies: SIGTERM to its process
+ * group, SIGKILL after `graceMs` (common practice for stopping a job), and the evaluation fails naming the line,
+ * the copy and the limit.
+ * @param options - window per process, number of processes, working directory, answer timeout, grace period.
+ * @returns the evaluator; `close` ends the programs' stdin and waits for them to exit, at most `graceMs`, then
+ *   stops them as above, so it always returns.
+ * @throws TypeError/RangeError for a bad command or option; evaluations reject when an answer is not a JSON object,
+ *   a program exits early (its exit status and the end of its stderr are quoted) or an answer times out.
  */
 export function commandEvaluator(command: string, options: CommandEvaluatorOptions = {}): Evaluator {
   const fn = "commandEvaluator";
@@ -32,7 +49,29 @@ export function commandEvaluator(command: string, options: CommandEvaluatorOptio
   if (!Number.isInteger(processes) || processes < 1) {
     throw new RangeError(`${fn}: processes must be an integer ≥ 1, got ${processes}`);
   }
-  const channels = Array.from({ length: processes }, () => openCommandChannel(fn, command, options.cwd));
+  const timeoutMs = options.timeoutMs ?? 300_000;
+  if (typeof timeoutMs !== "number") throw new TypeError(`${fn}: timeoutMs must be a number, got ${typeof timeoutMs}`);
+  // Node timers hold at most 2^31 − 1 ms (about 24.8 days)
+  if (!(timeoutMs >= 0 && timeoutMs <= MAX_TIMER_MS)) {
+    throw new RangeError(`${fn}: timeoutMs must be in [0, ${MAX_TIMER_MS}] ms (0 = no limit), got ${timeoutMs}`);
+  }
+  const graceMs = options.graceMs ?? (timeoutMs === 0 ? 5_000 : Math.min(5_000, timeoutMs));
+  if (typeof graceMs !== "number") throw new TypeError(`${fn}: graceMs must be a number, got ${typeof graceMs}`);
+  if (!(graceMs > 0 && graceMs <= MAX_TIMER_MS)) {
+    throw new RangeError(`${fn}: graceMs must be in (0, ${MAX_TIMER_MS}] ms, got ${graceMs}`);
+  }
+  const stopOthers = (e: Error): void => {
+    for (const c of channels) void c.stop(e);
+  };
+  const channels = Array.from({ length: processes }, (_, k) =>
+    openCommandChannel(fn, command, {
+      cwd: options.cwd,
+      timeoutMs,
+      graceMs,
+      label: `process ${k + 1} of ${processes}`,
+      onTimeout: stopOthers,
+    }),
+  );
   return {
     name: `command: ${command}`,
     concurrency: window * processes,

@@ -23,6 +23,7 @@ interface SampleOptions {
   force?: boolean;
   evaluatorCommand?: string;
   processes?: string;
+  evaluatorTimeout?: string;
   out: string;
 }
 
@@ -31,6 +32,15 @@ function wholeNumber(flag: string, text: string, min: number): number {
     throw new UsageError(`sample: ${flag} must be a whole number ≥ ${min}, got ${JSON.stringify(text)}`);
   }
   return Number(text);
+}
+
+/** Parses `--evaluator-timeout SECONDS` (decimals allowed, 0 = no limit) into milliseconds. */
+function timeoutSeconds(text: string): number {
+  const s = Number(text);
+  if (!/^\s*\d+(\.\d+)?\s*$/.test(text) || !(s * 1000 <= 2_147_483_647)) {
+    throw new UsageError(`sample: --evaluator-timeout must be a number of seconds in [0, 2147483] (0 = no limit), got ${JSON.stringify(text)}`);
+  }
+  return Math.ceil(s * 1000);
 }
 
 /**
@@ -52,6 +62,11 @@ export function registerSampleCommand(program: Command, ctx: CommandContext): vo
     .option("--force", "replace an existing output file")
     .option("--evaluator-command <cmd>", "evaluate with an external program speaking JSON Lines on stdin/stdout")
     .option("--processes <n>", "with --evaluator-command: copies of the program run side by side", "1")
+    .option(
+      "--evaluator-timeout <seconds>",
+      "with --evaluator-command: longest wait for an answer before the program is stopped and the run fails (0 = no limit)",
+      "300",
+    )
     .requiredOption("--out <file.csv>", "output CSV (manifest written beside it)")
     .action(async (opts: SampleOptions) => {
       const n = wholeNumber("--n", opts.n, 1);
@@ -65,8 +80,9 @@ export function registerSampleCommand(program: Command, ctx: CommandContext): vo
       if (processes > 1 && opts.evaluatorCommand === undefined) {
         throw new UsageError("sample: --processes needs --evaluator-command");
       }
+      const timeoutMs = timeoutSeconds(opts.evaluatorTimeout ?? "300");
       const evaluator: Evaluator | undefined =
-        opts.evaluatorCommand === undefined ? undefined : commandEvaluator(opts.evaluatorCommand, { processes });
+        opts.evaluatorCommand === undefined ? undefined : commandEvaluator(opts.evaluatorCommand, { processes, timeoutMs });
       let bar: ReturnType<typeof createProgressBar> | undefined;
       try {
         const manifest = await writeDataset(scenario, {

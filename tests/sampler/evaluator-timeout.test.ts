@@ -1,0 +1,184 @@
+import { afterAll, describe, expect, it } from "vitest";
+import { existsSync, mkdtempSync, readFileSync, readdirSync, rmSync, writeFileSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { commandEvaluator } from "@floorcast/sampler";
+
+// Tiny external programs stand in for a user's model; the limits are small (300 ms) so each test takes well
+// under two seconds. The bounds checked below are behaviour (the run ends), not speed measurements.
+const dir = mkdtempSync(join(tmpdir(), "floorcast-eval-timeout-"));
+afterAll(() => rmSync(dir, { recursive: true, force: true }));
+const node = JSON.stringify(process.execPath);
+
+/** Writes a program that records its pid in dir/pids/<pid> and then runs `body`. */
+function program(name: string, body: string): string {
+  const file = join(dir, name);
+  writeFileSync(
+    file,
+    `import { createInterface } from "node:readline";
+import { mkdirSync, writeFileSync } from "node:fs";
+mkdirSync(${JSON.stringify(join(dir, "pids", name))}, { recursive: true });
+writeFileSync(${JSON.stringify(join(dir, "pids", name))} + "/" + process.pid, "");
+${body}
+`,
+  );
+  return `${node} ${JSON.stringify(file)}`;
+}
+const pidsOf = (name: string): number[] => {
+  const d = join(dir, "pids", name);
+  return existsSync(d) ? readdirSync(d).map(Number) : [];
+};
+/** Whether a process still runs (a zombie, dead but not yet reaped, counts as gone). */
+function alive(pid: number): boolean {
+  try {
+    process.kill(pid, 0);
+  } catch {
+    return false;
+  }
+  try {
+    return !/^\d+ \(.*\) Z/.test(readFileSync(`/proc/${pid}/stat`, "utf8"));
+  } catch {
+    return false;
+  }
+}
+async function eventually(check: () => boolean, ms = 1000): Promise<boolean> {
+  const until = Date.now() + ms;
+  while (Date.now() < until) {
+    if (check()) return true;
+    await new Promise((r) => setTimeout(r, 20));
+  }
+  return check();
+}
+
+/** Reads lines and never answers; ignores SIGTERM, so only SIGKILL stops it. */
+const silentBody = `process.on("SIGTERM", () => {});
+for await (const line of createInterface({ input: process.stdin })) void line;
+setInterval(() => {}, 1000);`;
+/** Answers every line at once, then ignores the end of its input and SIGTERM. */
+const stubbornBody = `process.on("SIGTERM", () => {});
+for await (const line of createInterface({ input: process.stdin })) {
+  const x = JSON.parse(line);
+  process.stdout.write(JSON.stringify({ twice: 2 * x.a }) + "\\n");
+}
+setInterval(() => {}, 1000);`;
+/** Answers one line at a time, each 120 ms after the previous answer. */
+const slowBody = `const lines = [];
+let busy = false;
+const next = () => {
+  if (busy || lines.length === 0) return;
+  busy = true;
+  const x = JSON.parse(lines.shift());
+  setTimeout(() => { process.stdout.write(JSON.stringify({ twice: 2 * x.a }) + "\\n"); busy = false; next(); }, 120);
+};
+for await (const line of createInterface({ input: process.stdin })) { lines.push(line); next(); }`;
+/** Answers the first 3 lines, then goes silent (still reading). */
+const stallBody = `let k = 0;
+for await (const line of createInterface({ input: process.stdin })) {
+  if (++k <= 3) process.stdout.write(JSON.stringify({ twice: 2 * JSON.parse(line).a }) + "\\n");
+}
+setInterval(() => {}, 1000);`;
+
+describe("commandEvaluator answer timeout", () => {
+  it("a program that never answers fails the sample, naming the line and the limit, and is killed", async () => {
+    const cmd = program("silent.mjs", silentBody);
+    const e = commandEvaluator(cmd, { timeoutMs: 300, graceMs: 200 });
+    const t0 = Date.now();
+    const first = e.evaluate({ a: 1 });
+    const second = e.evaluate({ a: 2 });
+    await expect(first).rejects.toThrow(/commandEvaluator: no answer to line 1 within 0\.3 s from .*silent\.mjs.* \(process 1 of 1\); the program was stopped/);
+    await expect(second).rejects.toThrow(/no answer to line 1 within 0\.3 s/);
+    expect(Date.now() - t0).toBeGreaterThanOrEqual(290); // not before the limit (timer granularity ~ms)
+    await expect(e.evaluate({ a: 3 })).rejects.toThrow(/no answer to line 1/); // later samples fail at once
+    await e.close();
+    expect(Date.now() - t0).toBeLessThan(2500); // 300 ms + SIGTERM grace 200 ms + SIGKILL
+    const pids = pidsOf("silent.mjs");
+    expect(pids).toHaveLength(1);
+    expect(await eventually(() => !alive(pids[0]!))).toBe(true);
+  });
+
+  it("the limit runs from the previous answer: a slow but steady program with many lines in flight passes", async () => {
+    const cmd = program("slow.mjs", slowBody);
+    const e = commandEvaluator(cmd, { timeoutMs: 300, window: 8 });
+    try {
+      // the 8th answer arrives ~960 ms after it was sent, but only 120 ms after the 7th
+      const answers = await Promise.all(Array.from({ length: 8 }, (_, i) => e.evaluate({ a: i })));
+      expect(answers.map((o) => o.twice)).toEqual([0, 2, 4, 6, 8, 10, 12, 14]);
+    } finally {
+      await e.close();
+    }
+  });
+
+  it("timeoutMs: 0 waits as long as the program takes", async () => {
+    const cmd = program("slow0.mjs", slowBody);
+    const e = commandEvaluator(cmd, { timeoutMs: 0, graceMs: 500 });
+    try {
+      const answers = await Promise.all([1, 2, 3].map((a) => e.evaluate({ a })));
+      expect(answers.map((o) => o.twice)).toEqual([2, 4, 6]);
+    } finally {
+      await e.close();
+    }
+  });
+
+  it("with several processes, a stall in one stops every copy", async () => {
+    const cmd = program("stall.mjs", stallBody);
+    const e = commandEvaluator(cmd, { processes: 2, window: 4, timeoutMs: 300, graceMs: 200 });
+    const results = await Promise.allSettled(Array.from({ length: 8 }, (_, i) => e.evaluate({ a: i })));
+    // each copy answered its first 3 lines; the 4th line of one copy timed out and failed the rest
+    expect(results.filter((r) => r.status === "fulfilled")).toHaveLength(6);
+    const reasons = results.flatMap((r) => (r.status === "rejected" ? [String(r.reason)] : []));
+    expect(reasons).toHaveLength(2);
+    for (const m of reasons) expect(m).toMatch(/no answer to line 4 within 0\.3 s from .*\(process [12] of 2\)/);
+    await e.close();
+    const pids = pidsOf("stall.mjs");
+    expect(pids).toHaveLength(2);
+    expect(await eventually(() => pids.every((p) => !alive(p)))).toBe(true);
+  });
+
+  it("stops what the shell started too (a compound command line is not exec'd by the shell)", async () => {
+    const cmd = `cd ${JSON.stringify(dir)} && ${program("nested.mjs", silentBody)}`;
+    const e = commandEvaluator(cmd, { timeoutMs: 300, graceMs: 200 });
+    await expect(e.evaluate({ a: 1 })).rejects.toThrow(/no answer to line 1 within 0\.3 s/);
+    await e.close();
+    const pids = pidsOf("nested.mjs");
+    expect(pids).toHaveLength(1);
+    expect(await eventually(() => !alive(pids[0]!))).toBe(true);
+  });
+});
+
+describe("commandEvaluator bounded close", () => {
+  it("a program that answers, then ignores the end of its input and SIGTERM, is killed within the grace periods", async () => {
+    const cmd = program("stubborn.mjs", stubbornBody);
+    const e = commandEvaluator(cmd, { timeoutMs: 300, graceMs: 250 });
+    await expect(e.evaluate({ a: 21 })).resolves.toEqual({ twice: 42 });
+    const t0 = Date.now();
+    await e.close();
+    const took = Date.now() - t0;
+    expect(took).toBeGreaterThanOrEqual(450); // waited 250 ms for an exit, then 250 ms after SIGTERM
+    expect(took).toBeLessThan(2500);
+    const pids = pidsOf("stubborn.mjs");
+    expect(await eventually(() => !alive(pids[0]!))).toBe(true);
+  });
+
+  it("a program that exits on the end of its input closes at once; close twice is harmless", async () => {
+    const file = join(dir, "polite.mjs");
+    writeFileSync(file, `process.stdin.resume(); process.stdin.on("end", () => process.exit(0));`);
+    const e = commandEvaluator(`${node} ${JSON.stringify(file)}`, { timeoutMs: 300, graceMs: 1500 });
+    const t0 = Date.now();
+    await e.close();
+    await e.close();
+    expect(Date.now() - t0).toBeLessThan(1500);
+  });
+});
+
+describe("commandEvaluator timeout options", () => {
+  it("refuses bad limits with the field named", () => {
+    expect(() => commandEvaluator("cat", { timeoutMs: -1 })).toThrow(/commandEvaluator: timeoutMs must be in \[0, 2147483647\] ms.*got -1/);
+    expect(() => commandEvaluator("cat", { timeoutMs: Number.NaN })).toThrow(RangeError);
+    expect(() => commandEvaluator("cat", { timeoutMs: Number.POSITIVE_INFINITY })).toThrow(RangeError);
+    expect(() => commandEvaluator("cat", { timeoutMs: 2 ** 31 })).toThrow(RangeError);
+    expect(() => commandEvaluator("cat", { timeoutMs: "300" as never })).toThrow(TypeError);
+    expect(() => commandEvaluator("cat", { graceMs: 0 })).toThrow(/graceMs must be in \(0, 2147483647\] ms, got 0/);
+    expect(() => commandEvaluator("cat", { graceMs: Number.NEGATIVE_INFINITY })).toThrow(RangeError);
+    expect(() => commandEvaluator("cat", { graceMs: "1" as never })).toThrow(TypeError);
+  });
+});
