@@ -1,11 +1,11 @@
-import { denseLayer, type ActivationCode } from "./dense-layer.js";
-import { interleaveWeights, sparseInputLayer } from "./sparse-input-layer.js";
+import { activate, DENSE_TILE, denseLayer, packDenseWeights, type ActivationCode } from "./dense-layer.js";
 import type { ModelFileShape } from "./model-file-shape.js";
 import type { Predictor, PredictorOutput } from "./predictor.js";
 import { finiteVector, objectField, packRows, unpackRows } from "./predictor-checks.js";
 
 const FN = "loadPredictor";
-const BLOCK = 256;
+const PANEL = DENSE_TILE.rows;
+const BLOCK = 64 * PANEL;
 const ACTIVATIONS: Record<string, ActivationCode> = { relu: 1, tanh: 2, elu: 3 };
 
 /** A plain-arithmetic MLP predictor that can also fill caller-owned buffers. */
@@ -26,7 +26,8 @@ export interface MlpPredictor extends Predictor {
 /**
  * Builds a dependency-free predictor from an "mlp" model file (payload described in mlp-payload.ts):
  * inputs mapped from bounds to [-1, 1], dense layers with the hidden activation, a linear output
- * layer, then de-standardised targets. Runs blocks of 256 rows through preallocated Float64Arrays.
+ * layer, then de-standardised targets. Runs blocks of 192 rows through one preallocated Float64Array
+ * (activations, packed weights and biases; see dense-layer.ts).
  * @param file - a model file whose modelType is "mlp" (structure checked here; zod validation is the loader's).
  * @returns the predictor.
  * @throws TypeError / RangeError naming the faulty field.
@@ -54,6 +55,7 @@ export function createMlpPredictor(file: ModelFileShape): MlpPredictor {
   const dims: number[] = [nIn];
   const wts: Float64Array[] = [];
   const biases: Float64Array[] = [];
+  const panels: Float64Array[] = [];
   (payload.layers as unknown[]).forEach((raw, l) => {
     const layer = objectField(FN, `payload.layers[${l}]`, raw);
     const shape = layer.shape;
@@ -66,42 +68,51 @@ export function createMlpPredictor(file: ModelFileShape): MlpPredictor {
     const wt = new Float64Array(din * dout);
     for (let k = 0; k < din; k++) for (let j = 0; j < dout; j++) wt[j * din + k] = w[k * dout + j]!;
     wts.push(wt);
+    panels.push(packDenseWeights(w, din, dout));
     biases.push(finiteVector(FN, `payload.layers[${l}].bias`, layer.bias, dout));
     dims.push(dout);
   });
   if (dims[dims.length - 1] !== nOut) {
     throw new RangeError(`${FN}: the last layer must have ${nOut} outputs (one per target), got ${dims[dims.length - 1]}`);
   }
-  const widest = Math.max(...dims);
-  // Layers fed by a ReLU layer see mostly exact zeros: they run the gathering kernel (same sums).
-  const interleaved = wts.map((wt, l) => (l > 0 && act === 1 ? interleaveWeights(wt, dims[l]!, dims[l + 1]!) : null));
-  const idxBuf = new Int32Array(widest);
-  const valBuf = new Float64Array(widest);
-  const bufA = new Float64Array(BLOCK * widest);
-  const bufB = new Float64Array(BLOCK * widest);
   const nLayers = wts.length;
+  // The arena: two activation blocks, then each layer's packed weights and zero-padded biases.
+  const half = BLOCK * Math.max(...dims);
+  const wOff: number[] = [];
+  const bOff: number[] = [];
+  let size = 2 * half;
+  for (let l = 0; l < nLayers; l++) {
+    wOff.push(size);
+    size += panels[l]!.length;
+    bOff.push(size);
+    size += 4 * Math.ceil(dims[l + 1]! / 4);
+  }
+  const mem = new Float64Array(size);
+  for (let l = 0; l < nLayers; l++) {
+    mem.set(panels[l]!, wOff[l]);
+    mem.set(biases[l]!, bOff[l]);
+  }
 
   function predictInto(x: Float64Array, rows: number, out: Float64Array): void {
     for (let start = 0; start < rows; start += BLOCK) {
       const m = Math.min(BLOCK, rows - start);
       const base = start * nIn;
       for (let i = 0; i < m; i++) {
-        for (let j = 0; j < nIn; j++) bufA[i * nIn + j] = scale[j]! * (x[base + i * nIn + j]! - lower[j]!) + shift[j]!;
+        const at = (i - (i % PANEL)) * nIn + (i % PANEL);
+        for (let j = 0; j < nIn; j++) mem[at + j * PANEL] = scale[j]! * (x[base + i * nIn + j]! - lower[j]!) + shift[j]!;
       }
-      let src = bufA;
-      let dst = bufB;
+      let src = 0;
+      let dst = half;
       for (let l = 0; l < nLayers; l++) {
-        const a = l === nLayers - 1 ? 0 : act!;
-        const iw = interleaved[l];
-        if (iw) sparseInputLayer(src, m, dims[l]!, iw, biases[l]!, dims[l + 1]!, dst, a, idxBuf, valBuf);
-        else denseLayer(src, m, dims[l]!, wts[l]!, biases[l]!, dims[l + 1]!, dst, a);
+        denseLayer(mem, src, m, dims[l]!, wOff[l]!, bOff[l]!, dims[l + 1]!, dst, l === nLayers - 1 ? 0 : act!);
         const t = src;
         src = dst;
         dst = t;
       }
       const o = start * nOut;
       for (let i = 0; i < m; i++) {
-        for (let j = 0; j < nOut; j++) out[o + i * nOut + j] = yMean[j]! + yStd[j]! * src[i * nOut + j]!;
+        const at = src + (i - (i % PANEL)) * nOut + (i % PANEL);
+        for (let j = 0; j < nOut; j++) out[o + i * nOut + j] = yMean[j]! + yStd[j]! * mem[at + j * PANEL]!;
       }
     }
   }
@@ -113,10 +124,15 @@ export function createMlpPredictor(file: ModelFileShape): MlpPredictor {
     const pre: Float64Array[] = [];
     let h = z;
     for (let l = 0; l < nLayers; l++) {
-      const a = new Float64Array(dims[l + 1]!);
-      denseLayer(h, 1, dims[l]!, wts[l]!, biases[l]!, dims[l + 1]!, a, 0);
+      const din = dims[l]!;
+      const wt = wts[l]!;
+      const a = Float64Array.from(biases[l]!, (b, j) => {
+        let s = b;
+        for (let k = 0; k < din; k++) s += h[k]! * wt[j * din + k]!;
+        return s;
+      });
       pre.push(a);
-      h = l === nLayers - 1 ? a : a.map((v) => (act === 1 ? (v > 0 ? v : 0) : act === 2 ? Math.tanh(v) : v > 0 ? v : Math.expm1(v)));
+      h = l === nLayers - 1 ? a : a.map((v) => activate(v, act));
     }
     const grads: number[][] = [];
     for (let t = 0; t < nOut; t++) {
