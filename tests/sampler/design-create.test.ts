@@ -6,7 +6,7 @@ import { eseOptimise } from "../../packages/sampler/src/design/ese-optimise.js";
 import { latinHypercube } from "../../packages/sampler/src/design/latin-hypercube.js";
 import seedrandom from "seedrandom";
 
-const LHS_KINDS: DesignKind[] = ["lhs", "lhs-centred", "lhs-maximin"];
+const LHS_KINDS: DesignKind[] = ["lhs", "lhs-centred", "lhs-maximin", "lhs-maximin-cd"];
 
 describe("createDesign", () => {
   it("every LHS method has the Latin property (property test over n, d, seed)", () => {
