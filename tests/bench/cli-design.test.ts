@@ -1,23 +1,14 @@
 import { afterAll, describe, expect, it } from "vitest";
-import { PassThrough, Writable } from "node:stream";
 import { existsSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import { main } from "@floorcast/bench";
+import { runCli } from "./run-cli.js";
 import { createDesign, isLatin, readTable } from "@floorcast/sampler";
 
 const dir = mkdtempSync(join(tmpdir(), "floorcast-design-"));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
-async function run(args: string[]): Promise<{ code: number; out: string; err: string }> {
-  let out = "";
-  let err = "";
-  const sink = (f: (s: string) => void) => new Writable({ write(chunk, _enc, cb) { f(String(chunk)); cb(); } });
-  const stdin = new PassThrough();
-  stdin.end();
-  const code = await main(["node", "floorcast", ...args], { stdin, stdout: sink((s) => (out += s)), stderr: sink((s) => (err += s)) });
-  return { code, out, err };
-}
+const run = (args: string[]) => runCli(args);
 
 describe("floorcast design", () => {
   it("writes x1..xD columns holding exactly createDesign's points, for every design", async () => {

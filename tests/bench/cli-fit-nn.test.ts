@@ -4,8 +4,7 @@ import { mkdtempSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
-import { PassThrough } from "node:stream";
-import { main } from "@floorcast/bench";
+import { runCli } from "./run-cli.js";
 import { loadSurrogate } from "@floorcast/surrogate";
 
 const bin = fileURLToPath(new URL("../../packages/bench/bin/floorcast.js", import.meta.url));
@@ -13,11 +12,8 @@ const run = (args: string[]) => spawnSync(process.execPath, [bin, ...args], { en
 
 /** The CLI in-process (faster than a process per case), capturing stderr. */
 const runHere = async (args: string[]): Promise<{ status: number; stderr: string }> => {
-  const err = new PassThrough();
-  let stderr = "";
-  err.on("data", (c: Buffer) => (stderr += c.toString()));
-  const status = await main(["node", "floorcast", ...args], { stdout: new PassThrough(), stderr: err });
-  return { status, stderr };
+  const r = await runCli(args);
+  return { status: r.code, stderr: r.err };
 };
 
 let dir = "";

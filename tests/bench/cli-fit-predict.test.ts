@@ -4,22 +4,15 @@ import { mkdtempSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
-import { PassThrough } from "node:stream";
-import { main } from "@floorcast/bench";
+import { runCli } from "./run-cli.js";
 import { loadSurrogate } from "@floorcast/surrogate";
 
 const bin = fileURLToPath(new URL("../../packages/bench/bin/floorcast.js", import.meta.url));
 const run = (args: string[]) => spawnSync(process.execPath, [bin, ...args], { encoding: "utf8" });
 /** The same CLI in-process (much faster than a process per case), capturing stdout and stderr. */
 const runHere = async (args: string[]): Promise<{ status: number; stdout: string; stderr: string }> => {
-  const out = new PassThrough();
-  const err = new PassThrough();
-  let stdout = "";
-  let stderr = "";
-  out.on("data", (c: Buffer) => (stdout += c.toString()));
-  err.on("data", (c: Buffer) => (stderr += c.toString()));
-  const status = await main(["node", "floorcast", ...args], { stdout: out, stderr: err });
-  return { status, stdout, stderr };
+  const r = await runCli(args);
+  return { status: r.code, stdout: r.out, stderr: r.err };
 };
 // Forrester et al. (2008), f(x) = (6x − 2)² sin(12x − 4); minimum −6.0207400558 at 0.7572487585 (VLSE).
 const forrester = (x: number): number => (6 * x - 2) ** 2 * Math.sin(12 * x - 4);

@@ -1,30 +1,16 @@
 import { describe, expect, it } from "vitest";
-import { PassThrough, Writable } from "node:stream";
 import { mkdtempSync, readFileSync, writeFileSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { spawnSync } from "node:child_process";
 import { fileURLToPath } from "node:url";
-import { main } from "@floorcast/bench";
+import { runCli } from "./run-cli.js";
 import { evaluateMassing, quadParcel } from "@floorcast/sampler";
 import type { MassingInput } from "@floorcast/sampler";
 
 const bin = fileURLToPath(new URL("../../packages/bench/bin/floorcast.js", import.meta.url));
 
-async function run(args: string[], stdinText = ""): Promise<{ code: number; out: string; err: string }> {
-  const stdin = new PassThrough();
-  stdin.end(stdinText);
-  let out = "";
-  let err = "";
-  const sink = (f: (s: string) => void) =>
-    new Writable({ write(chunk, _enc, cb) { f(String(chunk)); cb(); } });
-  const code = await main(["node", "floorcast", ...args], {
-    stdin,
-    stdout: sink((s) => (out += s)),
-    stderr: sink((s) => (err += s)),
-  });
-  return { code, out, err };
-}
+const run = (args: string[], stdinText = "") => runCli(args, stdinText);
 
 // A Larkspur Terraces-like small residential lot of the invented district Quillmere, and a Ferrow Corner-like
 // corner lot with a sky plane.

@@ -1,10 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { PassThrough } from "node:stream";
 import { existsSync, mkdtempSync, readFileSync, rmSync, statSync, truncateSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
-import { main } from "@floorcast/bench";
+import { runCli } from "./run-cli.js";
 
 const scenario = fileURLToPath(new URL("../../datasets/scenarios/larkspur-terraces.json", import.meta.url));
 const dir = mkdtempSync(join(tmpdir(), "floorcast-cli-sample-"));
@@ -17,14 +16,8 @@ afterAll(() => {
 
 /** Runs the CLI in-process (main, as bin/floorcast.js does) with captured streams. */
 async function floorcast(...args: string[]): Promise<{ status: number; stdout: string; stderr: string }> {
-  const out = new PassThrough();
-  const err = new PassThrough();
-  let stdout = "";
-  let stderr = "";
-  out.on("data", (c: Buffer) => (stdout += c.toString()));
-  err.on("data", (c: Buffer) => (stderr += c.toString()));
-  const status = await main(["node", "floorcast", ...args], { stdout: out, stderr: err });
-  return { status, stdout, stderr };
+  const r = await runCli(args);
+  return { status: r.code, stdout: r.out, stderr: r.err };
 }
 const base = ["sample", "--scenario", scenario, "--n", "40", "--seed", "5", "--design", "lhs"];
 const same = (a: string, b: string) => readFileSync(join(dir, a)).equals(readFileSync(join(dir, b)));

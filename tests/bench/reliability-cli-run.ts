@@ -1,32 +1,6 @@
-import { Readable, Writable } from "node:stream";
 import { spawn } from "node:child_process";
 import { fileURLToPath } from "node:url";
 import { expect } from "vitest";
-import { main } from "@floorcast/bench";
-
-/** What one CLI run printed and returned. */
-export interface CliOutcome {
-  code: number;
-  out: string;
-  err: string;
-}
-
-/**
- * Runs `floorcast` in-process (main, as bin/floorcast.js does) with captured streams and a given stdin.
- * @param args - arguments after `floorcast`.
- * @param stdin - text fed to the command's stdin.
- */
-export async function runCliWithInput(args: string[], stdin = ""): Promise<CliOutcome> {
-  let out = "";
-  let err = "";
-  const sink = (f: (s: string) => void) => new Writable({ write: (c, _e, cb) => (f(String(c)), cb()) });
-  const code = await main(["node", "floorcast", ...args], {
-    stdin: Readable.from([stdin]),
-    stdout: sink((s) => (out += s)),
-    stderr: sink((s) => (err += s)),
-  });
-  return { code, out, err };
-}
 
 const BIN = fileURLToPath(new URL("../../packages/bench/bin/floorcast.js", import.meta.url));
 

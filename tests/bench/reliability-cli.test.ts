@@ -6,7 +6,8 @@ import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { evaluateMassing, readTable } from "@floorcast/sampler";
 import { loadSurrogate } from "@floorcast/surrogate";
-import { expectCleanOutcome, runCliWithInput as run, spawnCli } from "./reliability-cli-run.js";
+import { expectCleanOutcome, spawnCli } from "./reliability-cli-run.js";
+import { runCli as run } from "./run-cli.js";
 
 const dir = mkdtempSync(join(tmpdir(), "floorcast-rel-cli-"));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
