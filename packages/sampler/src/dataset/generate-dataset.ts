@@ -2,8 +2,7 @@ import { createDesign, type DesignKind } from "../design/create-design.js";
 import { createUnitRowMapper } from "../space/unit-row-mapper.js";
 import type { Scenario } from "../scenario/scenario.js";
 import type { Evaluator, EvaluatorFunction, EvaluatorInput, EvaluatorOutput } from "../evaluator/evaluator.js";
-import { functionEvaluator } from "../evaluator/function-evaluator.js";
-import { massingEvaluator } from "../evaluator/massing-evaluator.js";
+import { resolveEvaluator } from "../evaluator/resolve-evaluator.js";
 import type { DatasetRow } from "./dataset-row.js";
 import type { Shard } from "./shard.js";
 import { shardRange } from "./shard-range.js";
@@ -74,12 +73,7 @@ export async function* generateDataset(scenario: Scenario, options: GenerateData
   if (!Number.isSafeInteger(skip) || skip < 0 || skip > end - start) {
     throw new RangeError(`${fn}: skip must be an integer in [0, ${end - start}], got ${skip}`);
   }
-  const evaluator: Evaluator =
-    options.evaluator === undefined
-      ? massingEvaluator(scenario)
-      : typeof options.evaluator === "function"
-        ? functionEvaluator(options.evaluator)
-        : options.evaluator;
+  const evaluator = resolveEvaluator(scenario, options.evaluator);
   const unit = createDesign({ n: options.n, dims: scenario.parameters.length, design: options.design, seed: options.seed });
   // Records are mapped row by row when needed (the rule of mapUnitToSpace): only the unit rows are held whole.
   const recordOf = createUnitRowMapper({ parameters: scenario.parameters }, unit, "mapUnitToSpace");

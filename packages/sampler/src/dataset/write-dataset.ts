@@ -4,8 +4,7 @@ import { basename, dirname } from "node:path";
 import { createCsvWriter, type CsvWriter } from "../csv/create-csv-writer.js";
 import type { DesignKind } from "../design/create-design.js";
 import type { Evaluator, EvaluatorFunction } from "../evaluator/evaluator.js";
-import { functionEvaluator } from "../evaluator/function-evaluator.js";
-import { massingEvaluator } from "../evaluator/massing-evaluator.js";
+import { resolveEvaluator } from "../evaluator/resolve-evaluator.js";
 import type { Scenario } from "../scenario/scenario.js";
 import { DATASET_CAUTION, type DatasetManifest } from "./dataset-manifest.js";
 import { formatManifest } from "./format-manifest.js";
@@ -63,12 +62,7 @@ export async function writeDataset(scenario: Scenario, options: WriteDatasetOpti
   if (!existsSync(dirname(out))) throw new RangeError(`${fn}: the folder of ${out} does not exist`);
   const shard = options.shard ?? { index: 1, count: 1 };
   const { start, end } = shardRange(options.n, shard);
-  const evaluator: Evaluator =
-    options.evaluator === undefined
-      ? massingEvaluator(scenario)
-      : typeof options.evaluator === "function"
-        ? functionEvaluator(options.evaluator)
-        : options.evaluator;
+  const evaluator = resolveEvaluator(scenario, options.evaluator);
   const settings = {
     scenario: { name: scenario.name, file: scenario.fileName, sha256: scenario.sha256 },
     design: options.design,
