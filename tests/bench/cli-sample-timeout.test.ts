@@ -6,8 +6,9 @@ import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { runCli } from "./run-cli.js";
 
-// External programs that hang, driven through `floorcast sample --evaluator-timeout 0.3`: every run here ends in
-// well under two seconds. Exit statuses per README "Exit codes" (1 = some inputs failed, 2 = usage error).
+// External programs that hang, driven through `floorcast sample --evaluator-timeout 3`: the limit covers the
+// program's start-up too (a node child, slower on a loaded machine), so programs that must pass get 3 s; the
+// elapsed-time bounds check that a run ends, not how fast. Exit statuses per README "Exit codes" (1 = some inputs failed, 2 = usage error).
 const scenario = fileURLToPath(new URL("../../datasets/scenarios/larkspur-terraces.json", import.meta.url));
 const dir = mkdtempSync(join(tmpdir(), "floorcast-cli-sample-timeout-"));
 const home = process.cwd();
@@ -49,12 +50,12 @@ describe("floorcast sample --evaluator-timeout", () => {
     expect(whole.status).toBe(0);
     writeFileSync(stall, "");
     const t0 = Date.now();
-    const hung = await floorcast(...base, "--evaluator-command", cmd, "--evaluator-timeout", "0.3", "--out", "t.csv");
-    expect(Date.now() - t0).toBeLessThan(5000); // it ends: limit 0.3 s, then SIGTERM, 0.3 s grace, SIGKILL
+    const hung = await floorcast(...base, "--evaluator-command", cmd, "--evaluator-timeout", "3", "--out", "t.csv");
+    expect(Date.now() - t0).toBeLessThan(40_000); // it ends: limit 3 s, then SIGTERM, grace, SIGKILL
     expect(hung.status).toBe(1);
     const lines = hung.stderr.trim().split("\n");
     expect(lines).toHaveLength(1);
-    expect(lines[0]).toMatch(/^floorcast: commandEvaluator: no answer to line 13 within 0\.3 s from .*model\.mjs.*\(process 1 of 1\); the program was stopped/);
+    expect(lines[0]).toMatch(/^floorcast: commandEvaluator: no answer to line 13 within 3 s from .*model\.mjs.*\(process 1 of 1\); the program was stopped/);
     expect(hung.stderr).not.toMatch(/\n\s+at /);
     expect(existsSync(join(dir, "t.csv"))).toBe(false);
     // the 12 answered samples are on disk (header + 12 rows) and equal the uninterrupted run's first rows
@@ -62,15 +63,15 @@ describe("floorcast sample --evaluator-timeout", () => {
     const full = readFileSync(join(dir, "whole.csv"), "utf8").split("\n");
     expect(partial).toEqual(full.slice(0, 13));
     rmSync(stall);
-    const resumed = await floorcast(...base, "--evaluator-command", cmd, "--evaluator-timeout", "0.3", "--resume", "--out", "t.csv");
+    const resumed = await floorcast(...base, "--evaluator-command", cmd, "--evaluator-timeout", "3", "--resume", "--out", "t.csv");
     expect(resumed.status).toBe(0);
     expect(readFileSync(join(dir, "t.csv")).equals(readFileSync(join(dir, "whole.csv")))).toBe(true);
   });
 
   it("a program that answers everything but never exits: the dataset is written and the run still ends", async () => {
     const t0 = Date.now();
-    const r = await floorcast(...base, "--evaluator-command", `${cmd} linger`, "--evaluator-timeout", "0.3", "--out", "linger.csv");
-    expect(Date.now() - t0).toBeLessThan(5000);
+    const r = await floorcast(...base, "--evaluator-command", `${cmd} linger`, "--evaluator-timeout", "3", "--out", "linger.csv");
+    expect(Date.now() - t0).toBeLessThan(40_000); // it ends
     expect(r.status).toBe(0);
     expect(r.stdout).toMatch(/wrote linger\.csv: 30 rows/);
     expect(readFileSync(join(dir, "linger.csv")).equals(readFileSync(join(dir, "whole.csv")))).toBe(true); // same rows
@@ -95,13 +96,14 @@ setInterval(() => {}, 1000);`);
         return true;
       }
     };
-    const until = Date.now() + 4000;
+    const until = Date.now() + 30_000; // floorcast and the program start (slower on a loaded machine)
     while (!existsSync(pidFile) && Date.now() < until) await new Promise((r) => setTimeout(r, 20));
     const pid = Number(readFileSync(pidFile, "utf8"));
     expect(gone(pid)).toBe(false);
     child.kill("SIGINT");
     expect(await ended).toBe("SIGINT"); // floorcast dies of the signal, as without the forwarding
-    while (!gone(pid) && Date.now() < until + 2000) await new Promise((r) => setTimeout(r, 20));
+    const stopBy = Date.now() + 20_000;
+    while (!gone(pid) && Date.now() < stopBy) await new Promise((r) => setTimeout(r, 20));
     expect(gone(pid)).toBe(true);
   });
 

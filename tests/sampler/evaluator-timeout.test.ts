@@ -4,8 +4,11 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { commandEvaluator } from "@floorcast/sampler";
 
-// Tiny external programs stand in for a user's model; the limits are small (300 ms) so each test takes well
-// under two seconds. The bounds checked below are behaviour (the run ends), not speed measurements.
+// Tiny external programs stand in for a user's model. A program's start-up (a node child: about 0.2 s on a quiet
+// machine, more on a loaded one) counts towards the answer limit of its first line, so every limit that a passing
+// program must meet is 3 s; the short 0.3 s limit is used only where no answer ever comes. The upper bounds on
+// elapsed time below are behaviour (the run ends, it does not wait out the grace period), not speed measurements,
+// and leave room for a loaded machine.
 const dir = mkdtempSync(join(tmpdir(), "floorcast-eval-timeout-"));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 const node = JSON.stringify(process.execPath);
@@ -61,14 +64,14 @@ for await (const line of createInterface({ input: process.stdin })) {
   process.stdout.write(JSON.stringify({ twice: 2 * x.a }) + "\\n");
 }
 setInterval(() => {}, 1000);`;
-/** Answers one line at a time, each 120 ms after the previous answer. */
+/** Answers one line at a time, each 1.2 s after the previous answer. */
 const slowBody = `const lines = [];
 let busy = false;
 const next = () => {
   if (busy || lines.length === 0) return;
   busy = true;
   const x = JSON.parse(lines.shift());
-  setTimeout(() => { process.stdout.write(JSON.stringify({ twice: 2 * x.a }) + "\\n"); busy = false; next(); }, 120);
+  setTimeout(() => { process.stdout.write(JSON.stringify({ twice: 2 * x.a }) + "\\n"); busy = false; next(); }, 1200);
 };
 for await (const line of createInterface({ input: process.stdin })) { lines.push(line); next(); }`;
 /** Answers the first 3 lines, then goes silent (still reading). */
@@ -90,7 +93,7 @@ describe("commandEvaluator answer timeout", () => {
     expect(Date.now() - t0).toBeGreaterThanOrEqual(290); // not before the limit (timer granularity ~ms)
     await expect(e.evaluate({ a: 3 })).rejects.toThrow(/no answer to line 1/); // later samples fail at once
     await e.close();
-    expect(Date.now() - t0).toBeLessThan(2500); // 300 ms + SIGTERM grace 200 ms + SIGKILL
+    expect(Date.now() - t0).toBeLessThan(20_000); // it ends: 300 ms + SIGTERM grace 200 ms + SIGKILL
     const pids = pidsOf("silent.mjs");
     expect(pids).toHaveLength(1);
     expect(await eventually(() => !alive(pids[0]!))).toBe(true);
@@ -98,11 +101,11 @@ describe("commandEvaluator answer timeout", () => {
 
   it("the limit runs from the previous answer: a slow but steady program with many lines in flight passes", async () => {
     const cmd = program("slow.mjs", slowBody);
-    const e = commandEvaluator(cmd, { timeoutMs: 300, window: 8 });
+    const e = commandEvaluator(cmd, { timeoutMs: 3000, window: 4 });
     try {
-      // the 8th answer arrives ~960 ms after it was sent, but only 120 ms after the 7th
-      const answers = await Promise.all(Array.from({ length: 8 }, (_, i) => e.evaluate({ a: i })));
-      expect(answers.map((o) => o.twice)).toEqual([0, 2, 4, 6, 8, 10, 12, 14]);
+      // the 4th answer arrives ~4.8 s after it was sent (beyond the 3 s limit), but only 1.2 s after the 3rd
+      const answers = await Promise.all(Array.from({ length: 4 }, (_, i) => e.evaluate({ a: i })));
+      expect(answers.map((o) => o.twice)).toEqual([0, 2, 4, 6]);
     } finally {
       await e.close();
     }
@@ -112,8 +115,8 @@ describe("commandEvaluator answer timeout", () => {
     const cmd = program("slow0.mjs", slowBody);
     const e = commandEvaluator(cmd, { timeoutMs: 0, graceMs: 500 });
     try {
-      const answers = await Promise.all([1, 2, 3].map((a) => e.evaluate({ a })));
-      expect(answers.map((o) => o.twice)).toEqual([2, 4, 6]);
+      const answers = await Promise.all([1, 2].map((a) => e.evaluate({ a })));
+      expect(answers.map((o) => o.twice)).toEqual([2, 4]);
     } finally {
       await e.close();
     }
@@ -121,13 +124,13 @@ describe("commandEvaluator answer timeout", () => {
 
   it("with several processes, a stall in one stops every copy", async () => {
     const cmd = program("stall.mjs", stallBody);
-    const e = commandEvaluator(cmd, { processes: 2, window: 4, timeoutMs: 300, graceMs: 200 });
+    const e = commandEvaluator(cmd, { processes: 2, window: 4, timeoutMs: 3000, graceMs: 200 });
     const results = await Promise.allSettled(Array.from({ length: 8 }, (_, i) => e.evaluate({ a: i })));
     // each copy answered its first 3 lines; the 4th line of one copy timed out and failed the rest
     expect(results.filter((r) => r.status === "fulfilled")).toHaveLength(6);
     const reasons = results.flatMap((r) => (r.status === "rejected" ? [String(r.reason)] : []));
     expect(reasons).toHaveLength(2);
-    for (const m of reasons) expect(m).toMatch(/no answer to line 4 within 0\.3 s from .*\(process [12] of 2\)/);
+    for (const m of reasons) expect(m).toMatch(/no answer to line 4 within 3 s from .*\(process [12] of 2\)/);
     await e.close();
     const pids = pidsOf("stall.mjs");
     expect(pids).toHaveLength(2);
@@ -148,13 +151,13 @@ describe("commandEvaluator answer timeout", () => {
 describe("commandEvaluator bounded close", () => {
   it("a program that answers, then ignores the end of its input and SIGTERM, is killed within the grace periods", async () => {
     const cmd = program("stubborn.mjs", stubbornBody);
-    const e = commandEvaluator(cmd, { timeoutMs: 300, graceMs: 250 });
+    const e = commandEvaluator(cmd, { timeoutMs: 0, graceMs: 250 });
     await expect(e.evaluate({ a: 21 })).resolves.toEqual({ twice: 42 });
     const t0 = Date.now();
     await e.close();
     const took = Date.now() - t0;
     expect(took).toBeGreaterThanOrEqual(450); // waited 250 ms for an exit, then 250 ms after SIGTERM
-    expect(took).toBeLessThan(2500);
+    expect(took).toBeLessThan(20_000); // it ends
     const pids = pidsOf("stubborn.mjs");
     expect(await eventually(() => !alive(pids[0]!))).toBe(true);
   });
@@ -162,11 +165,11 @@ describe("commandEvaluator bounded close", () => {
   it("a program that exits on the end of its input closes at once; close twice is harmless", async () => {
     const file = join(dir, "polite.mjs");
     writeFileSync(file, `process.stdin.resume(); process.stdin.on("end", () => process.exit(0));`);
-    const e = commandEvaluator(`${node} ${JSON.stringify(file)}`, { timeoutMs: 300, graceMs: 1500 });
+    const e = commandEvaluator(`${node} ${JSON.stringify(file)}`, { timeoutMs: 300, graceMs: 40_000 });
     const t0 = Date.now();
     await e.close();
     await e.close();
-    expect(Date.now() - t0).toBeLessThan(1500);
+    expect(Date.now() - t0).toBeLessThan(30_000); // did not wait out the 40 s grace period
   });
 });
 
