@@ -38,7 +38,7 @@ const overrides = {
 describe("runSuite: report.json structure, resume", () => {
   const problemsDir = tinySuite();
   const out = mkdtempSync(join(tmpdir(), "fc-bench-"));
-  it("writes report.json as issue 7 specifies, with Markdown and HTML beside it", async () => {
+  it("writes report.json as the README's report.json section describes, with Markdown and HTML beside it", async () => {
     const { report, paths } = await runSuite({ suite: "tiny", quick: true, out, peers: false, problemsDir, overrides });
     const json = JSON.parse(readFileSync(paths.json, "utf8"));
     expect(json.kind).toBe("floorcast.bench-report");

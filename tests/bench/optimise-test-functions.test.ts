@@ -1,5 +1,5 @@
 // Optimisers against the published optima of the Virtual Library of Simulation Experiments
-// (Surjanovic & Bingham, http://www.sfu.ca/~ssurjano/; values as in /work/shared/reference-values.md).
+// (Surjanovic & Bingham, http://www.sfu.ca/~ssurjano/).
 import { describe, expect, it } from "vitest";
 import {
   geneticAlgorithm,

@@ -1,6 +1,6 @@
 // Published test functions for the optimiser tests. Definitions and optima: Virtual Library of
-// Simulation Experiments, Surjanovic & Bingham, http://www.sfu.ca/~ssurjano/ (values copied in
-// /work/shared/reference-values.md). ZDT1: Zitzler, Deb & Thiele (2000), Evolutionary Computation 8(2).
+// Simulation Experiments, Surjanovic & Bingham, http://www.sfu.ca/~ssurjano/ (forrester.html, branin.html,
+// camel6.html, goldpr.html). ZDT1: Zitzler, Deb & Thiele (2000), Evolutionary Computation 8(2).
 import type { Design, Evaluator, OptimisationProblem, Outputs } from "@floorcast/bench";
 
 /** Branin–Hoo with a = 1, b = 5.1/(4π²), c = 5/π, r = 6, s = 10, t = 1/(8π) (VLSE). */

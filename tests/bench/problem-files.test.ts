@@ -129,7 +129,7 @@ describe("the demo suite", async () => {
     const byName = new Map(demo.map((p) => [p.name, p]));
     const value = async (n: string): Promise<number> => (await findExactOptimum(byName.get(n)!)).best!.objectives[0]!;
     // Core tower: 60% coverage of 40 × 45 = 1800 m² (coverage = footprint / lot, Snohomish County Code 30.91L.150)
-    // times ⌊45 / 3.5⌋ = 12 floors (floors = ⌊H / f⌋, the height-calculator check of reference-values.md) = 12,960 m² (derived)
+    // times ⌊45 / 3.5⌋ = 12 floors (floors = ⌊H / f⌋, common practice) = 12,960 m² (derived)
     expect(await value("core-tower-gfa")).toBeCloseTo(12960, -1);
     // Larkspur: FAR 1.2 × 420 m² = 504 m² (DC Zoning Handbook: max GFA = FAR × lot area), reached in 3 whole floors
     expect(await value("larkspur-fit-gfa")).toBeCloseTo(504, 0);

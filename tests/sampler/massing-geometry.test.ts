@@ -114,7 +114,8 @@ describe("polygonWidth", () => {
 });
 
 describe("innerParallelPolygon", () => {
-  // reference-values.md "Inner parallel polygon" (derived): A(d) = A − P·d + d²·Σ cot(θᵢ/2).
+  // Inner parallel polygon of a convex polygon (derived from the polygon's edge strips and corner kites):
+  // A(d) = A − P·d + d²·Σ cot(θᵢ/2), while no edge has vanished.
   it("30 × 40 rectangle at d = 5 → 600", () => {
     expect(inset(flat([[0, 0], [30, 0], [30, 40], [0, 40]]), 4, 5).area).toBeCloseTo(600, 10);
   });

@@ -35,7 +35,7 @@ const massingInput = fc
     return input;
   });
 
-/** Slack for comparing GFAs: coverage insets are solved to 1e-12 × lot area per floor (evaluator). */
+/** Slack for comparing GFAs: the rule compares areas to 1e-9 × lot area and solves coverage insets to the same (README, the massing rule, steps 2 and 4). */
 const slack = (r: MassingResult): number => 1e-9 * r.lotArea;
 
 function moved(parcel: Parcel, f: (p: Point) => Point): Parcel {
@@ -156,7 +156,7 @@ describe("massing rule properties (fast-check)", () => {
         expect(r.footprintArea).toBeLessThanOrEqual((input.maxCoverage ?? 1) * r.lotArea + slack(r));
         if (input.maxFar !== undefined) expect(r.far).toBeLessThanOrEqual(input.maxFar + 1e-9);
         if (r.floors === 0) expect([r.gfa, r.footprintArea, r.facadeLength]).toEqual([0, 0, 0]);
-        // The coverage inset is solved to 1e-9 × lot area (issue 2, step 2) when floor 1 is not sky-cut.
+        // The coverage inset is solved to 1e-9 × lot area (README, "The massing rule (version 1)", step 2) when floor 1 is not sky-cut.
         const uncut = input.skyPlane === undefined || input.floorHeight <= input.skyPlane.startHeight;
         if (r.coverageCapped && r.floors > 0 && uncut) {
           expect(Math.abs(r.footprintArea - input.maxCoverage! * r.lotArea)).toBeLessThanOrEqual(1e-9 * r.lotArea);

@@ -21,7 +21,7 @@ const hasRef = referenceAvailable(["shapely", "numpy"]);
 // (tests/reference/massing_shapely.py): GEOS polygon intersection for the yards and the sky plane,
 // GEOS negative mitre buffer plus bisection for the coverage inset.
 describe.skipIf(!hasRef)("evaluateMassing against the Shapely reference", () => {
-  // Case 0 anchors the reference itself to the hand-worked example (derived, issue 2; yards measured at
+  // Case 0 anchors the reference itself to the hand-worked example (derived; yards measured at
   // right angles to the lot line, Town of Woodway WA 14.08.350): 20 × 30 m, front 5, sides 3, rear 6,
   // 3.5 m floors under 24 m, FAR 2.5 → 266 m² plates, 5 floors, 1,330 m².
   const worked: MassingInput = {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { evaluateMassing } from "@floorcast/sampler";
 
-// Bad input list of issue 2 ("Bad input"); conventions (TypeError for a wrong type, RangeError for a
+// Bad input as the README's massing input table allows it ("Allowed" column); conventions (TypeError for a wrong type, RangeError for a
 // bad value, message `evaluateMassing: <field path> …`) from DEVELOPERS.md.
 const good = {
   parcel: { vertices: [[0, 0], [20, 0], [20, 30], [0, 30]], lotLines: ["front", "side", "rear", "side"] },

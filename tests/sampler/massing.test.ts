@@ -27,7 +27,7 @@ describe("yards (rectangles)", () => {
     expect(res.openSpace).toBeCloseTo(w * d - expected, 9);
   });
 
-  // Hand-worked example (derived, issue 2): 20 × 30 m lot, front 5, sides 3, rear 6 → 14 × 19 = 266 m²;
+  // Hand-worked example (derived): 20 × 30 m lot, front 5, sides 3, rear 6 → 14 × 19 = 266 m²;
   // 3.5 m floors under 24 m → ⌊24 / 3.5⌋ = 6 floors; with FAR 2.5 (max 1,500 m², DC Zoning Handbook
   // "Floor Area Ratio": max GFA = FAR × lot area) the 6th floor would make 1,596 > 1,500 → 5 floors, 1,330 m².
   const example: MassingInput = {
@@ -108,7 +108,7 @@ describe("FAR and lot coverage (published glossary examples)", () => {
     expect(r.coverage).toBeCloseTo(0.6, 9);
     expect(r.coverageCapped).toBe(true);
   });
-  // Inner parallel polygon of a 30 × 40 rectangle at d = 5: 20 × 30 = 600 (reference-values.md, derived).
+  // Inner parallel polygon of a 30 × 40 rectangle at d = 5: (30 − 10) × (40 − 10) = 600 (derived).
   it("coverage inset of a 30 × 40 lot at 50 % moves every edge in by 5 m", () => {
     const r = evaluateMassing(
       { parcel: rect(30, 40), setbacks: noYards, floorHeight: 3, maxHeight: 3, maxCoverage: 0.5 },
@@ -121,7 +121,7 @@ describe("FAR and lot coverage (published glossary examples)", () => {
     expect(Math.min(...ys)).toBeCloseTo(5, 9);
     expect(Math.max(...ys)).toBeCloseTo(35, 9);
   });
-  // A polygon with an inscribed circle of radius r: A(d) = A(1 − d/r)² (reference-values.md, derived);
+  // A polygon with an inscribed circle of radius r: A(d) = A(1 − d/r)² (derived: the inset is the polygon scaled by 1 − d/r about the centre);
   // a square of side 40 (r = 20) capped at 36 % needs d with (1 − d/20)² = 0.36 → d = 8, plate 24 × 24.
   it("square with an incircle: coverage 36 % → inset by 8, perimeter 96", () => {
     const r = evaluateMassing({ parcel: rect(40, 40), setbacks: noYards, floorHeight: 3, maxHeight: 3, maxCoverage: 0.36 });
@@ -163,7 +163,7 @@ describe("floors under a height limit", () => {
 
 describe("sky exposure plane", () => {
   // Definition: New York City Zoning Resolution §12-10 "sky exposure plane"; values §23-736/§24-522
-  // (planes from 85 ft, slope 2.7:1). Check value (arithmetic, reference-values.md): at 200 ft on a plane
+  // (planes from 85 ft, slope 2.7:1). Check value (arithmetic, derived): at 200 ft on a plane
   // starting at 85 ft with slope 2.7:1 the plate stands (200 − 85)/2.7 = 42.59 ft back from the street line.
   it("the plate at 200 ft stands 42.59 ft back from the street line", () => {
     const r = evaluateMassing(
