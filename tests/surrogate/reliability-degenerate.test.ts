@@ -98,3 +98,29 @@ describe("numerical health on degenerate data", () => {
     expectWorking(e, d);
   });
 });
+
+describe("rows far outside the data: finite, the prior's limit, never NaN", () => {
+  // At a scaled distance whose square overflows (|x| ≳ 1e155 here), every correlation with the training rows is 0,
+  // the limit of the Matérn and SE profiles as r → ∞ (Rasmussen & Williams 2006, eqs. 4.9 and 4.17); the posterior
+  // is then the prior: mean = the output scaling's mean, sd = σ_y·√(σ_f² + σ_n²) (R&W Alg. 2.1 with k* = 0; derived).
+  it.each(["se", "matern32", "matern52"] as const)("%s kernel, in loadSurrogate and loadPredictor", (kernel) => {
+    const d = make(base, base.map(smooth));
+    const gp = fitGaussianProcess(d, { seed: 1, restarts: 1, kernel });
+    const far = [[1e160, 30], [-1e200, 1e180], [3, 1e300]];
+    const text = JSON.stringify(gp.toJSON());
+    const file = gp.toJSON() as unknown as { outputScaling: { mean: number[]; std: number[] } };
+    const mean = file.outputScaling.mean[0]!;
+    const h = gp.hyperparameters()[0]!;
+    const priorSd = file.outputScaling.std[0]! * Math.sqrt(h.signalVariance + h.noiseVariance);
+    for (const p of [gp.predict(far), loadSurrogate(text).predict(far), loadPredictor(text).predict(far)]) {
+      for (let i = 0; i < far.length; i++) {
+        expect(Number.isFinite(p.mean[i]![0]), `mean ${p.mean[i]![0]}`).toBe(true);
+        expect(p.mean[i]![0]).toBeCloseTo(mean, 9);
+        const sd = p.sd![i]![0]!;
+        expect(Number.isFinite(sd)).toBe(true);
+        expect(Math.abs(sd - priorSd)).toBeLessThanOrEqual(1e-9 * priorSd);
+      }
+    }
+    for (const g of gp.gradient(far[0]!)) for (const v of g) expect(Number.isFinite(v)).toBe(true);
+  });
+});

@@ -6,18 +6,23 @@ const FN = "loadPredictor";
 const SQRT3 = Math.sqrt(3);
 const SQRT5 = Math.sqrt(5);
 
-/** g(r²) of the three stationary families (Rasmussen & Williams 2006, eqs. 4.9 and 4.17). */
+/**
+ * g(r²) of the three stationary families (Rasmussen & Williams 2006, eqs. 4.9 and 4.17); 0 at r² = +∞ (the limit),
+ * so a row whose scaled distance overflows gets the prior mean and variance instead of NaN.
+ */
 function profile(kernel: string): (r2: number) => number {
   switch (kernel) {
     case "se":
       return (r2) => Math.exp(-0.5 * r2);
     case "matern32":
       return (r2) => {
+        if (r2 === Infinity) return 0;
         const s = SQRT3 * Math.sqrt(r2);
         return (1 + s) * Math.exp(-s);
       };
     case "matern52":
       return (r2) => {
+        if (r2 === Infinity) return 0;
         const s = SQRT5 * Math.sqrt(r2);
         return (1 + s + (5 / 3) * r2) * Math.exp(-s);
       };
