@@ -79,6 +79,8 @@ describe("floorcast fit --model nn / predict", () => {
       ["--backend", "gpu", /--backend must be wasm, cpu or auto/],
       ["--ensemble", "1", /--ensemble must be an integer ≥ 2/],
       ["--conformal", "1.5", /--conformal must be a coverage in \(0, 1\)/],
+      // 80 rows × 0.25 = 20 calibration rows; coverage 0.99 needs ⌈(n + 1)·0.99⌉ ≤ n, n ≥ 99 (Lei et al. 2018, §2.2; derived)
+      ["--conformal", "0.99", /fitConformal: 20 calibration rows .* too few for coverage 0\.99: it needs at least 99/],
     ] as const) {
       const r = await runHere(["fit", "--data", p("train.csv"), "--inputs", "a,b", "--target", "y", "--model", "nn", "--epochs", "1", flag, value, "--out", p("bad.json")]);
       expect(r.status).toBe(2);

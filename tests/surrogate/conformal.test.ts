@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import seedrandom from "seedrandom";
-import { calibrateConformal, conformalQuantile, fitConformal, fitGaussianProcess, loadSurrogate } from "@floorcast/surrogate";
+import { calibrateConformal, conformalQuantile, fitConformal, fitGaussianProcess, loadSurrogate, minCalibrationRows } from "@floorcast/surrogate";
 import { mlpTrainer } from "@floorcast/surrogate/nn";
 import { loadPredictor } from "@floorcast/surrogate/predict";
 
@@ -40,6 +40,16 @@ describe("conformalQuantile (Lei et al. 2018, §2.2: the ⌈(n+1)(1−α)⌉-th 
     // n = 9, 1 − α = 0.95: k = ⌈9.5⌉ = 10 > n → unbounded (null).
     expect(conformalQuantile([1, 2, 3, 4, 5, 6, 7, 8, 9], 0.95)).toBeNull();
     expect(conformalQuantile([3], 0.4)).toBe(3);
+  });
+  it("minCalibrationRows is the least n for which the quantile exists (c / (1 − c), derived): 9 at 0.9, 19 at 0.95, 99 at 0.99", () => {
+    expect([0.9, 0.95, 0.99, 0.5, 0.8].map(minCalibrationRows)).toEqual([9, 19, 99, 1, 4]);
+    fc.assert(
+      fc.property(fc.double({ min: 0.01, max: 0.995, noNaN: true }), (c) => {
+        const n = minCalibrationRows(c);
+        const ones = (m: number) => Array.from({ length: m }, () => 1);
+        return conformalQuantile(ones(n), c) !== null && (n === 1 || conformalQuantile(ones(n - 1), c) === null);
+      }),
+    );
   });
   it("property: at least ⌈(n+1)(1−α)⌉ scores are ≤ q, and fewer are < q", () => {
     fc.assert(
@@ -109,11 +119,16 @@ describe("split-conformal coverage on 1,000 held-out points (nominal 90% → 87%
     expect(() => calibrateConformal(base, nan)).toThrow(/calibration\.x\[2\]\[1\]/);
     expect(() => calibrateConformal(base, { x: [], y: [] })).toThrow(/at least one row/);
     expect(() => calibrateConformal(base, data, { score: "normalised" })).toThrow(/needs a base that gives sd/);
-    const few = calibrateConformal(base, { x: data.x.slice(0, 5), y: data.y.slice(0, 5) }, { coverage: 0.9 });
-    expect(few.calibration.quantiles).toEqual([null]);
-    const p = few.predict([[0.5, 0.5]]);
-    expect(p.interval!.upper[0]![0]).toBe(Infinity);
-    expect(loadSurrogate(JSON.parse(JSON.stringify(few.toJSON()))).predict([[0.5, 0.5]]).interval!.lower[0]![0]).toBe(-Infinity);
+    // 5 rows at coverage 0.9: k = ⌈6 × 0.9⌉ = 6 > 5, no bounded interval (Lei et al. 2018, §2.2): refused, not unbounded.
+    expect(() => calibrateConformal(base, { x: data.x.slice(0, 5), y: data.y.slice(0, 5) }, { coverage: 0.9 })).toThrow(
+      /calibrateConformal: calibration\.x has 5 rows; coverage 0\.9 needs at least 9/,
+    );
+    expect(calibrateConformal(base, { x: data.x.slice(0, 9), y: data.y.slice(0, 9) }, { coverage: 0.9 }).calibration.quantiles[0]).not.toBeNull();
+    // fitConformal refuses before it trains anything: 30 × 0.25 → 8 calibration rows < 9.
+    let trained = 0;
+    const counting = async () => (trained++, base);
+    await expect(fitConformal(counting, data, { coverage: 0.9 })).rejects.toThrow(/fitConformal: 8 calibration rows .* needs at least 9/);
+    expect(trained).toBe(0);
     await expect(fitConformal(mlpTrainer(), { ...data, x: [data.x[0]!], y: [data.y[0]!] })).rejects.toThrow(/both training and calibration/);
     await expect(fitConformal(mlpTrainer(), data, { calibrationFraction: 1 })).rejects.toThrow(/calibrationFraction/);
   });

@@ -73,4 +73,5 @@ export type { ConformalOptions } from "./uncertainty/calibrate-conformal.js";
 export { fitConformal } from "./uncertainty/fit-conformal.js";
 export type { FitConformalOptions } from "./uncertainty/fit-conformal.js";
 export { conformalQuantile } from "./uncertainty/conformal-quantile.js";
+export { minCalibrationRows } from "./uncertainty/min-calibration-rows.js";
 export { MlpFileSurrogate } from "./model-file/mlp-surrogate-from-file.js";

@@ -2,6 +2,7 @@ import type { Surrogate } from "../surrogate-types.js";
 import { checkMatrix } from "../check-training-data.js";
 import { SD_FLOOR } from "../predict/conformal-interval.js";
 import { conformalQuantile } from "./conformal-quantile.js";
+import { minCalibrationRows } from "./min-calibration-rows.js";
 import { ConformalSurrogate } from "./conformal-surrogate.js";
 
 /** Options of {@link calibrateConformal}. */
@@ -45,6 +46,10 @@ export function calibrateConformal(
   const n = calibration.x.length;
   if (n === 0) throw new RangeError(`${fn}: calibration.x must have at least one row, got 0`);
   if (calibration.y.length !== n) throw new RangeError(`${fn}: calibration.y must have ${n} rows, got ${calibration.y.length}`);
+  const least = minCalibrationRows(coverage);
+  if (n < least) {
+    throw new RangeError(`${fn}: calibration.x has ${n} rows; coverage ${coverage} needs at least ${least} for a bounded interval`);
+  }
   const p = base.predict(calibration.x);
   const score = requested === "auto" ? (p.sd ? "normalised" : "absolute") : requested;
   if (score === "normalised" && !p.sd) throw new RangeError(`${fn}: options.score "normalised" needs a base that gives sd`);

@@ -3,6 +3,7 @@ import type { SurrogateTrainer, TrainingData } from "../surrogate-types.js";
 import { checkWrapperArgs } from "./check-wrapper-args.js";
 import { shuffleInPlace } from "../seeded-shuffle.js";
 import { calibrateConformal, type ConformalOptions } from "./calibrate-conformal.js";
+import { minCalibrationRows } from "./min-calibration-rows.js";
 import type { ConformalSurrogate } from "./conformal-surrogate.js";
 
 /** Options of {@link fitConformal}. */
@@ -36,6 +37,14 @@ export async function fitConformal(
   const n = data.x.length;
   const nCal = Math.round(n * f);
   if (nCal < 1 || n - nCal < 1) throw new RangeError(`${fn}: data.x needs rows for both training and calibration, got ${n}`);
+  const coverage = options.coverage ?? 0.9;
+  // Checked before the base is trained: a calibration part too small for the coverage gives no bounded interval.
+  if (typeof coverage === "number" && coverage > 0 && coverage < 1 && nCal < minCalibrationRows(coverage)) {
+    throw new RangeError(
+      `${fn}: ${nCal} calibration rows (${n} × calibrationFraction ${f}) are too few for coverage ${coverage}: ` +
+        `it needs at least ${minCalibrationRows(coverage)} for a bounded interval`,
+    );
+  }
   const started = performance.now();
   const rng = seedrandom(`floorcast-conformal:${seed}`);
   const order = Array.from({ length: n }, (_, i) => i);

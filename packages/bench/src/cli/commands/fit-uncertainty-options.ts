@@ -36,7 +36,7 @@ export function withUncertainty<O extends Opts>(fit: Fitter<O>): Fitter<O> {
     const fraction = Number(opts.calibrationFraction);
     if (!(fraction > 0 && fraction < 1)) throw new UsageError(`fit: --calibration-fraction must be in (0, 1), got ${String(opts.calibrationFraction)}`);
     const c = await fitConformal(trainer, data, { coverage, calibrationFraction: fraction, seed });
-    const q = c.calibration.quantiles.map((v, j) => `${data.targets[j]} ${v === null ? "unbounded (too few calibration rows)" : v.toPrecision(4)}`);
+    const q = c.calibration.quantiles.map((v, j) => `${data.targets[j]} ${v === null ? "unbounded" : v.toPrecision(4)}`);
     say(`fit: conformal ${coverage} (${c.calibration.score} scores, ${c.calibration.calibrationSize} held-out rows): ${q.join(", ")}`);
     return c;
   };
