@@ -149,6 +149,18 @@ describe("model files: checksum, version, truncation, shapes, prototype keys", (
     }
   });
 
+  it("a sealed file that repeats an input or target name is refused by both loaders (rows would be ambiguous)", () => {
+    for (const k of kinds) {
+      const f = files[k]!;
+      const dupInputs = sealModelFile({ ...f, inputs: ["a", "a"] });
+      expect(() => loadSurrogate(dupInputs, "m.json")).toThrow(/m\.json: inputs: must not repeat a name/);
+      expect(() => loadPredictor(dupInputs)).toThrow(/loadPredictor: inputs must not repeat a name, got "a" twice/);
+    }
+    const two = sealModelFile({ ...files.gp!, targets: ["f", "f"], outputScaling: { mean: [0, 0], std: [1, 1] } });
+    expect(() => loadSurrogate(two)).toThrow(/targets: must not repeat a name/);
+    expect(() => loadPredictor(two)).toThrow(RangeError);
+  });
+
   it("a newer formatVersion is refused with a message even when the checksum matches", () => {
     for (const k of kinds) {
       const f = sealModelFile({ ...files[k], formatVersion: 2 });

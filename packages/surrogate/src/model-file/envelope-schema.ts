@@ -2,6 +2,11 @@ import { z } from "zod";
 import { MODEL_FILE_KIND, MODEL_FORMAT_VERSION } from "./model-file-version.js";
 
 const finite = z.number().refine(Number.isFinite, "must be a finite number");
+/** Column names: non-empty strings, each once (a duplicate would make rows ambiguous). */
+const names = z
+  .array(z.string().min(1))
+  .min(1)
+  .refine((v) => new Set(v).size === v.length, { message: "must not repeat a name" });
 
 /** Training summary every envelope carries; families add their own fields (the object is open). */
 export const trainingSummarySchema = z.looseObject({
@@ -23,8 +28,8 @@ export function envelopeSchema<T extends string, P extends z.ZodType>(modelType:
     kind: z.literal(MODEL_FILE_KIND),
     formatVersion: z.literal(MODEL_FORMAT_VERSION),
     modelType: z.literal(modelType),
-    inputs: z.array(z.string().min(1)).min(1),
-    targets: z.array(z.string().min(1)).min(1),
+    inputs: names,
+    targets: names,
     inputScaling: z.object({ lower: z.array(finite), upper: z.array(finite) }),
     outputScaling: z.object({ mean: z.array(finite), std: z.array(finite.refine((v) => v > 0, "must be > 0")) }),
     payload,

@@ -14,6 +14,11 @@ function names(label: string, v: unknown): string[] {
   if (!Array.isArray(v) || v.length === 0 || !v.every((s) => typeof s === "string")) {
     throw new TypeError(`${FN}: ${label} must be a non-empty array of names`);
   }
+  const seen = new Set<string>();
+  for (const s of v as string[]) {
+    if (seen.has(s)) throw new RangeError(`${FN}: ${label} must not repeat a name, got ${JSON.stringify(s)} twice`);
+    seen.add(s);
+  }
   return v as string[];
 }
 
