@@ -69,6 +69,23 @@ describe.skipIf(!hasRef)("regressionMetrics against scikit-learn 1.2.1 / numpy 1
 });
 
 describe("regressionMetrics edge cases and documented conventions", () => {
+  it("targets near 1e308, whose squares overflow, still give the finite metrics (derived by hand)", () => {
+    // y = (1, 1.1, 1.2)·1e308, errors (1, −1, 2)·1e306: RMSE = √(6/3)·1e306, MAE = (4/3)·1e306, max 2e306,
+    // bias (2/3)·1e306; SSE = 6e612, SST = (1e307)² + 0 + (1e307)² = 2e614, R² = 1 − 0.03 = 0.97 (derived).
+    const y = [1e308, 1.1e308, 1.2e308];
+    const m = regressionMetrics(y, [1.01e308, 1.09e308, 1.22e308]);
+    const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
+    expect(rel(m.rmse, Math.SQRT2 * 1e306)).toBeLessThan(1e-12);
+    expect(rel(m.mae, (4 / 3) * 1e306)).toBeLessThan(1e-12);
+    expect(rel(m.maxAbsError, 2e306)).toBeLessThan(1e-12);
+    expect(rel(m.bias, (2 / 3) * 1e306)).toBeLessThan(1e-12);
+    expect(rel(m.r2, 0.97)).toBeLessThan(1e-12);
+    expect(rel(m.medianRelError, 0.01)).toBeLessThan(1e-12); // relative errors 0.01, 0.0091, 0.0167
+    // and the scaling is by a power of two, so ordinary values give bit-for-bit the unscaled sums
+    const plain = regressionMetrics([1, 2, 4], [1.5, 2, 3]);
+    expect(plain.rmse).toBe(Math.sqrt((0.25 + 0 + 1) / 3));
+    expect(plain.mae).toBe(1.5 / 3);
+  });
   it("constant target: R² is NaN (undefined), not sklearn's forced 1.0/0.0; the rest are defined", () => {
     // scikit-learn 1.2 r2_score(force_finite=True) returns 1.0 for a perfect fit and 0.0 otherwise on a
     // constant y; we report NaN (JSON null) because the ratio 0/0 or x/0 has no meaning (documented).

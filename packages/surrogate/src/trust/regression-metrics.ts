@@ -30,7 +30,9 @@ export interface RegressionMetrics {
 /**
  * Computes RMSE, MAE, max abs error, R², bias and relative errors of predictions.
  * Definitions as in scikit-learn 1.2 (mean_squared_error, mean_absolute_error, max_error, r2_score);
- * bias and relative errors are common practice.
+ * bias and relative errors are common practice. Sums run on values divided by a power of two near the largest
+ * magnitude (exact in binary floating point), so values near 1e308, whose squares overflow, still give finite
+ * metrics wherever the metric itself is representable.
  * @param yTrue - true values, finite, non-empty.
  * @param yPred - predictions, same length, finite.
  * @returns the metrics.
@@ -40,6 +42,10 @@ export function regressionMetrics(yTrue: readonly number[], yPred: readonly numb
   const p = checkVector("regressionMetrics", "yPred", yPred, y.length);
   const n = y.length;
   if (n === 0) throw new RangeError("regressionMetrics: yTrue must not be empty");
+  let largest = 0;
+  for (let i = 0; i < n; i++) largest = Math.max(largest, Math.abs(y[i]!), Math.abs(p[i]!));
+  // s = 2^k ≤ largest < 2^(k+1): dividing by it is exact and keeps every scaled value in [−1, 1].
+  const s = largest > 0 ? 2 ** Math.floor(Math.log2(largest)) : 1;
   let sse = 0;
   let sae = 0;
   let maxAbs = 0;
@@ -47,28 +53,28 @@ export function regressionMetrics(yTrue: readonly number[], yPred: readonly numb
   let sumErr = 0;
   const rel: number[] = [];
   for (let i = 0; i < n; i++) {
-    const e = p[i]! - y[i]!;
+    const e = p[i]! / s - y[i]! / s;
     sse += e * e;
     sae += Math.abs(e);
     if (Math.abs(e) > maxAbs) maxAbs = Math.abs(e);
-    sum += y[i]!;
+    sum += y[i]! / s;
     sumErr += e;
-    if (y[i] !== 0) rel.push(Math.abs(e) / Math.abs(y[i]!));
+    if (y[i] !== 0) rel.push(Math.abs(e) / Math.abs(y[i]! / s));
   }
   const mean = sum / n;
   let sst = 0;
   let constant = true;
   for (let i = 0; i < n; i++) {
-    sst += (y[i]! - mean) ** 2;
+    sst += (y[i]! / s - mean) ** 2;
     if (y[i] !== y[0]) constant = false;
   }
   return {
     n,
-    rmse: Math.sqrt(sse / n),
-    mae: sae / n,
-    maxAbsError: maxAbs,
+    rmse: Math.sqrt(sse / n) * s,
+    mae: (sae / n) * s,
+    maxAbsError: maxAbs * s,
     r2: constant ? NaN : 1 - sse / sst,
-    bias: sumErr / n,
+    bias: (sumErr / n) * s,
     medianRelError: rel.length === 0 ? NaN : percentile(rel, 0.5),
     p95RelError: rel.length === 0 ? NaN : percentile(rel, 0.95),
     nRelative: rel.length,
