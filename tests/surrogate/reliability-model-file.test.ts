@@ -206,6 +206,22 @@ describe("model files: checksum, version, truncation, shapes, prototype keys", (
     for (const [, load] of loaders) expect(() => load(sealModelFile(h))).toThrow(/alpha/);
   });
 
+  it("a model file nested 5,000 deep (conformal around conformal …, or deep JSON in the training summary) is refused, no stack overflow", () => {
+    // Built as text (JSON.stringify itself would overflow at this depth); JSON.parse reads it without recursion.
+    const [head, tail] = JSON.stringify({ ...files.conformal!, payload: { ...files.conformal!.payload, base: "@@" } }).split('"@@"');
+    const deepText = head!.repeat(5000) + JSON.stringify(files.gp) + tail!.repeat(5000);
+    const [jHead, jTail] = JSON.stringify({ ...files.gp!, training: { ...files.gp!.training, extra: "@@" } }).split('"@@"');
+    const junkText = jHead + "[".repeat(5000) + "1" + "]".repeat(5000) + jTail;
+    for (const v of [deepText, JSON.parse(deepText) as unknown, junkText, JSON.parse(junkText) as unknown]) {
+      expect(() => loadSurrogate(v, "m.json")).toThrow(/^loadSurrogate: m\.json is nested deeper than 64 levels/);
+      expect(() => loadPredictor(v)).toThrow(/^loadPredictor: the model file is nested deeper than 64 levels/);
+    }
+    // a legitimate nesting (conformal around an ensemble of GPs, about a dozen levels) still loads
+    const ens = clone(files.ensemble);
+    const wrapped = sealModelFile({ ...files.conformal!, payload: { ...files.conformal!.payload, base: ens } });
+    for (const [, load] of loaders) expect(() => load(wrapped)).not.toThrow();
+  });
+
   it('a "__proto__" key anywhere is refused and pollutes nothing', () => {
     const text = JSON.stringify(files.gp);
     const variants = [

@@ -1,6 +1,7 @@
 import { MODEL_FILE_KIND, MODEL_FORMAT_VERSION } from "./model-file-version.js";
 import type { ModelFile } from "./model-file-schema.js";
 import { modelFileSchema } from "./model-file-schema.js";
+import { checkJsonDepth } from "../predict/check-json-depth.js";
 
 /**
  * Validates a model file: kind, then format version (a newer one is refused with an upgrade message), then the
@@ -23,6 +24,7 @@ export function parseModelFile(json: unknown, fileName = "model file", fn = "par
   if (typeof value !== "object" || value === null || Array.isArray(value)) {
     throw new TypeError(`${fn}: ${fileName}: a model file must be a JSON object`);
   }
+  checkJsonDepth(fn, fileName, value);
   const rec = value as Record<string, unknown>;
   if (rec.kind !== MODEL_FILE_KIND) {
     throw new RangeError(`${fn}: ${fileName}: kind must be "${MODEL_FILE_KIND}", got ${JSON.stringify(rec.kind)}`);

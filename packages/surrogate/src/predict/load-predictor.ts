@@ -7,6 +7,7 @@ import { createEnsemblePredictor } from "./ensemble-predictor.js";
 import { createConformalPredictor } from "./conformal-predictor.js";
 import { checkModelChecksum } from "./check-model-checksum.js";
 import { sha256Hex } from "./sha256.js";
+import { checkJsonDepth } from "./check-json-depth.js";
 
 const FN = "loadPredictor";
 
@@ -50,6 +51,7 @@ function buildPredictor(modelJson: unknown): Predictor {
     }
   }
   const file = objectField(FN, "model file", raw);
+  checkJsonDepth(FN, "the model file", file);
   if (file.kind !== "floorcast.surrogate") {
     throw new RangeError(`${FN}: kind must be "floorcast.surrogate", got ${JSON.stringify(file.kind)}`);
   }
