@@ -3,7 +3,8 @@
 
 Reads {"cases": [MassingInput, ...]} as JSON on stdin and writes {"results": [...]} on stdout,
 one result (lotArea, buildableArea, footprintArea, floors, gfa, facadeLength, limitedBy,
-coverageCapped) per case. Library versions: Debian python3-shapely 1.8.5, python3-numpy 1.24.2.
+coverageCapped) per case; with {"profile": true} each result also holds the plate profile (area and
+width of every storey the height limit allows, before the plate and FAR stops). Library versions: Debian python3-shapely 1.8.5, python3-numpy 1.24.2.
 
 It shares no code with the TypeScript evaluator and builds the geometry differently:
 - each yard is a large half-plane polygon on the parcel's side of the lot line (the side found
@@ -57,7 +58,7 @@ def area(g):
     return 0.0 if g.is_empty else float(g.area)
 
 
-def evaluate(case):
+def evaluate(case, with_profile=False):
     verts = [tuple(v) for v in case["parcel"]["vertices"]]
     kinds = case["parcel"]["lotLines"]
     sb = case["setbacks"]
@@ -133,13 +134,31 @@ def evaluate(case):
         if k == 1:
             footprint = a
             facade = float(plate.length)
-    return {"lotArea": lot, "buildableArea": buildable, "footprintArea": footprint, "floors": floors,
-            "gfa": gfa, "facadeLength": facade, "limitedBy": reason, "coverageCapped": capped}
+    result = {"lotArea": lot, "buildableArea": buildable, "footprintArea": footprint, "floors": floors,
+              "gfa": gfa, "facadeLength": facade, "limitedBy": reason, "coverageCapped": capped}
+    if with_profile:
+        # plate profile: every storey the height limit allows, before the plate and FAR stops
+        storeys = []
+        k = 1
+        while k * fh <= mh + 1e-9:
+            z = k * fh
+            plate = base if buildable > tol else Polygon()
+            d = 0.0
+            if sky is not None and z > sky["startHeight"]:
+                d = (z - sky["startHeight"]) / sky["ratio"]
+                for p, q in streets:
+                    plate = plate.intersection(half_plane(p, q, centre, d, big))
+            a = area(plate)
+            storeys.append({"topHeight": z, "inset": d, "area": a, "width": width(plate) if a > tol else 0.0})
+            k += 1
+        result["profile"] = storeys
+    return result
 
 
 def main():
     data = json.load(sys.stdin)
-    json.dump({"results": [evaluate(c) for c in data["cases"]]}, sys.stdout)
+    with_profile = bool(data.get("profile", False))
+    json.dump({"results": [evaluate(c, with_profile) for c in data["cases"]]}, sys.stdout)
 
 
 if __name__ == "__main__":

@@ -33,7 +33,7 @@ function withChange(change: (s: Record<string, any>) => void): string {
 }
 
 describe("the Quillmere demo scenarios", () => {
-  for (const name of ["larkspur-terraces", "ferrow-corner", "quillmere-core"]) {
+  for (const name of ["larkspur-terraces", "ferrow-corner", "quillmere-core", "hollin-quads"]) {
     it(`${name} loads; its sha256 is that of the file's bytes`, async () => {
       const path = join(scenariosDir, `${name}.json`);
       const s = await loadScenario(path);

@@ -114,7 +114,7 @@ describe.each(["elu", "relu"] as const)("blocked MLP kernel (%s)", (activation) 
   });
 
   it("rejects unknown model types, bad JSON text and non-objects", () => {
-    expect(() => loadPredictor({ ...file, modelType: "forest" })).toThrow(/modelType must be gp, mlp, ensemble or conformal/);
+    expect(() => loadPredictor({ ...file, modelType: "forest" })).toThrow(/modelType must be gp, mlp, ensemble, conformal or plate-stack, got "forest"/);
     expect(() => loadPredictor("{not json")).toThrow(/loadPredictor: the model file is not valid JSON/);
     expect(() => loadPredictor(42)).toThrow(TypeError);
     expect(() => loadPredictor({ ...file, inputs: [] })).toThrow(/inputs must be a non-empty array/);

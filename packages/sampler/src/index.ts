@@ -7,8 +7,11 @@ export type {
   Point,
   Setbacks,
   SkyPlane,
+  StoreyPlate,
 } from "./massing/massing-types.js";
 export { evaluateMassing } from "./massing/evaluate-massing.js";
+export { massingProfile } from "./massing/massing-profile.js";
+export type { MassingProfile } from "./massing/massing-profile.js";
 export type { EvaluateMassingOptions } from "./massing/evaluate-massing.js";
 export { quadParcel } from "./massing/quad-parcel.js";
 export type { QuadParcelOptions } from "./massing/quad-parcel.js";
@@ -28,6 +31,15 @@ export type { SlotDomain } from "./scenario/scenario-slots.js";
 export type { Evaluator, EvaluatorFunction, EvaluatorInput, EvaluatorOutput } from "./evaluator/evaluator.js";
 export { functionEvaluator } from "./evaluator/function-evaluator.js";
 export { massingEvaluator } from "./evaluator/massing-evaluator.js";
+export type { MassingEvaluatorOptions } from "./evaluator/massing-evaluator.js";
+export {
+  PLATE_RULE_SLOTS,
+  plateAreaColumn,
+  plateProfileColumns,
+  plateProfileLayout,
+  plateWidthColumn,
+} from "./evaluator/plate-profile-columns.js";
+export { PLATE_PROFILE_NAMING, plateProfileOfColumns } from "./dataset/plate-profile-of-columns.js";
 export { massingOutputs, MASSING_OUTPUT_COLUMNS } from "./evaluator/massing-outputs.js";
 export { commandEvaluator } from "./evaluator/command-evaluator.js";
 export type { CommandEvaluatorOptions } from "./evaluator/command-evaluator.js";

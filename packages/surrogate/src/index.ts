@@ -75,3 +75,20 @@ export type { FitConformalOptions } from "./uncertainty/fit-conformal.js";
 export { conformalQuantile } from "./uncertainty/conformal-quantile.js";
 export { minCalibrationRows } from "./uncertainty/min-calibration-rows.js";
 export { MlpFileSurrogate } from "./model-file/mlp-surrogate-from-file.js";
+// Structure-aware plate-stack surrogate: learned plate geometry, exact stacking rule (plate-stack/)
+export { fitPlateStack } from "./plate-stack/fit-plate-stack.js";
+export type { PlateStackOptions } from "./plate-stack/fit-plate-stack.js";
+export { PlateStackSurrogate } from "./plate-stack/plate-stack-surrogate.js";
+export type { FittedQuantity, PlateStackParts } from "./plate-stack/plate-stack-surrogate.js";
+export { plateStackColumns } from "./plate-stack/plate-stack-training-rows.js";
+export type { PlateStackData } from "./plate-stack/plate-stack-training-rows.js";
+export { qmcNormalDraws } from "./plate-stack/qmc-normal-draws.js";
+export { plateStackModelFileSchema, plateStackPayloadSchema } from "./model-file/plate-stack-model-file-schema.js";
+export type { PlateStackModelFile } from "./model-file/plate-stack-model-file-schema.js";
+export {
+  PLATE_STACK_OUTPUTS,
+  PLATE_STACK_RULE_NAME,
+  evaluatePlateStack,
+  stackPlates,
+} from "./predict/index.js";
+export type { PlateStackEvaluation, PlateStackPayload, StackRule, StackResult, StackLimit } from "./predict/index.js";

@@ -20,6 +20,10 @@ export const datasetManifestSchema = z.strictObject({
   evaluator: z.string(),
   packageVersion: z.string(),
   columns: z.array(z.string()),
+  /** Present when the columns hold a plate profile (README "Plate profiles"). */
+  plateProfile: z
+    .strictObject({ storeys: count.min(1), ruleColumns: z.array(z.string()), naming: z.string() })
+    .optional(),
   rows: count,
   csv: z.strictObject({ file: z.string(), bytes: count, sha256: sha }),
 });

@@ -9,6 +9,7 @@ import type { Scenario } from "../scenario/scenario.js";
 import { DATASET_CAUTION, type DatasetManifest } from "./dataset-manifest.js";
 import { formatManifest } from "./format-manifest.js";
 import { manifestPathFor } from "./manifest-path-for.js";
+import { plateProfileOfColumns } from "./plate-profile-of-columns.js";
 import { generateDataset } from "./generate-dataset.js";
 import { PACKAGE_VERSION } from "./package-version.js";
 import { recoverPartial } from "./recover-partial.js";
@@ -118,12 +119,14 @@ export async function writeDataset(scenario: Scenario, options: WriteDatasetOpti
     await writer?.close();
   }
   if (header === undefined) throw new RangeError(`${fn}: no rows were generated`);
+  const plateProfile = plateProfileOfColumns(header);
   const manifest: DatasetManifest = {
     kind: "floorcast.dataset-manifest",
     formatVersion: 1,
     caution: DATASET_CAUTION,
     ...settings,
     columns: header,
+    ...(plateProfile === undefined ? {} : { plateProfile }),
     rows: total,
     csv: { file: basename(out), bytes: (await stat(partial.csv)).size, sha256: await sha256File(partial.csv) },
   };

@@ -4,7 +4,7 @@ import { makeCounterClockwise } from "../geometry/make-counter-clockwise.js";
 import { signedArea } from "../geometry/polygon-area.js";
 import { polygonPerimeter } from "../geometry/polygon-perimeter.js";
 import { polygonWidth } from "../geometry/polygon-width.js";
-import type { LimitedBy, MassingInput, MassingResult, Point } from "./massing-types.js";
+import type { LimitedBy, MassingInput, MassingResult, Point, StoreyPlate } from "./massing-types.js";
 import { MassingWorkspace } from "./massing-workspace.js";
 import { skyPlaneCut } from "./sky-plane-cut.js";
 import { solveCoverageInset } from "./solve-coverage-inset.js";
@@ -14,6 +14,8 @@ import { validateMassingInput } from "./validate-massing-input.js";
 export interface EvaluateMassingOptions {
   /** Include the floor plates, floor by floor (default false). */
   readonly plates?: boolean;
+  /** Include the plate profile: every storey the height limit allows, before the plate and FAR stops (default false). */
+  readonly profile?: boolean;
 }
 
 /** Relative tolerance of the rule: areas to 1e-9 × lot area, widths to 1e-9 × √(lot area). */
@@ -62,6 +64,7 @@ function toPoints(xy: Float64Array, m: number, ox: number, oy: number): Point[] 
 export function evaluateMassing(input: MassingInput, options?: EvaluateMassingOptions): MassingResult {
   validateMassingInput(input);
   let wantPlates = false;
+  let wantProfile = false;
   if (options !== undefined) {
     if (typeof options !== "object" || options === null) {
       throw new TypeError(`evaluateMassing: options must be an object, got ${String(options)}`);
@@ -69,7 +72,11 @@ export function evaluateMassing(input: MassingInput, options?: EvaluateMassingOp
     if (options.plates !== undefined && typeof options.plates !== "boolean") {
       throw new TypeError(`evaluateMassing: options.plates must be a boolean, got ${typeof options.plates}`);
     }
+    if (options.profile !== undefined && typeof options.profile !== "boolean") {
+      throw new TypeError(`evaluateMassing: options.profile must be a boolean, got ${typeof options.profile}`);
+    }
     wantPlates = options.plates === true;
+    wantProfile = options.profile === true;
   }
   const { parcel, setbacks, floorHeight, maxHeight, skyPlane } = input;
   const vertices = parcel.vertices;
@@ -211,5 +218,23 @@ export function evaluateMassing(input: MassingInput, options?: EvaluateMassingOp
     limitedBy,
     coverageCapped,
   };
-  return plates === undefined ? result : { ...result, plates };
+  const withPlates = plates === undefined ? result : { ...result, plates };
+  if (!wantProfile) return withPlates;
+  // The profile: storey k (top at z = k × floorHeight ≤ maxHeight) has the base plate, cut by the sky exposure
+  // plane above its start; no plate or FAR test is applied, so every storey the height limit allows is listed.
+  const profile: StoreyPlate[] = [];
+  for (let k = 1; k * floorHeight <= maxHeight + HEIGHT_TOL; k++) {
+    const z = k * floorHeight;
+    const inset = skyPlane !== undefined && z > skyPlane.startHeight ? (z - skyPlane.startHeight) / skyPlane.ratio : 0;
+    let m = buildableArea <= areaTol ? 0 : mBase;
+    let plate = base;
+    if (m > 0 && inset > 0) {
+      m = skyPlaneCut(ws, base, mBase, streets, inset);
+      plate = ws.plate;
+    }
+    const area = m > 0 ? Math.max(0, signedArea(plate, m)) : 0;
+    const width = area > areaTol ? polygonWidth(plate, m) : 0;
+    profile.push({ topHeight: z, inset, area, width });
+  }
+  return { ...withPlates, profile };
 }

@@ -51,6 +51,18 @@ export interface MassingInput {
 /** Why the next floor was not built. */
 export type LimitedBy = "height" | "plate" | "far" | "setbacks";
 
+/** One storey of a plate profile: the plate the rule offers before the plate-size and FAR stops. */
+export interface StoreyPlate {
+  /** Top of the storey, k × floorHeight, metres. */
+  readonly topHeight: number;
+  /** Distance the sky exposure plane requires from the street lot lines at that height (0 below its start or without one). */
+  readonly inset: number;
+  /** Plate area after the lot-coverage cap and the sky-plane cut, m² (0: empty). */
+  readonly area: number;
+  /** Least width of that plate, m (0: empty). */
+  readonly width: number;
+}
+
 /** The exact result of the massing rule for one input. */
 export interface MassingResult {
   readonly lotArea: number;
@@ -67,4 +79,6 @@ export interface MassingResult {
   readonly coverageCapped: boolean;
   /** Floor plates, floor by floor, only when asked for. */
   readonly plates?: readonly (readonly Point[])[];
+  /** Plate profile, storey by storey up to the height limit, only when asked for. */
+  readonly profile?: readonly StoreyPlate[];
 }

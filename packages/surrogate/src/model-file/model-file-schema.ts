@@ -3,6 +3,7 @@ import { gpModelFileSchema } from "./gp-model-file-schema.js";
 import { mlpModelFileSchema } from "./mlp-model-file-schema.js";
 import { ensembleModelFileSchema } from "./ensemble-model-file-schema.js";
 import { conformalModelFileSchema } from "./conformal-model-file-schema.js";
+import { plateStackModelFileSchema } from "./plate-stack-model-file-schema.js";
 
 /**
  * Every surrogate model file, discriminated by `modelType`. To add a model type, write its
@@ -14,6 +15,7 @@ export const modelFileSchema = z.discriminatedUnion("modelType", [
   mlpModelFileSchema,
   ensembleModelFileSchema,
   conformalModelFileSchema,
+  plateStackModelFileSchema,
 ]);
 
 /** Any parsed surrogate model file. */

@@ -4,6 +4,7 @@ import { mlpSurrogateFromFile } from "./mlp-surrogate-from-file.js";
 import { ensembleFromFile } from "../uncertainty/ensemble-from-file.js";
 import { conformalFromFile } from "../uncertainty/conformal-from-file.js";
 import type { ModelFile } from "./model-file-schema.js";
+import { plateStackFromFile } from "../plate-stack/plate-stack-from-file.js";
 
 /** A loader for each model type: builds the fitted surrogate from its validated file. */
 export type SurrogateLoaders = {
@@ -16,4 +17,5 @@ export const surrogateLoaders: SurrogateLoaders = {
   mlp: mlpSurrogateFromFile,
   ensemble: ensembleFromFile,
   conformal: conformalFromFile,
+  "plate-stack": plateStackFromFile,
 };

@@ -117,6 +117,7 @@ export function createGpPredictor(file: ModelFileShape): Predictor {
       for (let r = 0; r < m; r++) for (let k = 0; k < d; k++) q[r * d + k] = (q[r * d + k]! - lower[k]!) / span[k]!;
       const mean = Array.from({ length: m }, () => new Array<number>(t));
       const sd = Array.from({ length: m }, () => new Array<number>(t));
+      const sdLatent = Array.from({ length: m }, () => new Array<number>(t));
       const ks = new Float64Array(n);
       components.forEach((c, j) => {
         const l = factor(c);
@@ -135,9 +136,10 @@ export function createGpPredictor(file: ModelFileShape): Predictor {
           }
           mean[r]![j] = yMean[j]! + yStd[j]! * mu;
           sd[r]![j] = yStd[j]! * Math.sqrt(Math.max(0, c.s2 - vv) + c.noise);
+          sdLatent[r]![j] = yStd[j]! * Math.sqrt(Math.max(0, c.s2 - vv));
         }
       });
-      return { mean, sd };
+      return { mean, sd, sdLatent };
     },
   };
 }

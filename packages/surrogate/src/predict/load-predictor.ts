@@ -5,6 +5,7 @@ import { createMlpPredictor } from "./mlp-predictor.js";
 import { createGpPredictor } from "./gp-predictor.js";
 import { createEnsemblePredictor } from "./ensemble-predictor.js";
 import { createConformalPredictor } from "./conformal-predictor.js";
+import { createPlateStackPredictor } from "./plate-stack-predictor.js";
 import { checkModelChecksum } from "./check-model-checksum.js";
 import { sha256Hex } from "./sha256.js";
 import { checkJsonDepth } from "./check-json-depth.js";
@@ -25,7 +26,7 @@ function names(label: string, v: unknown): string[] {
 
 /**
  * Loads a floorcast model file (a parsed object or its JSON text) into a dependency-free predictor:
- * plain typed-array arithmetic for "gp", "mlp", "ensemble" and "conformal" files, importing nothing
+ * plain typed-array arithmetic for "gp", "mlp", "ensemble", "conformal" and "plate-stack" files, importing nothing
  * outside this directory, so it also runs in a browser.
  * @param modelJson - the model file, as an object or a JSON string.
  * @returns `{ modelType, inputs, targets, predict(x) }`; predict takes rows × inputs in original
@@ -72,7 +73,9 @@ function buildPredictor(modelJson: unknown): Predictor {
       return createEnsemblePredictor(shaped, loadPredictor);
     case "conformal":
       return createConformalPredictor(shaped, loadPredictor);
+    case "plate-stack":
+      return createPlateStackPredictor(shaped, loadPredictor);
     default:
-      throw new RangeError(`${FN}: modelType must be gp, mlp, ensemble or conformal, got ${JSON.stringify(file.modelType)}`);
+      throw new RangeError(`${FN}: modelType must be gp, mlp, ensemble, conformal or plate-stack, got ${JSON.stringify(file.modelType)}`);
   }
 }

@@ -2,6 +2,8 @@
 export interface PredictorOutput {
   readonly mean: number[][];
   readonly sd?: number[][];
+  /** GP files only: sd of the latent function (without the noise), rows × targets. */
+  readonly sdLatent?: number[][];
   /** Conformal files only: interval bounds with the stated coverage, rows × targets. */
   readonly interval?: { readonly lower: number[][]; readonly upper: number[][]; readonly coverage: number };
 }

@@ -7,6 +7,7 @@ import type { CommandContext } from "../command-context.js";
 import { UsageError } from "../usage-error.js";
 import { addNnOptions, fitNn } from "./fit-nn-options.js";
 import { addUncertaintyOptions, withUncertainty } from "./fit-uncertainty-options.js";
+import { addPlateStackOptions, fitPlateStackCsv } from "./fit-plate-stack-options.js";
 
 /** Options every model family shares, plus each family's own (added by that family's `add…Options`). */
 type FitOptions = Record<string, string | boolean | undefined> & {
@@ -72,6 +73,9 @@ const fitGp: FamilyFitter = async (data, opts, seed, say) => {
 
 /** One entry per model family: its fitter (its options are added in registerFitCommand). */
 const FAMILIES: Record<string, FamilyFitter> = { gp: withUncertainty(fitGp), nn: withUncertainty(fitNn) };
+/** Families that read more than the input and target columns (the plate profile). */
+const PROFILE_FAMILIES = ["plate-stack"];
+const familyNames = (): string => [...Object.keys(FAMILIES), ...PROFILE_FAMILIES].join(", ");
 
 /**
  * `floorcast fit`: fits a surrogate to the numeric columns of a CSV and writes the versioned model file.
@@ -81,16 +85,17 @@ const FAMILIES: Record<string, FamilyFitter> = { gp: withUncertainty(fitGp), nn:
 export function registerFitCommand(program: Command, ctx: CommandContext): void {
   const cmd = program
     .command("fit")
-    .description("Fit a surrogate (gp, nn) to a CSV's input and target columns and write the model file")
+    .description("Fit a surrogate (gp, nn, plate-stack) to a CSV's input and target columns and write the model file")
     .requiredOption("--data <file.csv>", "training data with a header row")
     .requiredOption("--inputs <a,b,...>", "input columns, comma-separated")
     .requiredOption("--target <col[,col2]>", "target column(s), comma-separated")
-    .option("--model <family>", `model family (${Object.keys(FAMILIES).join(", ")})`, "gp")
+    .option("--model <family>", `model family (${familyNames()})`, "gp")
     .option("--seed <n>", "seed of every random choice", "0")
     .requiredOption("--out <model.json>", "model file to write");
   addGpOptions(cmd);
   addNnOptions(cmd);
   addUncertaintyOptions(cmd);
+  addPlateStackOptions(cmd);
   cmd.action(async (opts: FitOptions) => {
     await runFit(opts, ctx);
   });
@@ -98,7 +103,7 @@ export function registerFitCommand(program: Command, ctx: CommandContext): void 
 
 async function runFit(opts: FitOptions, ctx: CommandContext): Promise<void> {
   const fitter = FAMILIES[opts.model];
-  if (!fitter) throw new UsageError(`fit: --model must be one of ${Object.keys(FAMILIES).join(", ")}, got ${opts.model}`);
+  if (!fitter && !PROFILE_FAMILIES.includes(opts.model)) throw new UsageError(`fit: --model must be one of ${familyNames()}, got ${opts.model}`);
   const inputs = names("--inputs", opts.inputs);
   const targets = names("--target", opts.target);
   const clash = targets.find((t) => inputs.includes(t));
@@ -106,7 +111,10 @@ async function runFit(opts: FitOptions, ctx: CommandContext): Promise<void> {
   const seed = integer("--seed", opts.seed, 0);
   const table = await readTable(opts.data, { inputs, targets });
   const data: TrainingData = { inputs, targets, x: table.x, y: table.y };
-  const model = await fitter(data, opts, seed, (line) => ctx.stderr.write(`${line}\n`));
+  const say = (line: string): void => void ctx.stderr.write(`${line}\n`);
+  const model = fitter
+    ? await fitter(data, opts, seed, say)
+    : await fitPlateStackCsv(opts.data, inputs, targets, opts, seed, (d, s) => fitNn(d, { ...opts, epochs: opts.epochs }, s, say));
   try {
     await writeFile(opts.out, `${JSON.stringify(model.toJSON())}\n`);
   } catch (e) {

@@ -5,6 +5,7 @@ import {
   createProgressBar,
   loadScenario,
   manifestPathFor,
+  massingEvaluator,
   parseShard,
   writeDataset,
   type DesignKind,
@@ -24,6 +25,7 @@ interface SampleOptions {
   evaluatorCommand?: string;
   processes?: string;
   evaluatorTimeout?: string;
+  plateProfile?: boolean;
   out: string;
 }
 
@@ -67,6 +69,10 @@ export function registerSampleCommand(program: Command, ctx: CommandContext): vo
       "with --evaluator-command: longest wait for an answer before the program is stopped and the run fails (0 = no limit)",
       "300",
     )
+    .option(
+      "--plate-profile",
+      "also write the plate profile (rule_*, plateArea_k, plateWidth_k columns) that the plate-stack surrogate learns from",
+    )
     .requiredOption("--out <file.csv>", "output CSV (manifest written beside it)")
     .action(async (opts: SampleOptions) => {
       const n = wholeNumber("--n", opts.n, 1);
@@ -81,8 +87,17 @@ export function registerSampleCommand(program: Command, ctx: CommandContext): vo
         throw new UsageError("sample: --processes needs --evaluator-command");
       }
       const timeoutMs = timeoutSeconds(opts.evaluatorTimeout ?? "300");
+      if (opts.plateProfile === true && opts.evaluatorCommand !== undefined) {
+        throw new UsageError(
+          "sample: --plate-profile is for the built-in massing rule; an external evaluator writes the plate-profile columns itself",
+        );
+      }
       const evaluator: Evaluator | undefined =
-        opts.evaluatorCommand === undefined ? undefined : commandEvaluator(opts.evaluatorCommand, { processes, timeoutMs });
+        opts.evaluatorCommand !== undefined
+          ? commandEvaluator(opts.evaluatorCommand, { processes, timeoutMs })
+          : opts.plateProfile === true
+            ? massingEvaluator(scenario, { plateProfile: true })
+            : undefined;
       let bar: ReturnType<typeof createProgressBar> | undefined;
       try {
         const manifest = await writeDataset(scenario, {
