@@ -2,13 +2,17 @@
  * Speed of the exact massing evaluator on the demo's quad-parcel spaces (the three zones of the
  * invented district Quillmere, sampled uniformly from seeded draws), one core, one process.
  * Prints evaluations per CPU-second per zone side by side, with and without plate output, and the ratio
- * to the 50,000/s aim. A script, not a test: run `npm run bench:massing` after `npm run build`.
+ * to the 50,000/s aim; then, in the same run, the same zones' controls on non-convex lots of four
+ * families (L-shaped, flag, notched, star-shaped; at most 12 corners) against the 20,000/s aim, and the
+ * convex ÷ non-convex ratio. A script, not a test: run `npm run bench:massing` after `npm run build`.
  */
 import seedrandom from "seedrandom";
 import { evaluateMassing, quadParcel } from "@floorcast/sampler";
-import type { MassingInput } from "@floorcast/sampler";
+import type { MassingInput, Parcel } from "@floorcast/sampler";
+import { SIMPLE_LOT_FAMILIES, simpleLot } from "./simple-lot-families.js";
 
 const AIM = 50_000;
+const NON_CONVEX_AIM = 20_000;
 const CASES = 20_000;
 const SECONDS = Number(process.env.FLOORCAST_BENCH_SECONDS ?? "1");
 
@@ -50,6 +54,27 @@ const ZONES: Record<string, (u: Draw, pick: <T>(xs: T[]) => T) => MassingInput> 
     };
   },
 };
+
+/**
+ * Non-convex draws: each zone's controls in turn, on a lot of the family (rotated at random). The
+ * zone's own parcel is drawn and discarded, so the controls follow the same distributions.
+ */
+function nonConvexDraws(family: (typeof SIMPLE_LOT_FAMILIES)[number]): MassingInput[] {
+  const rng = seedrandom(`massing-speed:non-convex:${family}`);
+  const u: Draw = (lo, hi) => lo + (hi - lo) * rng();
+  const pick = <T>(xs: T[]): T => xs[Math.floor(rng() * xs.length)]!;
+  const zones = Object.keys(ZONES);
+  return Array.from({ length: CASES }, (_, i) => {
+    const controls = ZONES[zones[i % zones.length]!]!(u, pick);
+    const lot = simpleLot(family, u);
+    const th = u(0, 2 * Math.PI);
+    const parcel: Parcel = {
+      vertices: lot.vertices.map(([x, y]) => [x * Math.cos(th) - y * Math.sin(th), x * Math.sin(th) + y * Math.cos(th)]),
+      lotLines: lot.lotLines,
+    };
+    return { ...controls, parcel };
+  });
+}
 
 function draws(zone: string): MassingInput[] {
   const rng = seedrandom(`massing-speed:${zone}`);
@@ -100,9 +125,39 @@ for (const [zone, inputs] of byZone) {
 const mixed = rate(all, false);
 rows.push(["all three, mixed", mixed.perSecond.toFixed(0), (mixed.perSecond / AIM).toFixed(1), "", "", ""]);
 
-const widths = rows[0]!.map((_, j) => Math.max(...rows.map((r) => r[j]!.length)));
+// Non-convex lots, same zones' controls, measured in the same run.
+const ncRows: string[][] = [["non-convex family", "evals/s", "× aim", "evals/s (plates)", "plates ÷ plain", "mean floors"]];
+const byFamily = SIMPLE_LOT_FAMILIES.map((family) => [family, nonConvexDraws(family)] as const);
+const allNc: MassingInput[] = byFamily.flatMap(([, inputs]) => inputs);
+rate(allNc, false);
+rate(allNc, true);
+for (const [family, inputs] of byFamily) {
+  const plain = rate(inputs, false);
+  const withPlates = rate(inputs, true);
+  const floors = inputs.reduce((s, x) => s + evaluateMassing(x).floors, 0) / inputs.length;
+  ncRows.push([
+    family,
+    plain.perSecond.toFixed(0),
+    (plain.perSecond / NON_CONVEX_AIM).toFixed(1),
+    withPlates.perSecond.toFixed(0),
+    (withPlates.perSecond / plain.perSecond).toFixed(2),
+    floors.toFixed(1),
+  ]);
+}
+const mixedNc = rate(allNc, false);
+ncRows.push(["all four, mixed", mixedNc.perSecond.toFixed(0), (mixedNc.perSecond / NON_CONVEX_AIM).toFixed(1), "", "", ""]);
+
+function print(table: string[][]): void {
+  const widths = table[0]!.map((_, j) => Math.max(...table.map((r) => r[j]!.length)));
+  for (const r of table) process.stdout.write(`${r.map((c, j) => (j === 0 ? c.padEnd(widths[j]!) : c.padStart(widths[j]!))).join("  ")}\n`);
+}
 process.stdout.write(
-  `floorcast massing speed — ${CASES} seeded draws per zone, ≥ ${SECONDS} CPU-s per cell, evaluations per CPU-second, one core, Node ${process.version}\n` +
-    `aim: ${AIM} evaluations/s\n\n`,
+  `floorcast massing speed — ${CASES} seeded draws per zone or family, ≥ ${SECONDS} CPU-s per cell, evaluations per CPU-second, one core, Node ${process.version}\n` +
+    `aims: ${AIM} evaluations/s on convex lots, ${NON_CONVEX_AIM} on non-convex lots (≤ 12 corners)\n\n`,
 );
-for (const r of rows) process.stdout.write(`${r.map((c, j) => (j === 0 ? c.padEnd(widths[j]!) : c.padStart(widths[j]!))).join("  ")}\n`);
+print(rows);
+process.stdout.write("\n");
+print(ncRows);
+process.stdout.write(
+  `\nconvex ÷ non-convex (mixed, plain): ${(mixed.perSecond / mixedNc.perSecond).toFixed(1)}× — ${mixed.perSecond.toFixed(0)} vs ${mixedNc.perSecond.toFixed(0)} evaluations per CPU-second, side by side in this run\n`,
+);

@@ -1,9 +1,11 @@
 import { clipHalfPlanes } from "../geometry/clip-half-planes.js";
 import { convexPolygonProblem } from "../geometry/convex-polygon-problem.js";
+import { simplePolygonProblem } from "../geometry/simple-polygon-problem.js";
 import { makeCounterClockwise } from "../geometry/make-counter-clockwise.js";
 import { signedArea } from "../geometry/polygon-area.js";
 import { polygonPerimeter } from "../geometry/polygon-perimeter.js";
 import { polygonWidth } from "../geometry/polygon-width.js";
+import { evaluateSimpleLot } from "./evaluate-simple-lot.js";
 import type { LimitedBy, MassingInput, MassingResult, Point, StoreyPlate } from "./massing-types.js";
 import { MassingWorkspace } from "./massing-workspace.js";
 import { skyPlaneCut } from "./sky-plane-cut.js";
@@ -48,11 +50,12 @@ function toPoints(xy: Float64Array, m: number, ox: number, oy: number): Point[] 
 }
 
 /**
- * Evaluates the massing rule (version 1) exactly: yards as half-planes at each lot line's setback,
+ * Evaluates the massing rule (version 1) exactly. On a convex lot: yards as half-planes at each lot line's setback,
  * the lot-coverage cap as an inner parallel polygon of the buildable area, then floors stacked
  * under the height limit, the sky exposure plane (a cut at (z − startHeight) / ratio from every
  * street lot line), the plate limits and the FAR cap. The rule is written out in the README
- * ("The massing rule (version 1)"); yard depths are measured at right angles to the lot line, as
+ * ("The massing rule (version 1)"). A simple non-convex lot goes through the yard rule for simple lots
+ * (evaluateSimpleLot), which gives the same results on a convex lot; yard depths are measured at right angles to the lot line, as
  * zoning ordinances define yards. Estimates for early feasibility studies, not a zoning determination.
  * @param input - parcel, setbacks, heights and caps in metres (validated).
  * @param options - `plates: true` adds the floor plates to the result.
@@ -94,7 +97,14 @@ export function evaluateMassing(input: MassingInput, options?: EvaluateMassingOp
     xy[2 * i + 1] = v[1] - oy;
   }
   const problem = convexPolygonProblem(xy, n);
-  if (problem !== null) throw new RangeError(`evaluateMassing: parcel.vertices ${problem}`);
+  if (problem !== null) {
+    // Not convex: a simple lot goes through the yard rule for simple lots; anything else is refused.
+    const simple = simplePolygonProblem(xy, n);
+    if (simple !== null) {
+      throw new RangeError(`evaluateMassing: parcel.vertices ${problem.startsWith("is not convex") ? simple : problem}`);
+    }
+    return evaluateSimpleLot(xy.slice(0, 2 * n), n, input, signedArea(xy, n) > 0, { plates: wantPlates, profile: wantProfile }, ox, oy);
+  }
   const orient = signedArea(xy, n) > 0 ? 1 : -1;
   const streetSetback = setbacks.street ?? setbacks.front;
 
@@ -158,6 +168,7 @@ export function evaluateMassing(input: MassingInput, options?: EvaluateMassingOp
   };
   const farCap = input.maxFar === undefined ? Infinity : input.maxFar * lotArea + areaTol;
   const plates: Point[][] | undefined = wantPlates ? [] : undefined;
+  const plateFloors: number[] | undefined = wantPlates ? [] : undefined;
   let baseFails: boolean | undefined;
   let floors = 0;
   let gfa = 0;
@@ -203,6 +214,7 @@ export function evaluateMassing(input: MassingInput, options?: EvaluateMassingOp
       facadeLength = polygonPerimeter(plate, m);
     }
     if (plates !== undefined) plates.push(toPoints(plate, m, ox, oy));
+    if (plateFloors !== undefined) plateFloors.push(k);
   }
   const result: MassingResult = {
     lotArea,
@@ -218,7 +230,7 @@ export function evaluateMassing(input: MassingInput, options?: EvaluateMassingOp
     limitedBy,
     coverageCapped,
   };
-  const withPlates = plates === undefined ? result : { ...result, plates };
+  const withPlates = plates === undefined ? result : { ...result, plates, plateFloors };
   if (!wantProfile) return withPlates;
   // The profile: storey k (top at z = k × floorHeight ≤ maxHeight) has the base plate, cut by the sky exposure
   // plane above its start; no plate or FAR test is applied, so every storey the height limit allows is listed.

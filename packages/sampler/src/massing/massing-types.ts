@@ -6,7 +6,7 @@ export type LotLine = "front" | "side" | "rear" | "street";
 /** A point in metres, `[x, y]`. */
 export type Point = readonly [number, number];
 
-/** A parcel: a simple convex polygon and the kind of each of its edges. */
+/** A parcel: a simple polygon (convex or not, no holes) and the kind of each of its edges. */
 export interface Parcel {
   /** Vertices in either orientation; edge i runs from vertex i to vertex (i + 1) mod n. */
   readonly vertices: readonly Point[];
@@ -77,8 +77,13 @@ export interface MassingResult {
   readonly facadeLength: number;
   readonly limitedBy: LimitedBy;
   readonly coverageCapped: boolean;
-  /** Floor plates, floor by floor, only when asked for. */
+  /**
+   * Floor plates, only when asked for: every piece of every storey built, storey by storey
+   * (one piece per storey on a convex lot; a non-convex lot's plate may fall into several).
+   */
   readonly plates?: readonly (readonly Point[])[];
   /** Plate profile, storey by storey up to the height limit, only when asked for. */
   readonly profile?: readonly StoreyPlate[];
+  /** With `plates`: the storey (1 = ground) of each entry of `plates`. */
+  readonly plateFloors?: readonly number[];
 }
