@@ -120,6 +120,13 @@ describe("plates in several pieces", () => {
     expect(evaluateMassing({ ...narrow, minPlateWidth: 11 }).limitedBy).toBe("plate");
   });
 
+  it("the plate profile sums the pieces and reports the widest piece's width", () => {
+    const r = evaluateMassing({ ...U, minPlateArea: 1000 }, { profile: true });
+    expect(r.floors).toBe(0);
+    expect(r.profile!.map((p) => p.area)).toEqual([expect.closeTo(300, 9), expect.closeTo(300, 9)]);
+    expect(r.profile!.map((p) => p.width)).toEqual([expect.closeTo(10, 9), expect.closeTo(10, 9)]);
+  });
+
   it("yards that leave nothing stop with limitedBy setbacks", () => {
     expect(evaluateMassing({ ...U, setbacks: { front: 20, side: 0, rear: 0 } }).limitedBy).toBe("setbacks");
   });
