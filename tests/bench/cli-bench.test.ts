@@ -6,7 +6,7 @@ import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { Writable } from "node:stream";
 import { fitGaussianProcess } from "@floorcast/surrogate";
-import { main } from "@floorcast/bench";
+import { main } from "../../packages/bench/dist/cli/main.js";
 import { branin } from "../../packages/bench/src/problem/branin.js";
 
 const bin = fileURLToPath(new URL("../../packages/bench/bin/floorcast.js", import.meta.url));

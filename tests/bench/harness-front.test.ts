@@ -2,7 +2,8 @@ import { describe, expect, it } from "vitest";
 import { frontHypervolume, frontReference } from "../../packages/bench/src/harness/front-hypervolume.js";
 import { frontEvaluationsToTarget } from "../../packages/bench/src/harness/front-evaluations-to-target.js";
 import { findExactOptimum } from "../../packages/bench/src/harness/find-exact-optimum.js";
-import type { OptimisationProblem } from "../../packages/bench/src/optimise/optimisation-problem.js";
+import type { Design, OptimisationProblem, Outputs } from "../../packages/bench/src/optimise/optimisation-problem.js";
+import { problemDataset } from "../../packages/bench/src/problem/problem-dataset.js";
 import type { BenchProblem } from "../../packages/bench/src/problem/bench-problem.js";
 
 // maximise f1 = x and f2 = 1 − x² on x ∈ [0, 1]: every x is Pareto-optimal (derived)
@@ -13,6 +14,9 @@ const op: OptimisationProblem = {
     { output: "f2", sense: "max" },
   ],
 };
+function toyFront(d: Design): Outputs {
+  return { f1: d.x as number, f2: 1 - (d.x as number) ** 2 };
+}
 const problem: BenchProblem = {
   name: "toy-front",
   title: "toy",
@@ -24,7 +28,8 @@ const problem: BenchProblem = {
   exact: { gridPoints: 101, refineEvaluations: 0 },
   outputs: ["f1", "f2"],
   trainingVariables: op.variables,
-  evaluate: (d) => ({ f1: d.x as number, f2: 1 - (d.x as number) ** 2 }),
+  evaluate: toyFront,
+  dataset: problemDataset({ name: "toy-front", title: "toy", description: "toy", fileName: "toy.json", contents: {} }, op.variables, undefined, { name: "toy-front", evaluate: toyFront }),
 };
 
 describe("front hypervolume and its reference point", () => {

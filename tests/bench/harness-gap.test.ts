@@ -1,5 +1,8 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
+import { mkdtempSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
 import { optimumGap } from "../../packages/bench/src/harness/optimum-gap.js";
 import { formatPercent } from "../../packages/bench/src/harness/format-percent.js";
 import { reevaluateSurrogateOptimum } from "../../packages/bench/src/harness/reevaluate-surrogate-optimum.js";
@@ -9,6 +12,7 @@ import { scoreOutputs } from "../../packages/bench/src/optimise/evaluation-sessi
 import type { Design, Evaluator, OptimisationProblem, Outputs } from "../../packages/bench/src/optimise/optimisation-problem.js";
 import type { BenchProblem } from "../../packages/bench/src/problem/bench-problem.js";
 import type { BenchTrainer } from "../../packages/bench/src/harness/bench-trainer.js";
+import { problemDataset } from "../../packages/bench/src/problem/problem-dataset.js";
 
 describe("optimumGap", () => {
   it("a hand-made case: exact optimum 12,960 m², surrogate-driven design 11,880 m² → 1080/12960 = 0.08333 (derived)", () => {
@@ -108,13 +112,16 @@ describe("the harness never reports an exactly infeasible design as optimal", ()
       outputs: ["f", "g"],
       trainingVariables: problem.variables,
       evaluate: exactOutputs,
+      dataset: problemDataset({ name: "hand", title: "hand", description: "hand", fileName: "hand.json", contents: {} }, problem.variables, undefined, { name: "hand", evaluate: exactOutputs }),
     };
     const liar: BenchTrainer = {
       name: "liar",
       fit: (data) => Promise.resolve({ targets: data.targets, predict: (x: readonly (readonly number[])[]) => ({ mean: x.map((r) => [r[0]!, r[0]! - 0.3]) }) }),
     };
-    const test = sampleTrainingSet(bench, 10, "t", undefined, "random");
-    const r = await runSingleTrial(bench, { trainer: liar, trainingSize: 8, seed: 1, test, exactValue: 0.5, refineBudget: 0 });
+    const workDir = mkdtempSync(join(tmpdir(), "floorcast-gap-"));
+    const test = await sampleTrainingSet(bench, 10, "t", workDir, undefined, "random");
+    const r = await runSingleTrial(bench, { trainer: liar, trainingSize: 8, seed: 1, test, exactValue: 0.5, refineBudget: 0, workDir });
+    rmSync(workDir, { recursive: true, force: true });
     expect(r.source).not.toBe("surrogate-optimum");
     expect(r.result!.g as number).toBeLessThanOrEqual(0.5);
     expect(r.gap).toBeCloseTo(optimumGap(0.5, r.value!), 15);

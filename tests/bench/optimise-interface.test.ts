@@ -13,7 +13,7 @@ import {
   scoreOutputs,
   type OptimisationProblem,
 } from "@floorcast/bench";
-import { createDesignCodec } from "../../packages/bench/src/optimise/design-codec.js";
+import { createVariableCodec } from "@floorcast/sampler";
 import { braninEvaluator, braninProblem, fnEvaluator, forrester, forresterProblem } from "./optimise-test-functions.js";
 
 const single = [
@@ -198,7 +198,7 @@ describe("codec property: every coded vector is legal (fast-check)", () => {
       ],
       objectives: [{ output: "f", sense: "min" }],
     };
-    const codec = createDesignCodec(p);
+    const codec = createVariableCodec(p.variables);
     fc.assert(
       fc.property(fc.array(fc.double({ min: -1, max: 2, noNaN: true }), { minLength: 4, maxLength: 4 }), (u) => {
         for (const x of [codec.fromUnit(u), codec.snapAll(u.map((v) => v * 10 - 3))]) {

@@ -1,5 +1,5 @@
 import { Readable, Writable } from "node:stream";
-import { main } from "@floorcast/bench";
+import { main } from "../../packages/bench/dist/cli/main.js";
 
 /** What one in-process CLI run printed and returned. */
 export interface CliOutcome {

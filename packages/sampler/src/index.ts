@@ -70,6 +70,20 @@ export type {
   IntegerParameter,
   Parameter,
 } from "./space/parameter.js";
+export type {
+  CategoricalVariable,
+  ContinuousVariable,
+  IntegerVariable,
+  Variable,
+  VariableRecord,
+} from "./space/variable.js";
+export { createVariableCodec, modelRowBounds, rowValue } from "./space/variable-codec.js";
+export type { VariableCodec } from "./space/variable-codec.js";
+export { inputSchemaEntrySchema, inputSchemaOf, variablesOfSchema } from "./space/input-schema.js";
+export type { InputSchemaEntry } from "./space/input-schema.js";
+export { checkSchemaMatch } from "./space/check-schema-match.js";
+export { checkSchemaRows } from "./space/check-schema-rows.js";
+export { latticeCount } from "./space/lattice-count.js";
 export type { DesignSpace } from "./space/design-space.js";
 export { validateDesignSpace } from "./space/validate-design-space.js";
 export { mapUnitToSpace } from "./space/map-unit-to-space.js";

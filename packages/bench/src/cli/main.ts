@@ -1,11 +1,10 @@
+import { FLOORCAST_CAUTION } from "../floorcast-caution.js";
 import { Command, CommanderError } from "commander";
 import type { CommandContext } from "./command-context.js";
 import { EXIT_CODES } from "./exit-codes.js";
 import { UsageError } from "./usage-error.js";
 import { registerCommands } from "./register-commands.js";
 
-const CAUTION =
-  "Estimates for early feasibility studies only: not a zoning determination. Local codes and licensed professionals decide.";
 
 /**
  * Runs the `floorcast` command line.
@@ -25,14 +24,14 @@ export async function main(argv: readonly string[], io?: Partial<CommandContext>
   };
   const program = new Command("floorcast")
     .description(
-      `Fast, validated surrogates of an exact floor-area (massing) calculation.\n${CAUTION}`,
+      `Fast, validated surrogates of an exact floor-area (massing) calculation.\n${FLOORCAST_CAUTION}`,
     )
     .exitOverride()
     .configureOutput({
       writeOut: (s) => ctx.stdout.write(s),
       writeErr: (s) => ctx.stderr.write(s),
     });
-  registerCommands(program, ctx);
+  await registerCommands(program, ctx, argv);
   try {
     await program.parseAsync(argv as string[]);
   } catch (error) {

@@ -1,31 +1,42 @@
 import type { Command } from "commander";
 import type { CommandContext } from "./command-context.js";
-import { registerSampleCommand } from "./commands/sample.js";
-import { registerMergeCommand } from "./commands/merge.js";
-import { registerAssessCommand } from "./commands/assess.js";
-import { registerBenchCommand } from "./commands/bench.js";
-import { registerOptimizeCommand } from "./commands/optimize.js";
-import { registerDemoCommand } from "./commands/demo.js";
-import { registerMassingCommand } from "./commands/massing.js";
-import { registerFitCommand } from "./commands/fit.js";
-import { registerPredictCommand } from "./commands/predict.js";
-import { registerDesignCommand } from "./commands/design.js";
+
+type Register = (program: Command, ctx: CommandContext) => void;
 
 /**
- * Adds every subcommand to the program. Each command lives in its own file under `commands/`
- * and exports a `register…Command(program, ctx)` function called here.
+ * Every subcommand: its name, the one line `floorcast --help` lists, and its module, loaded only when the command
+ * runs (so `--help` and start-up load no command's dependencies). Each command lives in `commands/<name>.ts` and
+ * exports a `register…Command(program, ctx)` function; adding one is one line here.
  */
-export function registerCommands(program: Command, ctx: CommandContext): void {
-  void program;
-  void ctx;
-  registerSampleCommand(program, ctx);
-  registerMergeCommand(program, ctx);
-  registerAssessCommand(program, ctx);
-  registerBenchCommand(program, ctx);
-  registerOptimizeCommand(program, ctx);
-  registerDemoCommand(program, ctx);
-  registerMassingCommand(program, ctx);
-  registerFitCommand(program, ctx);
-  registerPredictCommand(program, ctx);
-  registerDesignCommand(program, ctx);
+const COMMANDS: readonly { readonly name: string; readonly summary: string; readonly load: () => Promise<Register> }[] = [
+  { name: "sample", summary: "sample a scenario with the exact rule into a dataset CSV and manifest", load: async () => (await import("./commands/sample.js")).registerSampleCommand },
+  { name: "merge", summary: "join dataset shards into one CSV identical to an unsharded run", load: async () => (await import("./commands/merge.js")).registerMergeCommand },
+  { name: "assess", summary: "trust report of a surrogate on an independent test set", load: async () => (await import("./commands/assess.js")).registerAssessCommand },
+  { name: "bench", summary: "measure the optimum gap of surrogate-based optimisation against the exact optimum", load: async () => (await import("./commands/bench.js")).registerBenchCommand },
+  { name: "optimize", summary: "optimise a problem file on the exact rule or on a surrogate", load: async () => (await import("./commands/optimize.js")).registerOptimizeCommand },
+  { name: "demo", summary: "run the Quillmere demo suite end to end", load: async () => (await import("./commands/demo.js")).registerDemoCommand },
+  { name: "massing", summary: "evaluate the exact massing rule on JSON Lines of inputs", load: async () => (await import("./commands/massing.js")).registerMassingCommand },
+  { name: "fit", summary: "fit a surrogate to a CSV and write the model file", load: async () => (await import("./commands/fit.js")).registerFitCommand },
+  { name: "predict", summary: "predict with a saved surrogate for every row of a CSV", load: async () => (await import("./commands/predict.js")).registerPredictCommand },
+  { name: "design", summary: "write a space-filling design in the unit cube to CSV", load: async () => (await import("./commands/design.js")).registerDesignCommand },
+];
+
+/**
+ * Adds the subcommands the arguments need: the named command alone (also for `help <command>`), loaded from its
+ * module; otherwise (root help, no or an unknown command) every command by name and summary only.
+ * @param program - the root command.
+ * @param ctx - the streams and exit status.
+ * @param argv - process.argv-style arguments (node, script, ...args).
+ */
+export async function registerCommands(program: Command, ctx: CommandContext, argv: readonly string[]): Promise<void> {
+  const args = argv.slice(2);
+  const first = args.find((a) => !a.startsWith("-"));
+  const wanted = first === "help" ? args[args.indexOf("help") + 1] : first;
+  const one = COMMANDS.find((c) => c.name === wanted);
+  if (one) {
+    (await one.load())(program, ctx);
+    program.commands.find((c) => c.name() === one.name)?.summary(one.summary);
+    return;
+  }
+  for (const c of COMMANDS) program.command(c.name).summary(c.summary).allowUnknownOption().allowExcessArguments();
 }

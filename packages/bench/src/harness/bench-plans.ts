@@ -24,7 +24,7 @@ export function benchPlans(
 ): TrialPlan[] {
   const vars = problem.trainingVariables;
   const plans: TrialPlan[] = surrogates.map((k) => ({
-    trainer: floorcastTrainer(k, vars, quick),
+    trainer: floorcastTrainer(k, quick),
     sampler: "lhs-maximin",
     sizes: settings.trainingSizes,
     seeds: settings.seeds,
@@ -34,7 +34,7 @@ export function benchPlans(
       plans.push({ trainer: t, sampler: "lhs-maximin", sizes: settings.peerSizes, seeds: settings.seeds });
     }
     plans.push({
-      trainer: floorcastTrainer("gp", vars, quick),
+      trainer: floorcastTrainer("gp", quick),
       sampler: "scipy-lhs",
       sizes: settings.peerSizes,
       seeds: settings.seeds,

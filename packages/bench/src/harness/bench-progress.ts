@@ -1,5 +1,6 @@
 import type { Writable } from "node:stream";
-import cliProgress from "cli-progress";
+import { createRequire } from "node:module";
+import type cliProgressModule from "cli-progress";
 
 /** Progress of a bench run on a terminal. */
 export interface BenchProgress {
@@ -19,7 +20,7 @@ export function benchProgress(stream: Writable): BenchProgress {
   const tty = (stream as Writable & { isTTY?: boolean }).isTTY === true;
   const t0 = performance.now();
   const elapsed = (): string => `${((performance.now() - t0) / 1000).toFixed(1)}s`;
-  let bar: cliProgress.SingleBar | null = null;
+  let bar: cliProgressModule.SingleBar | null = null;
   let current = "";
   return {
     problem(name, state, index, total) {
@@ -32,6 +33,8 @@ export function benchProgress(stream: Writable): BenchProgress {
     step(label, done, total) {
       if (tty) {
         if (!bar) {
+          // loaded only when a bar is drawn: importing the harness loads no progress-bar package
+          const cliProgress = createRequire(import.meta.url)("cli-progress") as typeof cliProgressModule;
           bar = new cliProgress.SingleBar(
             { stream: stream as NodeJS.WriteStream, format: `  ${current} [{bar}] {value}/{total} trials · {step}`, fps: 5, clearOnComplete: true },
             cliProgress.Presets.shades_classic,

@@ -1,19 +1,14 @@
-import type { Design, OptimisationVariable } from "../optimise/optimisation-problem.js";
+import { rowValue, type Variable } from "@floorcast/sampler";
+import type { Design } from "../optimise/optimisation-problem.js";
 
 /**
- * The numeric row a surrogate sees for a design: each variable's value in order, a categorical
- * one as its level index (the optimisers' coding).
+ * The model row a surrogate sees for a design, in the sampler's one coding (createVariableCodec): each
+ * variable's value in order, a numeric categorical level as its own value (as `floorcast sample` writes it in
+ * the CSV the model was fitted on), a string level as its position in `levels`.
  * @param variables - the surrogate's input variables, in order.
  * @param design - the design (may hold extra keys).
  * @returns one number per variable (NaN when missing or an unknown level).
  */
-export function designRow(variables: readonly OptimisationVariable[], design: Design): number[] {
-  return variables.map((v) => {
-    const value = design[v.name];
-    if (v.kind === "categorical") {
-      const k = v.levels.indexOf(value as string | number);
-      return k < 0 ? Number.NaN : k;
-    }
-    return typeof value === "number" ? value : Number.NaN;
-  });
+export function designRow(variables: readonly Variable[], design: Design): number[] {
+  return variables.map((v) => rowValue(v, design[v.name]));
 }

@@ -1,8 +1,5 @@
-import { bayesianOptimisation } from "../optimise/bayesian-optimisation.js";
-import { geneticAlgorithm } from "../optimise/genetic-algorithm.js";
 import { gridAxes, gridSearch } from "../optimise/grid-search.js";
-import { particleSwarm } from "../optimise/particle-swarm.js";
-import { randomSearch } from "../optimise/random-search.js";
+import { optimizerNamed } from "../optimise/optimizers.js";
 import type { OptimisationResult } from "../optimise/optimisation-problem.js";
 import type { BenchProblem } from "../problem/bench-problem.js";
 import type { EvaluationsToTarget } from "./bench-report-types.js";
@@ -51,10 +48,10 @@ export async function evaluationsToTarget(
   const sense = op.objectives[0]!.sense;
   const target = budgets.target ?? 0.005;
   const runs: [string, number, (seed: number) => Promise<OptimisationResult>][] = [
-    ["bo", budgets.bo, (seed) => bayesianOptimisation(op, exactEvaluator(problem), { seed, maxEvaluations: budgets.bo, candidates: 500, acquisitionStarts: 2 })],
-    ["ga", budgets.search, (seed) => geneticAlgorithm(op, exactEvaluator(problem), { seed, maxEvaluations: budgets.search })],
-    ["pso", budgets.search, (seed) => particleSwarm(op, exactEvaluator(problem), { seed, maxEvaluations: budgets.search })],
-    ["random", budgets.search, (seed) => randomSearch(op, exactEvaluator(problem), { seed, maxEvaluations: budgets.search })],
+    ["bo", budgets.bo, (seed) => optimizerNamed("bo").run(op, exactEvaluator(problem), { seed, maxEvaluations: budgets.bo, candidates: 500, acquisitionStarts: 2 })],
+    ["ga", budgets.search, (seed) => optimizerNamed("ga").run(op, exactEvaluator(problem), { seed, maxEvaluations: budgets.search })],
+    ["pso", budgets.search, (seed) => optimizerNamed("pso").run(op, exactEvaluator(problem), { seed, maxEvaluations: budgets.search })],
+    ["random", budgets.search, (seed) => optimizerNamed("random").run(op, exactEvaluator(problem), { seed, maxEvaluations: budgets.search })],
   ];
   const out: EvaluationsToTarget[] = [];
   for (const [method, budget, run] of runs) {

@@ -1,51 +1,38 @@
-import { fitGaussianProcess } from "@floorcast/surrogate";
-import { fitMlp } from "@floorcast/surrogate/nn";
-import type { OptimisationVariable } from "../optimise/optimisation-problem.js";
+import { readFile, writeFile } from "node:fs/promises";
+import { loadSurrogate } from "@floorcast/surrogate";
+import type { FitOptions } from "../families/model-family.js";
+import { fitModelFile } from "../families/fit-model-file.js";
 import type { BenchTrainer } from "./bench-trainer.js";
 
-/** The declared bounds of the surrogate's inputs: each variable's range (a categorical's level indices). */
-function inputBounds(variables: readonly OptimisationVariable[]): { lower: number[]; upper: number[] } {
-  return {
-    lower: variables.map((v) => (v.kind === "categorical" ? 0 : v.min)),
-    upper: variables.map((v) => (v.kind === "categorical" ? Math.max(1, v.levels.length - 1) : v.max)),
-  };
-}
+/** The demo's and tests' smaller fits, given as `floorcast fit` options (everything else at fit's defaults). */
+const QUICK: Readonly<Record<string, FitOptions>> = {
+  gp: { restarts: "2" },
+  nn: { layers: "32,32", epochs: "150", batchSize: "16", learningRate: "0.005" },
+};
 
 /**
- * floorcast's own surrogates as benchmark trainers: "gp" (fitGaussianProcess, Matérn-5/2 ARD,
- * hyperparameters by maximum marginal likelihood with seeded restarts) and "nn" (fitMlp, a
- * two-hidden-layer ReLU MLP with early stopping). Both scale inputs from the variables' declared
- * bounds, so every trial shares one scaling.
- * @param kind - "gp" or "nn".
- * @param variables - the surrogate's input variables (the problem's training variables).
- * @param quick - smaller restarts/epochs for the demo and tests.
+ * floorcast's own surrogates as benchmark trainers, fitted exactly as a user fits them: the training set's CSV
+ * goes through the one fit entry `floorcast fit` uses (fitModelFile: its defaults, its input schema from the
+ * manifest), the model file is written and loaded back with loadSurrogate, so the model measured is the file a
+ * user would hold.
+ * @param family - a registered family name, e.g. "gp" or "nn".
+ * @param quick - the demo's smaller fits (as fit options: GP 2 restarts; NN 32-32, 150 epochs, batch 16, step 0.005).
+ * @returns the trainer.
  */
-export function floorcastTrainer(
-  kind: "gp" | "nn",
-  variables: readonly OptimisationVariable[],
-  quick = false,
-): BenchTrainer {
-  const bounds = inputBounds(variables);
-  if (kind === "gp") {
-    return {
-      name: "gp",
-      fit: (data, seed) =>
-        Promise.resolve(
-          fitGaussianProcess(data, { seed, inputBounds: bounds, restarts: quick ? 2 : 3, maxIterations: quick ? 100 : 200 }),
-        ),
-    };
-  }
+export function floorcastTrainer(family: string, quick = false): BenchTrainer {
   return {
-    name: "nn",
-    fit: (data, seed) =>
-      fitMlp(data, {
+    name: family,
+    async fit(train, seed, modelFile) {
+      const { text } = await fitModelFile({
+        data: train.csv,
+        inputs: train.inputs,
+        targets: train.targets,
+        model: family,
         seed,
-        inputBounds: bounds,
-        layers: quick ? [32, 32] : [64, 64],
-        epochs: quick ? 150 : 400,
-        patience: quick ? 15 : 30,
-        batchSize: 16,
-        learningRate: 0.005,
-      }),
+        options: quick ? (QUICK[family] ?? {}) : {},
+      });
+      await writeFile(modelFile, text);
+      return loadSurrogate(await readFile(modelFile, "utf8"), modelFile);
+    },
   };
 }

@@ -1,5 +1,4 @@
-import { nsga2 } from "../optimise/nsga2.js";
-import { randomSearch } from "../optimise/random-search.js";
+import { optimizerNamed } from "../optimise/optimizers.js";
 import type { EvaluatedDesign, OptimisationResult } from "../optimise/optimisation-problem.js";
 import type { BenchProblem } from "../problem/bench-problem.js";
 import type { EvaluationsToTarget } from "./bench-report-types.js";
@@ -43,8 +42,8 @@ export async function frontEvaluationsToTarget(
   const target = budgets.target ?? 0.005;
   const budget = 5 * budgets.search;
   const runs: [string, (seed: number) => Promise<OptimisationResult>][] = [
-    ["nsga2", (seed) => nsga2(op, exactEvaluator(problem), { seed, maxEvaluations: budget, keepHistory: true })],
-    ["random", (seed) => randomSearch(op, exactEvaluator(problem), { seed, maxEvaluations: budget, keepHistory: true })],
+    ["nsga2", (seed) => optimizerNamed("nsga2").run(op, exactEvaluator(problem), { seed, maxEvaluations: budget, keepHistory: true })],
+    ["random", (seed) => optimizerNamed("random").run(op, exactEvaluator(problem), { seed, maxEvaluations: budget, keepHistory: true })],
   ];
   const out: EvaluationsToTarget[] = [];
   for (const [method, run] of runs) {

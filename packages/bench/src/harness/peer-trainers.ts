@@ -1,4 +1,4 @@
-import type { OptimisationVariable } from "../optimise/optimisation-problem.js";
+import { modelRowBounds, type Variable } from "@floorcast/sampler";
 import type { BenchTrainer } from "./bench-trainer.js";
 import type { PeerProcess } from "./peer-process.js";
 import type { BatchPredictor } from "./surrogate-evaluator.js";
@@ -16,12 +16,12 @@ interface PeerModel extends BatchPredictor {
  * @param quick - the demo's cheaper fits: as many GP optimiser starts as floorcast's GP makes (2, else 3),
  *   and at most 500 MLP epochs (else 2000).
  */
-export function peerTrainers(peer: PeerProcess, variables: readonly OptimisationVariable[], quick = false): BenchTrainer[] {
-  const lower = variables.map((v) => (v.kind === "categorical" ? 0 : v.min));
-  const upper = variables.map((v) => (v.kind === "categorical" ? Math.max(1, v.levels.length - 1) : v.max));
+export function peerTrainers(peer: PeerProcess, variables: readonly Variable[], quick = false): BenchTrainer[] {
+  const { lower, upper } = modelRowBounds(variables);
   const make = (kind: "gp" | "mlp"): BenchTrainer => ({
     name: `sklearn-${kind}`,
     async fit(data, seed) {
+      // the same model rows floorcast fits on, read from the training set's CSV
       const { id } = await peer.request<{ id: number }>({ op: "fit", kind, x: data.x, y: data.y, lower, upper, seed, restarts: quick ? 1 : 2, maxIter: quick ? 500 : 2000 });
       const model: PeerModel = {
         peerId: id,

@@ -1,3 +1,4 @@
+import { FLOORCAST_CAUTION } from "../floorcast-caution.js";
 import { createHash } from "node:crypto";
 import { mkdir, readFile, rename, writeFile } from "node:fs/promises";
 import { join } from "node:path";
@@ -5,10 +6,6 @@ import { cpus } from "node:os";
 import type { BenchProblem } from "../problem/bench-problem.js";
 import type { BenchReport, ProblemReport } from "./bench-report-types.js";
 import { runProblem, type RunProblemOptions } from "./run-problem.js";
-
-/** The caution every bench output carries. */
-export const BENCH_CAUTION =
-  "Estimates for early feasibility studies only: not a zoning determination. Local codes and licensed professionals decide.";
 
 /** What a bench run needs. */
 export interface RunBenchOptions {
@@ -74,7 +71,7 @@ export async function runBench(options: RunBenchOptions): Promise<BenchReport> {
   return {
     kind: "floorcast.bench-report",
     formatVersion: 1,
-    caution: BENCH_CAUTION,
+    caution: FLOORCAST_CAUTION,
     suite: options.suite,
     options: options.settings,
     environment: { node: process.version, cpus: cpus().length, peers: options.peers },

@@ -8,7 +8,7 @@ import { exactEvaluator } from "./exact-evaluator.js";
 import { frontHypervolume } from "./front-hypervolume.js";
 import { reportDesign } from "./report-design.js";
 import { surrogateEvaluator } from "./surrogate-evaluator.js";
-import type { TrialSetup } from "./run-single-trial.js";
+import type { TrialSetup } from "./trial-setup.js";
 import { trainForTrial } from "./train-for-trial.js";
 import { trialRecordHead } from "./trial-record-head.js";
 

@@ -1,21 +1,15 @@
-import { bayesianOptimisation } from "../optimise/bayesian-optimisation.js";
-import { geneticAlgorithm } from "../optimise/genetic-algorithm.js";
-import { gridSearch } from "../optimise/grid-search.js";
-import { nsga2 } from "../optimise/nsga2.js";
 import type { Evaluator, OptimisationProblem, OptimisationResult } from "../optimise/optimisation-problem.js";
-import { particleSwarm } from "../optimise/particle-swarm.js";
-import { projectedGradient } from "../optimise/projected-gradient.js";
-import { randomSearch } from "../optimise/random-search.js";
+import { OPTIMIZERS, optimizerNamed } from "../optimise/optimizers.js";
 
-/** Optimiser names `floorcast optimize --optimizer` accepts. */
-export const OPTIMIZER_NAMES = ["grid", "random", "lhs", "gradient", "pso", "ga", "nsga2", "bo"] as const;
+/** Optimiser names `floorcast optimize --optimizer` accepts: the registry's (optimise/optimizers.ts). */
+export const OPTIMIZER_NAMES: readonly string[] = OPTIMIZERS.map((o) => o.name);
 
 /** One of {@link OPTIMIZER_NAMES}. */
-export type OptimizerName = (typeof OPTIMIZER_NAMES)[number];
+export type OptimizerName = string;
 
 /**
- * Runs a named optimiser of `@floorcast/bench` with a budget, keeping its history (the harness
- * falls back on it when the best design is exactly infeasible).
+ * Runs a registered optimiser with a budget, keeping its history (the harness falls back on it when the best
+ * design is exactly infeasible); Bayesian optimisation gets at most 200 evaluations (its GP refits grow as n³).
  * @param name - the optimiser.
  * @param problem - the problem (nsga2 needs two objectives; the others use the first).
  * @param evaluator - exact or surrogate.
@@ -28,23 +22,12 @@ export function runOptimizer(
   evaluator: Evaluator,
   options: { readonly seed: number; readonly budget: number; readonly gridPoints: number; readonly onProgress?: (done: number, total: number) => void },
 ): Promise<OptimisationResult> {
-  const common = { seed: options.seed, keepHistory: true, ...(options.onProgress ? { onProgress: options.onProgress } : {}) };
-  switch (name) {
-    case "grid":
-      return gridSearch(problem, evaluator, { ...common, resolution: options.gridPoints });
-    case "random":
-      return randomSearch(problem, evaluator, { ...common, maxEvaluations: options.budget });
-    case "lhs":
-      return randomSearch(problem, evaluator, { ...common, design: "lhs", maxEvaluations: options.budget });
-    case "gradient":
-      return projectedGradient(problem, evaluator, { ...common, maxEvaluations: options.budget });
-    case "pso":
-      return particleSwarm(problem, evaluator, { ...common, maxEvaluations: options.budget });
-    case "ga":
-      return geneticAlgorithm(problem, evaluator, { ...common, maxEvaluations: options.budget });
-    case "nsga2":
-      return nsga2(problem, evaluator, { ...common, maxEvaluations: options.budget });
-    case "bo":
-      return bayesianOptimisation(problem, evaluator, { ...common, maxEvaluations: Math.min(options.budget, 200) });
-  }
+  const maxEvaluations = name === "bo" ? Math.min(options.budget, 200) : options.budget;
+  return optimizerNamed(name).run(problem, evaluator, {
+    seed: options.seed,
+    keepHistory: true,
+    maxEvaluations,
+    gridPoints: options.gridPoints,
+    ...(options.onProgress ? { onProgress: options.onProgress } : {}),
+  });
 }

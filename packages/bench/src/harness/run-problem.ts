@@ -1,3 +1,6 @@
+import { mkdir, mkdtemp, rm } from "node:fs/promises";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
 import type { BenchProblem } from "../problem/bench-problem.js";
 import type { ExactOptimumRecord, ProblemReport, SurrogateOptimumRecord } from "./bench-report-types.js";
 import type { BenchTrainer } from "./bench-trainer.js";
@@ -7,7 +10,8 @@ import { frontEvaluationsToTarget } from "./front-evaluations-to-target.js";
 import { frontHypervolume, frontReference } from "./front-hypervolume.js";
 import { reportDesign } from "./report-design.js";
 import { runFrontTrial } from "./run-front-trial.js";
-import { runSingleTrial, type TrialSetup } from "./run-single-trial.js";
+import { runSingleTrial } from "./run-single-trial.js";
+import type { TrialSetup } from "./trial-setup.js";
 import { runSiteTrial } from "./run-site-trial.js";
 import { sampleTrainingSet, type TrainingSet } from "./sample-training-set.js";
 import { summariseGaps } from "./summarise-gaps.js";
@@ -35,6 +39,8 @@ export interface RunProblemOptions {
   /** Grid points per variable for the exact optimum, overriding the problem's (tests only). */
   readonly gridPoints?: number;
   readonly notes?: readonly string[];
+  /** Folder for the training and test CSVs (with manifests) and model files (default: a temporary folder, removed at the end). */
+  readonly workDir?: string;
   /** Progress: a short label of each step as it starts, and trial counts. */
   readonly onStep?: (label: string, done: number, total: number) => void;
 }
@@ -49,6 +55,17 @@ export interface RunProblemOptions {
  * @returns the problem's section of report.json.
  */
 export async function runProblem(problem: BenchProblem, options: RunProblemOptions): Promise<ProblemReport> {
+  const temporary = options.workDir === undefined ? await mkdtemp(join(tmpdir(), "floorcast-bench-")) : undefined;
+  const workDir = options.workDir ?? temporary!;
+  await mkdir(workDir, { recursive: true });
+  try {
+    return await measureProblem(problem, options, workDir);
+  } finally {
+    if (temporary !== undefined) await rm(temporary, { recursive: true, force: true });
+  }
+}
+
+async function measureProblem(problem: BenchProblem, options: RunProblemOptions, workDir: string): Promise<ProblemReport> {
   const t0 = performance.now();
   const step = options.onStep ?? (() => undefined);
   const op = problem.optimisation;
@@ -90,7 +107,7 @@ export async function runProblem(problem: BenchProblem, options: RunProblemOptio
       exactValue = frontHypervolume(op, exactFrontPoints, reference);
     }
   }
-  const test = sampleTrainingSet(problem, options.testSize, `test-${problem.name}`, undefined, "random");
+  const test = await sampleTrainingSet(problem, options.testSize, `test-${problem.name}`, workDir, undefined, "random");
   const records: SurrogateOptimumRecord[] = [];
   const cache = new Map<string, TrainingSet>();
   let done = 0;
@@ -109,6 +126,7 @@ export async function runProblem(problem: BenchProblem, options: RunProblemOptio
           refineBudget: options.refineBudget,
           sampler: plan.sampler,
           cache,
+          workDir,
           ...(unitRows ? { unitRows } : {}),
           ...(options.candidates ? { candidates: options.candidates } : {}),
         };

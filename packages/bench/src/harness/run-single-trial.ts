@@ -2,37 +2,16 @@ import { patternSearch } from "../optimise/pattern-search.js";
 import type { EvaluatedDesign } from "../optimise/optimisation-problem.js";
 import type { BenchProblem } from "../problem/bench-problem.js";
 import type { SurrogateOptimumRecord } from "./bench-report-types.js";
-import type { BenchTrainer } from "./bench-trainer.js";
 import { exactEvaluator } from "./exact-evaluator.js";
 import { optimumGap } from "./optimum-gap.js";
 import { reevaluateSurrogateOptimum } from "./reevaluate-surrogate-optimum.js";
 import { reportDesign } from "./report-design.js";
-import type { TrainingSet } from "./sample-training-set.js";
 import { trainForTrial } from "./train-for-trial.js";
 import { searchSurrogate } from "./search-surrogate.js";
 import { surrogateEvaluator } from "./surrogate-evaluator.js";
 import { trialRecordHead } from "./trial-record-head.js";
+import type { TrialSetup } from "./trial-setup.js";
 
-/** What one surrogate trial needs besides the problem. */
-export interface TrialSetup {
-  readonly trainer: BenchTrainer;
-  readonly trainingSize: number;
-  readonly seed: number;
-  /** Independent, exactly evaluated test set (shared by every trial of the problem). */
-  readonly test: TrainingSet;
-  /** Exact optimum value of the (first) objective. */
-  readonly exactValue: number;
-  /** Exact evaluations of local refinement after the surrogate search (default 20). */
-  readonly refineBudget?: number;
-  /** Unit-cube training rows to use instead of floorcast's maximin LHS (peer sampler). */
-  readonly unitRows?: readonly (readonly number[])[];
-  /** Sampler name written to the report (default "lhs-maximin"). */
-  readonly sampler?: string;
-  /** Surrogate search candidates (default 1024). */
-  readonly candidates?: number;
-  /** Training sets shared by trials on the same rows (same sampler, size and seed). */
-  readonly cache?: Map<string, TrainingSet>;
-}
 
 const seconds = (t0: number): number => (performance.now() - t0) / 1000;
 

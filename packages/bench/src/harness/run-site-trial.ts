@@ -1,6 +1,6 @@
 import { gridAxes } from "../optimise/grid-search.js";
 import { patternSearch } from "../optimise/pattern-search.js";
-import { createDesignCodec } from "../optimise/design-codec.js";
+import { createVariableCodec } from "@floorcast/sampler";
 import { scoreOutputs } from "../optimise/evaluation-session.js";
 import { compareFeasibility } from "../optimise/feasibility-rules.js";
 import type { Design, EvaluatedDesign } from "../optimise/optimisation-problem.js";
@@ -11,7 +11,7 @@ import { kendallTau } from "./kendall-tau.js";
 import { optimumGap } from "./optimum-gap.js";
 import { reevaluateSurrogateOptimum } from "./reevaluate-surrogate-optimum.js";
 import { reportDesign } from "./report-design.js";
-import type { TrialSetup } from "./run-single-trial.js";
+import type { TrialSetup } from "./trial-setup.js";
 import { spearmanRho } from "./spearman-rho.js";
 import { surrogateEvaluator } from "./surrogate-evaluator.js";
 import { topKOverlap } from "./top-k-overlap.js";
@@ -39,7 +39,7 @@ export async function runSiteTrial(
   const op = problem.optimisation;
   const sites = problem.sites!;
   const t0 = performance.now();
-  const codec = createDesignCodec(op);
+  const codec = createVariableCodec(op.variables);
   const { axes } = gridAxes(op, problem.exact.gridPoints);
   const grid: Design[] = [];
   const walk = (i: number, x: number[]): void => {

@@ -1,63 +1,72 @@
-import { createDesign } from "@floorcast/sampler";
-import type { EvaluatedDesign, OptimisationProblem } from "../optimise/optimisation-problem.js";
-import { createDesignCodec } from "../optimise/design-codec.js";
+import { join } from "node:path";
+import { createCsvWriter, createVariableCodec, readTable, writeDataset, type DesignKind } from "@floorcast/sampler";
+import type { EvaluatedDesign } from "../optimise/optimisation-problem.js";
 import { scoreOutputs } from "../optimise/evaluation-session.js";
 import type { BenchProblem } from "../problem/bench-problem.js";
-import { designRow } from "./design-row.js";
 
-/** Exactly evaluated designs over a problem's training variables, ready to fit a surrogate. */
+/** Exactly evaluated designs over a problem's training variables, as a dataset file and its rows. */
 export interface TrainingSet {
   /** Every sampled design, exactly scored against the problem. */
   readonly designs: readonly EvaluatedDesign[];
   readonly inputs: readonly string[];
   readonly targets: readonly string[];
-  /** Rows whose every target is finite (the rest could not be evaluated). */
+  /** Model rows (the sampler's coding: a numeric categorical level as its value) and targets, as read from `csv`. */
   readonly x: readonly (readonly number[])[];
   readonly y: readonly (readonly number[])[];
+  /** The dataset CSV (with its manifest beside it unless the unit rows were given). */
+  readonly csv: string;
   readonly seconds: number;
 }
 
 /**
- * Samples `n` designs of a problem's training variables and evaluates them exactly. The unit-cube
- * rows come from `@floorcast/sampler`'s createDesign (default maximin Latin hypercube) or are
- * given (e.g. scipy's LHS, the peer sampler); lattice variables take their stratified lattice values.
+ * Samples `n` designs of a problem's training variables and evaluates them exactly, the way a user does:
+ * writeDataset over the problem's scenario (`floorcast sample`: the same design kinds, CSV columns and manifest),
+ * then the CSV is read back with the CSV reader `fit` uses. Given unit rows (another sampler's design, e.g.
+ * scipy's LHS) are mapped by the sampler's codec, evaluated and written as a CSV of the same columns, without a
+ * manifest (no `sample` run produced them).
  * @param problem - the problem.
  * @param n - designs, ≥ 1.
  * @param seed - design seed.
- * @param unitRows - unit-cube rows to use instead of createDesign.
- * @param design - createDesign's design (default "lhs-maximin").
+ * @param dir - folder the CSV (and manifest) is written to.
+ * @param unitRows - unit-cube rows to use instead of a design of `design`.
+ * @param design - the design kind (default "lhs-maximin", as `sample`).
+ * @returns the training set.
  */
-export function sampleTrainingSet(
+export async function sampleTrainingSet(
   problem: BenchProblem,
   n: number,
   seed: number | string,
+  dir: string,
   unitRows?: readonly (readonly number[])[],
-  design: "random" | "lhs" | "lhs-maximin" = "lhs-maximin",
-): TrainingSet {
+  design: DesignKind = "lhs-maximin",
+): Promise<TrainingSet> {
   const t0 = performance.now();
   const variables = problem.trainingVariables;
-  const space: OptimisationProblem = { ...problem.optimisation, variables };
-  const codec = createDesignCodec(space);
-  const rows = unitRows ?? createDesign({ n, dims: variables.length, design, seed: String(seed) });
-  const designs = rows.map((u) => {
-    const d = codec.toDesign(codec.fromUnit(u));
-    return scoreOutputs(problem.optimisation, d, problem.evaluate(d));
-  });
-  const x: number[][] = [];
-  const y: number[][] = [];
-  for (const e of designs) {
-    const t = problem.outputs.map((o) => e.outputs[o] ?? Number.NaN);
-    if (t.every(Number.isFinite)) {
-      x.push(designRow(variables, e.design));
-      y.push(t);
+  const inputs = variables.map((v) => v.name);
+  const targets = problem.outputs;
+  const csv = join(dir, `${String(seed)}-${unitRows ? "given" : design}-${n}.csv`);
+  const codec = createVariableCodec(variables);
+  if (unitRows) {
+    const writer = createCsvWriter(csv, ["sample", ...inputs, ...targets]);
+    for (const [i, u] of unitRows.entries()) {
+      const d = codec.toDesign(codec.fromUnit(u));
+      const out = problem.evaluate(d);
+      await writer.write([i, ...inputs.map((k) => d[k]!), ...targets.map((t) => out[t] ?? Number.NaN)]);
+    }
+    await writer.close();
+  } else {
+    const evaluator = problem.dataset.evaluator();
+    try {
+      await writeDataset(problem.dataset.scenario, { out: csv, n, design, seed, evaluator, force: true });
+    } finally {
+      await evaluator.close();
     }
   }
-  return {
-    designs,
-    inputs: variables.map((v) => v.name),
-    targets: problem.outputs,
-    x,
-    y,
-    seconds: (performance.now() - t0) / 1000,
-  };
+  const table = await readTable(csv, { inputs, targets: [...targets] });
+  const designs = table.x.map((row, i) => {
+    const outputs = Object.fromEntries(targets.map((t, j) => [t, table.y[i]![j]!]));
+    return scoreOutputs(problem.optimisation, codec.fromRow("sampleTrainingSet", row), outputs);
+  });
+  return { designs, inputs, targets, x: table.x, y: table.y, csv, seconds: (performance.now() - t0) / 1000 };
 }
+

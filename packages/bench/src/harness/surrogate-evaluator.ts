@@ -1,5 +1,6 @@
+import type { Variable } from "@floorcast/sampler";
 import type { Surrogate } from "@floorcast/surrogate";
-import type { Design, Evaluator, OptimisationVariable, OutputGradient, Outputs } from "../optimise/optimisation-problem.js";
+import type { Design, Evaluator, OutputGradient, Outputs } from "../optimise/optimisation-problem.js";
 import { designRow } from "./design-row.js";
 
 /** Anything that predicts a batch of rows: a floorcast surrogate, or a peer model behind a pipe. */
@@ -22,7 +23,7 @@ export interface BatchPredictor {
  */
 export function surrogateEvaluator(
   model: Surrogate | BatchPredictor,
-  variables: readonly OptimisationVariable[],
+  variables: readonly Variable[],
   site?: Design,
 ): Evaluator {
   const rowOf = (d: Design): number[] => designRow(variables, site ? { ...site, ...d } : d);

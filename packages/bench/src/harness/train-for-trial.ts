@@ -1,3 +1,4 @@
+import { join } from "node:path";
 import type { Surrogate } from "@floorcast/surrogate";
 import type { BenchProblem } from "../problem/bench-problem.js";
 import { assessAccuracy, type TargetAccuracy } from "./assess-accuracy.js";
@@ -16,8 +17,8 @@ export interface TrainedTrial {
 }
 
 /**
- * The steps every trial shares: sample the training design and evaluate it exactly, fit the
- * surrogate, and assess it on the independent test set.
+ * The steps every trial shares: sample the training design and evaluate it exactly (a dataset file, as `sample`
+ * writes it), fit the surrogate (a model file, as `fit` writes it), and assess it on the independent test set.
  * @param problem - the problem.
  * @param setup - trainer, training size, seed, test set and optional unit rows (peer sampler).
  * @returns the training set, the model, and its accuracy and timings.
@@ -33,18 +34,18 @@ export async function trainForTrial(
     readonly sampler?: string;
     /** Training sets already drawn, by sampler, size and seed: trials on the same rows share one. */
     readonly cache?: Map<string, TrainingSet>;
+    /** Folder for the training CSVs (with manifests) and model files of the run. */
+    readonly workDir: string;
   },
 ): Promise<TrainedTrial> {
   const key = `${setup.sampler ?? "lhs-maximin"}|${setup.trainingSize}|${setup.seed}`;
   const cached = setup.cache?.get(key);
   // a training set shared with an earlier trial costs this one no sampling time
-  const train = cached ? { ...cached, seconds: 0 } : sampleTrainingSet(problem, setup.trainingSize, `train-${setup.seed}`, setup.unitRows);
+  const train = cached ? { ...cached, seconds: 0 } : await sampleTrainingSet(problem, setup.trainingSize, `train-${setup.seed}`, setup.workDir, setup.unitRows);
   if (!cached) setup.cache?.set(key, train);
   const t0 = performance.now();
-  const model = await setup.trainer.fit(
-    { inputs: train.inputs, targets: train.targets, x: train.x, y: train.y },
-    setup.seed,
-  );
+  const modelFile = join(setup.workDir, `${setup.trainer.name}-${setup.sampler ?? "lhs-maximin"}-${setup.trainingSize}-${setup.seed}.json`);
+  const model = await setup.trainer.fit(train, setup.seed, modelFile);
   const fitSeconds = (performance.now() - t0) / 1000;
   const assessed = await assessAccuracy(model, setup.test);
   return { train, model, fitSeconds, accuracy: assessed.accuracy, seconds: assessed.seconds };

@@ -1,5 +1,5 @@
 import type { ReportedDesign } from "./bench-report-types.js";
-import type { TrialSetup } from "./run-single-trial.js";
+import type { TrialSetup } from "./trial-setup.js";
 
 /**
  * The fields every surrogate trial record in report.json starts with: which surrogate, sampler,

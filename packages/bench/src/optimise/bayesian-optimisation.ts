@@ -1,6 +1,6 @@
 import { fitGaussianProcess, type GivenHyperparameters, type Prediction, type TrainingData } from "@floorcast/surrogate";
 import type { CommonOptions, EvaluatedDesign, Evaluator, OptimisationProblem, OptimisationResult } from "./optimisation-problem.js";
-import { createDesignCodec, type DesignCodec } from "./design-codec.js";
+import { createVariableCodec, type VariableCodec } from "@floorcast/sampler";
 import { EvaluationSession } from "./evaluation-session.js";
 import { expectedImprovement, probabilityOfFeasibility } from "./expected-improvement.js";
 import { objectiveLoss } from "./feasibility-rules.js";
@@ -38,7 +38,7 @@ export interface BayesianOptimisationOptions extends CommonOptions {
 }
 
 /** Coded vector → model input: unit coordinates for numeric variables, one-hot columns per categorical. */
-function modelRow(codec: DesignCodec, x: readonly number[]): number[] {
+function modelRow(codec: VariableCodec, x: readonly number[]): number[] {
   const u = codec.toUnit(x);
   const row: number[] = [];
   for (let i = 0; i < codec.dims; i++) {
@@ -102,7 +102,7 @@ export async function bayesianOptimisation(
   const budget = numberOption(fn, "maxEvaluations", options.maxEvaluations, NaN, 0, true);
   if (Number.isNaN(budget)) throw new RangeError(`${fn}: options.maxEvaluations must be given (finite)`);
   const dims = problem.variables.length;
-  const free = createDesignCodec(problem).count.filter((c) => c > 1).length;
+  const free = createVariableCodec(problem.variables).count.filter((c) => c > 1).length;
   const n0 = Math.min(budget, numberOption(fn, "initialSamples", options.initialSamples, Math.max(5, 5 * free), 1, true));
   const nCand = numberOption(fn, "candidates", options.candidates, 1000, 1, true);
   const nStarts = numberOption(fn, "acquisitionStarts", options.acquisitionStarts, 5, 1, true);

@@ -7,7 +7,7 @@ import type {
   Outputs,
   OutputGradient,
 } from "./optimisation-problem.js";
-import { createDesignCodec, type DesignCodec } from "./design-codec.js";
+import { createVariableCodec, type VariableCodec } from "@floorcast/sampler";
 import { compareFeasibility, objectiveLoss } from "./feasibility-rules.js";
 import { dominates } from "./pareto-dominance.js";
 
@@ -40,7 +40,7 @@ export function scoreOutputs(problem: OptimisationProblem, design: EvaluatedDesi
  * the feasible non-dominated archive, the best-so-far trace and (optionally) the history.
  */
 export class EvaluationSession {
-  readonly codec: DesignCodec;
+  readonly codec: VariableCodec;
   readonly budget: number;
   evaluations = 0;
   evaluatorCalls = 0;
@@ -60,7 +60,7 @@ export class EvaluationSession {
     private readonly options: CommonOptions,
     private readonly planned = Infinity,
   ) {
-    this.codec = createDesignCodec(problem);
+    this.codec = createVariableCodec(problem.variables);
     this.budget = options.maxEvaluations ?? Infinity;
     this.history = options.keepHistory ? [] : undefined;
   }

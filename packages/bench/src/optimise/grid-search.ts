@@ -1,5 +1,5 @@
 import type { CommonOptions, Evaluator, OptimisationProblem, OptimisationResult } from "./optimisation-problem.js";
-import { createDesignCodec, type DesignCodec } from "./design-codec.js";
+import { createVariableCodec, type VariableCodec } from "@floorcast/sampler";
 import { EvaluationSession } from "./evaluation-session.js";
 import { numberOption, validateProblem } from "./validate-problem.js";
 
@@ -17,7 +17,7 @@ export interface GridSearchOptions extends CommonOptions {
   readonly batchSize?: number;
 }
 
-function axisValues(codec: DesignCodec, i: number, res: number): number[] {
+function axisValues(codec: VariableCodec, i: number, res: number): number[] {
   const lo = codec.lower[i]!;
   const hi = codec.upper[i]!;
   const n = codec.count[i]!;
@@ -38,7 +38,7 @@ export function gridAxes(
   problem: OptimisationProblem,
   resolution: GridSearchOptions["resolution"] = 11,
 ): { axes: number[][]; count: number } {
-  const codec = createDesignCodec(problem);
+  const codec = createVariableCodec(problem.variables);
   const axes = problem.variables.map((v, i) => {
     const r = typeof resolution === "number" ? resolution : (resolution[v.name] ?? 11);
     if (!Number.isInteger(r) || r < 1) {

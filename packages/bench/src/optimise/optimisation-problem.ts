@@ -1,43 +1,17 @@
+import type { Variable, VariableRecord } from "@floorcast/sampler";
+
 /**
  * The optimisation interface shared by every optimiser in `@floorcast/bench`.
  *
  * A problem is pure data ({@link OptimisationProblem}): variables, objectives and constraints on
- * outputs. The function being optimised is a separate {@link Evaluator} (the exact massing
+ * outputs, its variables the sampler's one {@link Variable} contract. The function being optimised is a separate {@link Evaluator} (the exact massing
  * evaluator, a surrogate, or a published test function), so the same problem runs on either.
  * Every optimiser has the shape `optimiser(problem, evaluator, options) => Promise<OptimisationResult>`
  * and records how many designs it evaluated and how many times it called the evaluator.
  */
 
-/** A continuous variable on [min, max]; with `step`, only min + k·step (k = 0, 1, …) are legal values. */
-export interface ContinuousVariable {
-  readonly kind: "continuous";
-  readonly name: string;
-  readonly min: number;
-  readonly max: number;
-  /** Optional lattice step (> 0), e.g. a yard depth in 0.5 m steps. */
-  readonly step?: number;
-}
-
-/** An integer variable taking every integer in [min, max] (min, max integers). */
-export interface IntegerVariable {
-  readonly kind: "integer";
-  readonly name: string;
-  readonly min: number;
-  readonly max: number;
-}
-
-/** A categorical variable taking one of `levels` (unordered; at least one level, no duplicates). */
-export interface CategoricalVariable {
-  readonly kind: "categorical";
-  readonly name: string;
-  readonly levels: readonly (string | number)[];
-}
-
-/** A design variable. */
-export type OptimisationVariable = ContinuousVariable | IntegerVariable | CategoricalVariable;
-
-/** One design: variable name → value (a number, or a categorical level). */
-export type Design = Readonly<Record<string, number | string>>;
+/** One design: variable name → value (a number, or a categorical level); the sampler's VariableRecord. */
+export type Design = VariableRecord;
 
 /** The outputs of one evaluated design: output name → value (NaN or a missing key means "could not evaluate"). */
 export type Outputs = Readonly<Record<string, number>>;
@@ -61,7 +35,7 @@ export interface OutputConstraint {
 /** An optimisation problem: what to vary, what to optimise, what must hold. */
 export interface OptimisationProblem {
   /** At least one variable; names unique. */
-  readonly variables: readonly OptimisationVariable[];
+  readonly variables: readonly Variable[];
   /** At least one objective. Single-objective optimisers require exactly one. */
   readonly objectives: readonly Objective[];
   /** Constraints on outputs; a design violating any is infeasible. */

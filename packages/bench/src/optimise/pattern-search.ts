@@ -1,5 +1,5 @@
 import type { CommonOptions, Design, EvaluatedDesign, Evaluator, OptimisationProblem, OptimisationResult } from "./optimisation-problem.js";
-import type { DesignCodec } from "./design-codec.js";
+import type { VariableCodec } from "@floorcast/sampler";
 import { EvaluationSession } from "./evaluation-session.js";
 import { compareFeasibility } from "./feasibility-rules.js";
 import { numberOption, validateProblem } from "./validate-problem.js";
@@ -13,7 +13,7 @@ export interface PatternSearchOptions extends CommonOptions {
 }
 
 /** Poll points around x: ±Δ per numeric coordinate (≥ one lattice step), every other level per categorical. */
-export function pollPoints(codec: DesignCodec, x: readonly number[], delta: number): number[][] {
+export function pollPoints(codec: VariableCodec, x: readonly number[], delta: number): number[][] {
   const out: number[][] = [];
   const seen = new Set<string>([x.join(",")]);
   const push = (y: number[]): void => {

@@ -1,4 +1,4 @@
-import type { DesignCodec } from "./design-codec.js";
+import type { VariableCodec } from "@floorcast/sampler";
 import type { Rng } from "./unit-samples.js";
 
 /** Settings of the mixed-variable SBX crossover and polynomial mutation. */
@@ -27,7 +27,7 @@ function sbxSpread(u: number, beta: number, eta: number): number {
  * @returns two children.
  */
 export function sbxCrossover(
-  codec: DesignCodec,
+  codec: VariableCodec,
   p1: readonly number[],
   p2: readonly number[],
   s: VariationSettings,
@@ -65,7 +65,7 @@ export function sbxCrossover(
  * or down at random, so integers mutate by integer steps; a categorical coordinate is resampled
  * uniformly among its other levels. With `only`, mutates just that coordinate, for certain.
  */
-export function polynomialMutation(codec: DesignCodec, x: number[], s: VariationSettings, rng: Rng, only?: number): void {
+export function polynomialMutation(codec: VariableCodec, x: number[], s: VariationSettings, rng: Rng, only?: number): void {
   for (let i = 0; i < codec.dims; i++) {
     if (only === undefined ? rng() >= s.mutationProbability : i !== only) continue;
     const n = codec.count[i]!;
@@ -104,7 +104,7 @@ export function polynomialMutation(codec: DesignCodec, x: number[], s: Variation
  * `taken` (keys x.join(",")), mutates one randomly chosen coordinate for certain, up to `tries`
  * times; then records x in `taken`.
  */
-export function avoidDuplicate(codec: DesignCodec, x: number[], taken: Set<string>, s: VariationSettings, rng: Rng, tries = 8): void {
+export function avoidDuplicate(codec: VariableCodec, x: number[], taken: Set<string>, s: VariationSettings, rng: Rng, tries = 8): void {
   const movable = codec.count.flatMap((n, i) => (n > 1 ? [i] : []));
   for (let t = 0; t < tries && movable.length > 0 && taken.has(x.join(",")); t++) {
     polynomialMutation(codec, x, s, rng, movable[Math.floor(rng() * movable.length)]!);
@@ -117,7 +117,7 @@ export function avoidDuplicate(codec: DesignCodec, x: number[], taken: Set<strin
  * duplicate avoidance against `existing` and each other (the GA's and NSGA-II's variation step).
  */
 export function makeOffspring(
-  codec: DesignCodec,
+  codec: VariableCodec,
   n: number,
   pick: () => readonly number[],
   existing: readonly (readonly number[])[],

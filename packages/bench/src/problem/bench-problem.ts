@@ -1,5 +1,6 @@
-import type { MassingInput, MassingResult } from "@floorcast/sampler";
-import type { Design, OptimisationProblem, OptimisationVariable, Outputs } from "../optimise/optimisation-problem.js";
+import type { MassingInput, MassingResult, Variable } from "@floorcast/sampler";
+import type { ProblemDataset } from "./problem-dataset.js";
+import type { Design, OptimisationProblem, Outputs } from "../optimise/optimisation-problem.js";
 
 /** What a problem asks: one objective, two objectives (a front), or a ranking of sites. */
 export type BenchProblemKind = "single" | "two-objective" | "site-selection";
@@ -36,7 +37,9 @@ export interface BenchProblem {
    * Variables a surrogate is trained over: the design variables, and for site selection
    * the site parameters before them (within the scenario's ranges).
    */
-  readonly trainingVariables: readonly OptimisationVariable[];
+  readonly trainingVariables: readonly Variable[];
+  /** The problem as a dataset `floorcast sample` could write: training sets are written through writeDataset. */
+  readonly dataset: ProblemDataset;
   /** Site selection only. */
   readonly sites?: BenchSites;
   /** Exact outputs of one design (training variables' values); NaN outputs when it cannot be evaluated. */

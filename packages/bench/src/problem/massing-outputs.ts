@@ -1,4 +1,4 @@
-import { MASSING_OUTPUT_COLUMNS } from "@floorcast/sampler";
+import { MASSING_OUTPUT_COLUMNS, massingOutputs } from "@floorcast/sampler";
 import type { MassingResult } from "@floorcast/sampler";
 import type { Outputs } from "../optimise/optimisation-problem.js";
 
@@ -14,10 +14,13 @@ export const MASSING_OUTPUTS: readonly NumericMassingOutput[] = MASSING_OUTPUT_C
 );
 
 /**
- * The numeric outputs of a massing result (every {@link MASSING_OUTPUTS} field), or all NaN when
- * there is no result (the design could not be evaluated).
+ * A problem's outputs of a massing result: the {@link MASSING_OUTPUTS} columns of the sampler's one massing
+ * adapter (massingOutputs, the columns `sample` writes), or all NaN when there is no result (the design could not
+ * be evaluated).
  * @param result - the exact result, or null.
+ * @returns output name → value.
  */
-export function massingOutputs(result: MassingResult | null): Outputs {
-  return Object.fromEntries(MASSING_OUTPUTS.map((k) => [k, result ? result[k] : Number.NaN]));
+export function problemMassingOutputs(result: MassingResult | null): Outputs {
+  const columns = result ? massingOutputs(result) : undefined;
+  return Object.fromEntries(MASSING_OUTPUTS.map((k) => [k, columns ? (columns[k] as number) : Number.NaN]));
 }

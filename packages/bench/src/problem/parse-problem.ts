@@ -1,15 +1,16 @@
 import { createDesign, evaluateMassing, mapUnitToSpace, scenarioToMassingInput } from "@floorcast/sampler";
-import type { MassingInput, Parameter, Scenario } from "@floorcast/sampler";
-import type { Design, OptimisationVariable } from "../optimise/optimisation-problem.js";
+import type { MassingInput, Parameter, Scenario, Variable } from "@floorcast/sampler";
+import type { Design } from "../optimise/optimisation-problem.js";
 import type { BenchProblem, BenchSites } from "./bench-problem.js";
 import { problemFileSchema, type ProblemFile } from "./problem-file-schema.js";
 import { ProblemFileError } from "./problem-file-error.js";
-import { MASSING_OUTPUTS, massingOutputs } from "./massing-outputs.js";
+import { MASSING_OUTPUTS, problemMassingOutputs } from "./massing-outputs.js";
 import { TEST_FUNCTION_VARIABLES, testFunctionEvaluator } from "./test-function-problem.js";
+import { problemDataset } from "./problem-dataset.js";
 
 type FileVariable = ProblemFile["variables"][number];
 
-function toVariable(file: string, i: number, v: FileVariable, p: Parameter | undefined): OptimisationVariable {
+function toVariable(file: string, i: number, v: FileVariable, p: Parameter | undefined): Variable {
   const at = `variables[${i}]`;
   const fail = (field: string, problem: string): never => {
     throw new ProblemFileError(file, `${at}${field}`, problem);
@@ -37,13 +38,14 @@ function toVariable(file: string, i: number, v: FileVariable, p: Parameter | und
     if (!Number.isInteger(min) || !Number.isInteger(max)) fail(".min", "an integer variable needs integer bounds");
     return { kind, name: v.name, min, max };
   }
-  return { kind: "continuous", name: v.name, min, max, ...(v.step === undefined ? {} : { step: v.step }) };
+  const log = p?.kind === "continuous" && p.log === true;
+  return { kind: "continuous", name: v.name, min, max, ...(log ? { log } : {}), ...(v.step === undefined ? {} : { step: v.step }) };
 }
 
-function fromParameter(p: Parameter): OptimisationVariable {
-  return p.kind === "categorical"
-    ? { kind: "categorical", name: p.name, levels: p.levels }
-    : { kind: p.kind, name: p.name, min: p.min, max: p.max };
+function fromParameter(p: Parameter): Variable {
+  if (p.kind === "categorical") return { kind: "categorical", name: p.name, levels: p.levels };
+  if (p.kind === "integer") return { kind: "integer", name: p.name, min: p.min, max: p.max };
+  return { kind: "continuous", name: p.name, min: p.min, max: p.max, ...(p.log === true ? { log: true } : {}) };
 }
 
 /**
@@ -133,7 +135,11 @@ export function parseProblem(json: unknown, fileName: string, scenario?: Scenari
     trainingVariables,
     ...(sites ? { sites } : {}),
   };
-  if (f.testFunction) return { ...base, evaluate: testFunctionEvaluator(f.testFunction) };
+  const about = { name: f.name, title: f.title, description: f.description, fileName, contents: data };
+  if (f.testFunction) {
+    const evaluate = testFunctionEvaluator(f.testFunction);
+    return { ...base, evaluate, dataset: problemDataset(about, trainingVariables, undefined, { name: f.testFunction, evaluate }) };
+  }
   const sc = scenario!;
   const record = (design: Design): Record<string, number | string> => {
     const r: Record<string, number | string> = {};
@@ -146,13 +152,14 @@ export function parseProblem(json: unknown, fileName: string, scenario?: Scenari
   const massingInput = (design: Design): MassingInput => scenarioToMassingInput(sc, record(design));
   return {
     ...base,
+    dataset: problemDataset(about, trainingVariables, { scenario: sc, fixed: f.fixed }),
     massingInput,
     massingResult: (design, plates = false) => evaluateMassing(massingInput(design), { plates }),
     evaluate(design) {
       try {
-        return massingOutputs(evaluateMassing(massingInput(design)));
+        return problemMassingOutputs(evaluateMassing(massingInput(design)));
       } catch (error) {
-        if (error instanceof RangeError || error instanceof TypeError) return massingOutputs(null);
+        if (error instanceof RangeError || error instanceof TypeError) return problemMassingOutputs(null);
         throw error;
       }
     },

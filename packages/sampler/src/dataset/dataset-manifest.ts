@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { inputSchemaEntrySchema } from "../space/input-schema.js";
 
 /** Shown in every manifest: what the numbers are and are not. */
 export const DATASET_CAUTION =
@@ -20,6 +21,8 @@ export const datasetManifestSchema = z.strictObject({
   evaluator: z.string(),
   packageVersion: z.string(),
   columns: z.array(z.string()),
+  /** Kind, bounds, scale and levels of each sampled input column (manifests written before it lack it). */
+  inputSchema: z.array(inputSchemaEntrySchema).optional(),
   /** Present when the columns hold a plate profile (README "Plate profiles"). */
   plateProfile: z
     .strictObject({ storeys: count.min(1), ruleColumns: z.array(z.string()), naming: z.string() })
@@ -30,6 +33,6 @@ export const datasetManifestSchema = z.strictObject({
 
 /**
  * The manifest written beside each dataset CSV: where the rows came from (scenario and its SHA-256, design,
- * seed, n, shard, evaluator, package version) and the SHA-256 (FIPS 180-4) of the CSV's bytes.
+ * seed, n, shard, evaluator, package version), the input schema of the sampled columns, and the SHA-256 (FIPS 180-4) of the CSV's bytes.
  */
 export type DatasetManifest = z.infer<typeof datasetManifestSchema>;

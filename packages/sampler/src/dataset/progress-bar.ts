@@ -1,5 +1,6 @@
+import { createRequire } from "node:module";
 import type { Writable } from "node:stream";
-import cliProgress from "cli-progress";
+import type cliProgressModule from "cli-progress";
 
 /** A progress display: a bar on a terminal, silent otherwise. */
 export interface ProgressBar {
@@ -11,6 +12,7 @@ export interface ProgressBar {
 
 /**
  * A cli-progress bar on `stream` when it is a TTY, else a silent stand-in (so logs and pipes stay clean).
+ * cli-progress is loaded only when a bar is drawn, so importing the sampler loads no progress-bar package.
  * @param stream - where the bar is drawn (usually stderr).
  * @param total - the number of steps.
  * @param label - shown before the bar.
@@ -18,6 +20,7 @@ export interface ProgressBar {
  */
 export function createProgressBar(stream: Writable, total: number, label: string): ProgressBar {
   if ((stream as Writable & { isTTY?: boolean }).isTTY !== true) return { update() {}, stop() {} };
+  const cliProgress = createRequire(import.meta.url)("cli-progress") as typeof cliProgressModule;
   const bar = new cliProgress.SingleBar(
     { stream: stream as NodeJS.WriteStream, format: `${label} [{bar}] {value}/{total} rows, eta {eta}s`, fps: 5 },
     cliProgress.Presets.shades_classic,

@@ -8,6 +8,7 @@ import { resolveEvaluator } from "../evaluator/resolve-evaluator.js";
 import type { Scenario } from "../scenario/scenario.js";
 import { DATASET_CAUTION, type DatasetManifest } from "./dataset-manifest.js";
 import { formatManifest } from "./format-manifest.js";
+import { inputSchemaOf } from "../space/input-schema.js";
 import { manifestPathFor } from "./manifest-path-for.js";
 import { plateProfileOfColumns } from "./plate-profile-of-columns.js";
 import { generateDataset } from "./generate-dataset.js";
@@ -126,6 +127,7 @@ export async function writeDataset(scenario: Scenario, options: WriteDatasetOpti
     caution: DATASET_CAUTION,
     ...settings,
     columns: header,
+    inputSchema: inputSchemaOf(scenario.parameters),
     ...(plateProfile === undefined ? {} : { plateProfile }),
     rows: total,
     csv: { file: basename(out), bytes: (await stat(partial.csv)).size, sha256: await sha256File(partial.csv) },

@@ -4,7 +4,8 @@ import { createUnitRowMapper } from "./unit-row-mapper.js";
 /**
  * Turns unit-cube rows (one coordinate per parameter, in order) into parameter records.
  *
- * - continuous: min + x·(max − min); with `log`, exp(ln min + x·(ln max − ln min)).
+ * - continuous: min + x·(max − min); with `log`, exp(ln min + x·(ln max − ln min)); with `step`, the lattice
+ *   min + k·step (k < L = ⌊(max − min)/step⌋ + 1) is treated as L levels, as an integer parameter is.
  * - integer (L = max − min + 1 levels) and categorical (L levels): when the column is Latin (one point in
  *   each of the n strata, as every LHS column is), the point in stratum k gets level ⌊(k + c)·L/n⌋, where
  *   c ∈ [0, 1) is the offset n·x of the point in stratum 0 (½ for centred designs; x·L itself when n = 1).

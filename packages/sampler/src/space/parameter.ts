@@ -1,38 +1,13 @@
-/**
- * A continuous parameter sampled on [min, max], linearly or (with `log: true`, min > 0) on a log scale.
- */
-export interface ContinuousParameter {
-  readonly kind: "continuous";
-  readonly name: string;
-  readonly min: number;
-  readonly max: number;
-  /** Sample uniformly in log(value) instead of value; needs min > 0. */
-  readonly log?: boolean;
-  readonly unit: string;
-  /** One line saying what the parameter is. */
-  readonly description: string;
-}
+import type { CategoricalVariable, ContinuousVariable, IntegerVariable } from "./variable.js";
 
-/** An integer parameter taking every whole value from min to max inclusive. */
-export interface IntegerParameter {
-  readonly kind: "integer";
-  readonly name: string;
-  readonly min: number;
-  readonly max: number;
-  readonly unit: string;
-  /** One line saying what the parameter is. */
-  readonly description: string;
-}
+/** A scenario's continuous parameter: a {@link ContinuousVariable} with its unit and description. */
+export type ContinuousParameter = ContinuousVariable & { readonly unit: string; readonly description: string };
 
-/** A categorical parameter taking one of a fixed list of levels. */
-export interface CategoricalParameter {
-  readonly kind: "categorical";
-  readonly name: string;
-  readonly levels: readonly (string | number)[];
-  readonly unit: string;
-  /** One line saying what the parameter is. */
-  readonly description: string;
-}
+/** A scenario's integer parameter: an {@link IntegerVariable} with its unit and description. */
+export type IntegerParameter = IntegerVariable & { readonly unit: string; readonly description: string };
 
-/** One sampled dimension of a design space: continuous, integer or categorical. */
+/** A scenario's categorical parameter: a {@link CategoricalVariable} with its unit and description. */
+export type CategoricalParameter = CategoricalVariable & { readonly unit: string; readonly description: string };
+
+/** One sampled dimension of a scenario's design space: a Variable that carries its unit and description. */
 export type Parameter = ContinuousParameter | IntegerParameter | CategoricalParameter;

@@ -2,6 +2,7 @@ import type { DesignSpace } from "./design-space.js";
 import type { Parameter } from "./parameter.js";
 import { validateDesignSpace } from "./validate-design-space.js";
 import { latinStrata, stratumIndex } from "../design/stratum-index.js";
+import { latticeCount } from "./lattice-count.js";
 
 /**
  * Checks unit-cube rows against a design space and returns a function that maps row i to its parameter record on
@@ -47,6 +48,11 @@ export function createUnitRowMapper(
 function levelMapper(p: Parameter, column: () => readonly number[], n: number): (x: number, i: number) => number | string {
   switch (p.kind) {
     case "continuous": {
+      if (p.step !== undefined) {
+        const step = p.step;
+        const index = levelIndexer(column(), n, latticeCount(p.min, p.max, step));
+        return (x, i) => p.min + index(x, i) * step;
+      }
       if (p.log === true) {
         const a = Math.log(p.min);
         const b = Math.log(p.max);

@@ -3,7 +3,7 @@ import type { DesignSpace } from "./design-space.js";
 /**
  * Checks a design space and throws on the first problem.
  * Rules: at least one parameter; names are unique non-empty strings; unit and description are strings;
- * continuous: finite min < max, and min > 0 when `log` is set; integer: integer min ≤ max;
+ * continuous: finite min < max, min > 0 when `log` is set, a step (if any) > 0; integer: integer min ≤ max;
  * categorical: at least one level, levels unique strings or finite numbers.
  * @param space - the space to check.
  * @param caller - the public function name that starts every message.
@@ -42,6 +42,9 @@ export function validateDesignSpace(space: DesignSpace, caller = "validateDesign
         }
         if (p.log === true && !(p.min > 0)) {
           throw new RangeError(`${caller}: ${at}: a log-scale parameter needs min > 0, got ${p.min}`);
+        }
+        if (p.step !== undefined && (typeof p.step !== "number" || !(Number.isFinite(p.step) && p.step > 0))) {
+          throw new RangeError(`${caller}: ${at}: step must be a finite number > 0, got ${String(p.step)}`);
         }
         break;
       }

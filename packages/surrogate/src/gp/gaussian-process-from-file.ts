@@ -53,7 +53,7 @@ export function gaussianProcessFromFile(file: GpModelFile, fileName = "model fil
     seed: file.training.seed,
     diagnostics: {
       targets,
-      fitTimeMs: file.training.fitTimeMs,
+      ...(file.training.fitTimeMs === undefined ? {} : { fitTimeMs: file.training.fitTimeMs }),
       hyperparameterRows: typeof file.training.hyperparameterRows === "number" ? file.training.hyperparameterRows : n,
       polishIterations: typeof file.training.polishIterations === "number" ? file.training.polishIterations : 0,
     },

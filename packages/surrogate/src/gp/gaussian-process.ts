@@ -161,7 +161,6 @@ export class GaussianProcess implements Surrogate {
       training: {
         n: train.n,
         seed: p.seed,
-        fitTimeMs: p.diagnostics.fitTimeMs,
         hyperparameterRows: p.diagnostics.hyperparameterRows,
         polishIterations: p.diagnostics.polishIterations,
         diagnostics: p.diagnostics.targets.map((t) => ({ ...t, conditionNumber: finiteOrNull(t.conditionNumber) })),

@@ -16,8 +16,8 @@ export interface GpTargetDiagnostics {
 /** Fit summary of a Gaussian process. */
 export interface GpDiagnostics {
   readonly targets: readonly GpTargetDiagnostics[];
-  /** Wall-clock fit time in milliseconds. */
-  readonly fitTimeMs: number;
+  /** Wall-clock fit time in milliseconds (not written to the model file; a loaded model has it only from an older file). */
+  readonly fitTimeMs?: number;
   /** Rows the hyperparameters were fitted on (n when no subset was used). */
   readonly hyperparameterRows: number;
   /** L-BFGS iterations on all rows after a subset fit (0 when none). */

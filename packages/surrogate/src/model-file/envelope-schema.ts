@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { MODEL_FILE_KIND, MODEL_FORMAT_VERSION } from "./model-file-version.js";
+import { inputSchemaSchema } from "./input-schema.js";
 
 const finite = z.number().refine(Number.isFinite, "must be a finite number");
 /** Column names: non-empty strings, each once (a duplicate would make rows ambiguous). */
@@ -12,12 +13,13 @@ const names = z
 export const trainingSummarySchema = z.looseObject({
   n: z.number().int().nonnegative(),
   seed: z.number(),
-  fitTimeMs: z.number().nonnegative(),
+  /** Written by files before fit times left the file (the same rows and options now give the same bytes). */
+  fitTimeMs: z.number().nonnegative().optional(),
 });
 
 /**
  * The zod schema of one model type's file: the shared versioned envelope (kind, formatVersion, modelType,
- * inputs, targets, inputScaling, outputScaling, payload, training, optional checksum) around `payload`.
+ * inputs, targets, optional inputSchema, inputScaling, outputScaling, payload, training, optional checksum) around `payload`.
  * Each model type builds its schema with this and adds one line to `model-file-schema.ts`.
  * @param modelType - the discriminator value, e.g. "gp".
  * @param payload - the type-specific payload schema.
@@ -30,6 +32,8 @@ export function envelopeSchema<T extends string, P extends z.ZodType>(modelType:
     modelType: z.literal(modelType),
     inputs: names,
     targets: names,
+    /** Kind, bounds, scale and levels of each input (files written before it lack it, and load with a note). */
+    inputSchema: inputSchemaSchema.optional(),
     inputScaling: z.object({ lower: z.array(finite), upper: z.array(finite) }),
     outputScaling: z.object({ mean: z.array(finite), std: z.array(finite.refine((v) => v > 0, "must be > 0")) }),
     payload,

@@ -17,8 +17,8 @@ import { nodeSha256Hex } from "./seal-model-file.js";
  */
 export function loadSurrogate(json: unknown, fileName = "model file"): Surrogate {
   const file = parseModelFile(json, fileName, "loadSurrogate");
-  const load = surrogateLoaders[file.modelType] as (f: ModelFile, name: string) => Surrogate;
-  const model = load(file, fileName);
+  const load = surrogateLoaders[file.modelType] as (f: ModelFile, name: string, loadNested: (json: unknown, name: string) => Surrogate) => Surrogate;
+  const model = load(file, fileName, loadSurrogate);
   checkModelChecksum(rawModelFile(json), nodeSha256Hex, "loadSurrogate", fileName);
   return model;
 }

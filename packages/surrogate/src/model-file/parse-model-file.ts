@@ -5,7 +5,8 @@ import { checkJsonDepth } from "../predict/check-json-depth.js";
 
 /**
  * Validates a model file: kind, then format version (a newer one is refused with an upgrade message), then the
- * full zod schema of its model type, then the shared length checks (inputScaling per input, outputScaling per target).
+ * full zod schema of its model type, then the shared length checks (inputScaling per input, outputScaling per target,
+ * inputSchema naming the inputs in order).
  * @param json - parsed JSON value, or JSON text.
  * @param fileName - named in messages (default "model file").
  * @param fn - calling function named in messages.
@@ -57,6 +58,10 @@ export function parseModelFile(json: unknown, fileName = "model file", fn = "par
   ];
   for (const [path, got, want] of lengthChecks) {
     if (got !== want) throw new RangeError(`${fn}: ${fileName}: ${path} must have ${want} entries, got ${got}`);
+  }
+  const schemaNames = file.inputSchema?.map((e) => e.name);
+  if (schemaNames !== undefined && schemaNames.join("\u0000") !== file.inputs.join("\u0000")) {
+    throw new RangeError(`${fn}: ${fileName}: inputSchema must name the inputs ${file.inputs.join(", ")} in order, got ${schemaNames.join(", ")}`);
   }
   return file;
 }

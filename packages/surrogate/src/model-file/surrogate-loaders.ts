@@ -8,7 +8,11 @@ import { plateStackFromFile } from "../plate-stack/plate-stack-from-file.js";
 
 /** A loader for each model type: builds the fitted surrogate from its validated file. */
 export type SurrogateLoaders = {
-  readonly [K in ModelFile["modelType"]]: (file: Extract<ModelFile, { modelType: K }>, fileName: string) => Surrogate;
+  readonly [K in ModelFile["modelType"]]: (
+    file: Extract<ModelFile, { modelType: K }>,
+    fileName: string,
+    loadNested: (json: unknown, name: string) => Surrogate,
+  ) => Surrogate;
 };
 
 /** One line per model type (the type above makes a missing line a compile error). */

@@ -20,7 +20,6 @@ import { createOutputScaling } from "../scaling/output-scaling.js";
  * @throws TypeError / RangeError for bad data (naming row and column) or options.
  */
 export async function fitMlp(data: TrainingData, options: MlpOptions = {}): Promise<MlpSurrogate> {
-  const started = performance.now();
   checkTrainingData("fitMlp", data);
   const o = resolveMlpOptions("fitMlp", options);
   const backend = await useNnBackend(o.backend);
@@ -62,7 +61,6 @@ export async function fitMlp(data: TrainingData, options: MlpOptions = {}): Prom
     training: {
       n,
       seed: o.seed,
-      fitTimeMs: performance.now() - started,
       backend,
       hiddenLayers: [...o.layers],
       epochs: o.epochs,

@@ -79,7 +79,6 @@ async function fitQuantity(set: TrainingData, trainer: SurrogateTrainer, seed: n
  *   a profile the rule does not reproduce).
  */
 export async function fitPlateStack(data: PlateStackData, options: PlateStackOptions = {}): Promise<PlateStackSurrogate> {
-  const started = performance.now();
   checkData(data);
   const seed = options.seed ?? 0;
   const targets = [...(options.targets ?? PLATE_STACK_OUTPUTS)];
@@ -152,7 +151,6 @@ export async function fitPlateStack(data: PlateStackData, options: PlateStackOpt
       training: {
         n: data.x.length,
         seed,
-        fitTimeMs: performance.now() - started,
         domain: buildValidityDomain(data.inputs, data.x),
         innerRows: Object.fromEntries(Object.entries(sets).map(([k, s]) => [k, Math.min(s.x.length, k.startsWith("cut") ? maxCut : Infinity)])),
       },

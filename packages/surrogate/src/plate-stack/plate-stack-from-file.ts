@@ -1,4 +1,4 @@
-import { loadSurrogate } from "../model-file/load-surrogate.js";
+import type { Surrogate } from "../surrogate-types.js";
 import type { PlateStackModelFile } from "../model-file/plate-stack-model-file-schema.js";
 import { PlateStackSurrogate, type FittedQuantity } from "./plate-stack-surrogate.js";
 
@@ -7,9 +7,10 @@ import { PlateStackSurrogate, type FittedQuantity } from "./plate-stack-surrogat
  * loadSurrogate (errors name `payload.quantities.<name>`) and checks its inputs against the payload.
  * @param file - validated by parseModelFile.
  * @param fileName - named in messages.
+ * @param loadNested - loads a nested model file (loadSurrogate passes itself: no import cycle).
  * @throws RangeError naming the file and quantity.
  */
-export function plateStackFromFile(file: PlateStackModelFile, fileName = "model file"): PlateStackSurrogate {
+export function plateStackFromFile(file: PlateStackModelFile, fileName: string, loadNested: (json: unknown, name: string) => Surrogate): PlateStackSurrogate {
   const { quantities, ...rest } = file.payload;
   const fitted: Record<string, FittedQuantity | undefined> = {};
   for (const [name, q] of Object.entries(quantities)) {
@@ -18,7 +19,7 @@ export function plateStackFromFile(file: PlateStackModelFile, fileName = "model 
       fitted[name] = q;
       continue;
     }
-    const model = loadSurrogate(q.model, `${fileName} payload.quantities.${name}`);
+    const model = loadNested(q.model, `${fileName} payload.quantities.${name}`);
     if (model.targets.length !== 1) throw new RangeError(`loadSurrogate: ${fileName}: payload.quantities.${name} must have one target`);
     fitted[name] = { model };
   }

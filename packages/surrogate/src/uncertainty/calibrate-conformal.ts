@@ -60,5 +60,5 @@ export function calibrateConformal(
     });
     return conformalQuantile(s, coverage);
   });
-  return new ConformalSurrogate(base, { coverage, score, quantiles, calibrationSize: n }, { seed: 0, fitTimeMs: 0, ...training, n: (training.n as number | undefined) ?? n, calibrationSize: n });
+  return new ConformalSurrogate(base, { coverage, score, quantiles, calibrationSize: n }, { seed: 0, ...training, n: (training.n as number | undefined) ?? n, calibrationSize: n });
 }

@@ -1,5 +1,5 @@
 import type { ConformalModelFile } from "../model-file/conformal-model-file-schema.js";
-import { loadSurrogate } from "../model-file/load-surrogate.js";
+import type { Surrogate } from "../surrogate-types.js";
 import { ConformalSurrogate } from "./conformal-surrogate.js";
 import { sameColumns } from "./same-columns.js";
 
@@ -8,10 +8,11 @@ import { sameColumns } from "./same-columns.js";
  * with loadSurrogate and restores the calibration.
  * @param file - validated by parseModelFile.
  * @param fileName - named in messages.
+ * @param loadNested - loads a nested model file (loadSurrogate passes itself: no import cycle).
  * @throws RangeError naming the file when the base disagrees with the envelope or the quantiles with the targets.
  */
-export function conformalFromFile(file: ConformalModelFile, fileName = "model file"): ConformalSurrogate {
-  const base = loadSurrogate(file.payload.base, `${fileName} payload.base`);
+export function conformalFromFile(file: ConformalModelFile, fileName: string, loadNested: (json: unknown, name: string) => Surrogate): ConformalSurrogate {
+  const base = loadNested(file.payload.base, `${fileName} payload.base`);
   if (!sameColumns(base, file)) {
     throw new RangeError(`loadSurrogate: ${fileName}: payload.base must have the file's inputs and targets`);
   }

@@ -8,7 +8,8 @@ import { sealModelFile } from "../model-file/seal-model-file.js";
 export interface EnsembleTraining {
   readonly n: number;
   readonly seed: number;
-  readonly fitTimeMs: number;
+  /** Only in files written before fit times left the file. */
+  readonly fitTimeMs?: number;
   readonly memberSeeds: readonly number[];
 }
 

@@ -45,7 +45,6 @@ export async function fitConformal(
         `it needs at least ${minCalibrationRows(coverage)} for a bounded interval`,
     );
   }
-  const started = performance.now();
   const rng = seedrandom(`floorcast-conformal:${seed}`);
   const order = Array.from({ length: n }, (_, i) => i);
   shuffleInPlace(order, rng);
@@ -59,6 +58,6 @@ export async function fitConformal(
     base,
     { x: cal.map((i) => data.x[i]!), y: cal.map((i) => data.y[i]!) },
     options,
-    { n, seed, fitTimeMs: performance.now() - started, calibrationFraction: f },
+    { n, seed, calibrationFraction: f },
   );
 }

@@ -30,10 +30,9 @@ export async function fitEnsemble(
   const k = options.members ?? 5;
   if (typeof k !== "number") throw new TypeError(`${fn}: options.members must be a number`);
   if (!Number.isInteger(k) || k < 1) throw new RangeError(`${fn}: options.members must be an integer ≥ 1, got ${k}`);
-  const started = performance.now();
   const rng = seedrandom(`floorcast-ensemble:${seed}`);
   const memberSeeds = Array.from({ length: k }, () => Math.floor(rng() * 2 ** 31));
   const members = [];
   for (const s of memberSeeds) members.push(await trainer(data, s));
-  return new EnsembleSurrogate(members, { n: data.x.length, seed, fitTimeMs: performance.now() - started, memberSeeds });
+  return new EnsembleSurrogate(members, { n: data.x.length, seed, memberSeeds });
 }

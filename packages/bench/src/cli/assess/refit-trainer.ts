@@ -1,12 +1,13 @@
-import { fitConformal, fitEnsemble, fitGaussianProcess, type SurrogateTrainer } from "@floorcast/surrogate";
+import { fitConformal, fitEnsemble, type SurrogateTrainer } from "@floorcast/surrogate";
+import { MODEL_FAMILIES } from "../../families/model-families.js";
 import { UsageError } from "../usage-error.js";
 
 type FileLike = { modelType?: string; payload?: Record<string, unknown>; training?: Record<string, unknown> };
 
 /**
  * A trainer that refits a model of the same family and settings as a model file, for cross-validation
- * and learning curves: a GP with the file's kernel and ARD choice; an MLP with the file's hidden layer
- * widths, activation and the epochs, batch size, learning rate and L2 its training summary records; an ensemble with as many members,
+ * and learning curves: a registered family's own refit (MODEL_FAMILIES: a GP with the file's kernel and ARD choice;
+ * an MLP with the file's hidden layer widths, activation and recorded training settings); an ensemble with as many members,
  * each refitted like its first member; a split-conformal wrapper with the same coverage, score and
  * calibration fraction around a base refitted like its own.
  * @param file - the parsed model file.
@@ -15,24 +16,8 @@ type FileLike = { modelType?: string; payload?: Record<string, unknown>; trainin
  */
 export function refitTrainer(file: unknown, fileName: string): SurrogateTrainer {
   const f = (file ?? {}) as FileLike;
-  if (f.modelType === "gp") {
-    const p = f.payload as { kernel: "se" | "matern32" | "matern52"; ard: boolean };
-    return async (data, seed) => fitGaussianProcess(data, { kernel: p.kernel, ard: p.ard, seed });
-  }
-  if (f.modelType === "mlp") {
-    const p = f.payload as { activation: "relu" | "tanh" | "elu"; layers: { shape: [number, number] }[] };
-    const hidden = p.layers.slice(0, -1).map((l) => l.shape[1]);
-    // Training settings the file records (fit-mlp's training summary); absent ones take fitMlp's defaults.
-    const recorded: Record<string, number> = {};
-    for (const key of ["epochs", "batchSize", "learningRate", "l2"] as const) {
-      const v = f.training?.[key];
-      if (typeof v === "number") recorded[key] = v;
-    }
-    return async (data, seed) => {
-      const { fitMlp } = await import("@floorcast/surrogate/nn");
-      return fitMlp(data, { ...recorded, layers: hidden, activation: p.activation, seed });
-    };
-  }
+  const family = MODEL_FAMILIES.find((m) => m.modelType === f.modelType);
+  if (family?.refit) return family.refit(f);
   if (f.modelType === "ensemble") {
     const members = (f.payload as { members: unknown[] }).members;
     const member = refitTrainer(members[0], `${fileName} payload.members[0]`);

@@ -1,7 +1,7 @@
 import type { Command } from "commander";
 import { mkdir, readFile, writeFile } from "node:fs/promises";
 import { basename, join } from "node:path";
-import { centredL2Discrepancy, minPairwiseDistance, readTable } from "@floorcast/sampler";
+import { centredL2Discrepancy, checkSchemaRows, minPairwiseDistance, readTable } from "@floorcast/sampler";
 import {
   buildTrustReport,
   buildValidityDomain,
@@ -23,8 +23,7 @@ import { UsageError } from "../usage-error.js";
 import { refitTrainer } from "../assess/refit-trainer.js";
 import { refuseOutsideDomain } from "../refuse-outside-domain.js";
 import { noteUnsealedModel } from "../note-unsealed-model.js";
-import { renderTrustHtml } from "../../report/trust-report-html.js";
-import { renderTrustMarkdown } from "../../report/trust-report-markdown.js";
+import { modelInputSchema } from "../model-input-schema.js";
 
 interface AssessOptions {
   model: string;
@@ -98,7 +97,10 @@ async function runAssess(opts: AssessOptions, ctx: CommandContext): Promise<void
   }
   const inputs = [...model.inputs];
   const test = await readTable(opts.data, { inputs, targets: [opts.target], categorical: opts.by ? [opts.by] : [] });
+  const schema = modelInputSchema("assess", basename(opts.model), json);
+  if (schema) checkSchemaRows(schema, test.x, "assess", basename(opts.data));
   const train = opts.train ? await readTable(opts.train, { inputs, targets: [...model.targets] }) : null;
+  if (schema && train) checkSchemaRows(schema, train.x, "assess", basename(opts.train!));
   const trainData: TrainingData | null = train ? { inputs, targets: [...model.targets], x: train.x, y: train.y } : null;
 
   const domain: ValidityDomain | null = trainData ? buildValidityDomain(inputs, trainData.x) : domainOfModel(model);
@@ -139,6 +141,8 @@ async function runAssess(opts: AssessOptions, ctx: CommandContext): Promise<void
   });
   await mkdir(opts.out, { recursive: true });
   await writeFile(join(opts.out, "report.json"), JSON.stringify(report, null, 2) + "\n");
+  // the renderers (and the chart packages) load only when a report is written
+  const [{ renderTrustMarkdown }, { renderTrustHtml }] = await Promise.all([import("../../report/trust-report-markdown.js"), import("../../report/trust-report-html.js")]);
   await writeFile(join(opts.out, "report.md"), renderTrustMarkdown(report));
   await writeFile(join(opts.out, "report.html"), await renderTrustHtml(report, figures));
   const m = report.metrics;

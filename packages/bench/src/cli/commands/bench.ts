@@ -4,7 +4,7 @@ import { UsageError } from "../usage-error.js";
 import { runSuite } from "../../harness/run-suite.js";
 import { headlineTable } from "../../harness/headline-table.js";
 import { formatTextTable } from "../../harness/format-text-table.js";
-import { BENCH_CAUTION } from "../../harness/run-bench.js";
+import { FLOORCAST_CAUTION } from "../../floorcast-caution.js";
 
 interface BenchOptions {
   suite: string;
@@ -50,7 +50,7 @@ export function registerBenchCommand(program: Command, ctx: CommandContext): voi
         ...(opts.problems === undefined ? {} : { problemsDir: opts.problems }),
         progress: ctx.stderr,
       });
-      ctx.stdout.write(`${formatTextTable(headlineTable(report))}\n\n${BENCH_CAUTION}\n`);
+      ctx.stdout.write(`${formatTextTable(headlineTable(report))}\n\n${FLOORCAST_CAUTION}\n`);
       ctx.stdout.write(`report: ${paths.html}\n        ${paths.markdown}\n        ${paths.json}\n`);
     });
 }

@@ -3,7 +3,7 @@ import type { CommandContext } from "../command-context.js";
 import { runSuite } from "../../harness/run-suite.js";
 import { headlineTable } from "../../harness/headline-table.js";
 import { formatTextTable } from "../../harness/format-text-table.js";
-import { BENCH_CAUTION } from "../../harness/run-bench.js";
+import { FLOORCAST_CAUTION } from "../../floorcast-caution.js";
 
 /**
  * `floorcast demo`: the demo suite end to end (sample, fit GP and NN, assess, optimise, report) at
@@ -19,12 +19,12 @@ export function registerDemoCommand(program: Command, ctx: CommandContext): void
     .option("--no-peers", "skip scikit-learn's GP/MLP and scipy's LHS even when present")
     .action(async (opts: { out: string; peers: boolean }) => {
       const t0 = performance.now();
-      ctx.stderr.write(`floorcast demo: the Quillmere demo suite, quick sizes. ${BENCH_CAUTION}\n`);
+      ctx.stderr.write(`floorcast demo: the Quillmere demo suite, quick sizes. ${FLOORCAST_CAUTION}\n`);
       const { report, paths } = await runSuite({ suite: "demo", quick: true, out: opts.out, peers: opts.peers, progress: ctx.stderr });
       const seconds = (performance.now() - t0) / 1000;
       ctx.stdout.write(`\n${formatTextTable(headlineTable(report))}\n\n`);
       ctx.stdout.write("gap = share of the exact optimum lost by optimising on the surrogate (design re-evaluated exactly); refined = after 20 exact refinement evaluations.\n");
-      ctx.stdout.write(`${BENCH_CAUTION}\n\n`);
+      ctx.stdout.write(`${FLOORCAST_CAUTION}\n\n`);
       ctx.stdout.write(`demo finished in ${seconds.toFixed(1)} s; report: ${paths.html}\n  (also ${paths.markdown} and ${paths.json})\n`);
     });
 }

@@ -3,6 +3,7 @@ import { join } from "node:path";
 import type { Command } from "commander";
 import cliProgress from "cli-progress";
 import { loadSurrogate } from "@floorcast/surrogate";
+import { checkSchemaMatch } from "@floorcast/sampler";
 import type { CommandContext } from "../command-context.js";
 import { UsageError } from "../usage-error.js";
 import { loadProblem } from "../../problem/load-problem.js";
@@ -11,8 +12,10 @@ import { surrogateEvaluator } from "../../harness/surrogate-evaluator.js";
 import { reevaluateSurrogateOptimum } from "../../harness/reevaluate-surrogate-optimum.js";
 import { reportDesign } from "../../harness/report-design.js";
 import { OPTIMIZER_NAMES, runOptimizer, type OptimizerName } from "../../harness/run-optimizer.js";
-import { BENCH_CAUTION } from "../../harness/run-bench.js";
+import { optimizerNamed } from "../../optimise/optimizers.js";
+import { FLOORCAST_CAUTION } from "../../floorcast-caution.js";
 import { noteUnsealedModel } from "../note-unsealed-model.js";
+import { modelInputSchema } from "../model-input-schema.js";
 
 interface OptimizeOptions {
   problem: string;
@@ -54,7 +57,7 @@ export function registerOptimizeCommand(program: Command, ctx: CommandContext): 
       if (problem.kind === "site-selection") throw new UsageError(`optimize: ${problem.name} is a site-selection problem; rank its sites with floorcast bench`);
       const name = (opts.optimizer ?? (problem.kind === "two-objective" ? "nsga2" : "ga")) as OptimizerName;
       if (!OPTIMIZER_NAMES.includes(name)) throw new UsageError(`optimize: --optimizer must be one of ${OPTIMIZER_NAMES.join(", ")}, got ${JSON.stringify(opts.optimizer)}`);
-      if ((name === "nsga2") !== (problem.kind === "two-objective")) {
+      if ((optimizerNamed(name).objectives === "two") !== (problem.kind === "two-objective")) {
         throw new UsageError(`optimize: --optimizer ${name} does not fit ${problem.name}: nsga2 is for two objectives, the others for one`);
       }
       const exact = exactEvaluator(problem);
@@ -68,13 +71,16 @@ export function registerOptimizeCommand(program: Command, ctx: CommandContext): 
         }
         const model = loadSurrogate(text, opts.surrogate);
         noteUnsealedModel("optimize", opts.surrogate, text, ctx);
+        const schema = modelInputSchema("optimize", opts.surrogate, text, ctx);
         const want = problem.trainingVariables.map((v) => v.name);
-        if (model.inputs.join(",") !== want.join(",")) {
-          throw new UsageError(`optimize: ${opts.surrogate} has inputs ${model.inputs.join(", ")}; ${problem.name} needs ${want.join(", ")} in that order`);
+        if (schema) checkSchemaMatch(schema, problem.trainingVariables, "optimize", opts.surrogate);
+        else if ([...model.inputs].sort().join(",") !== [...want].sort().join(",")) {
+          throw new UsageError(`optimize: ${opts.surrogate} has inputs ${model.inputs.join(", ")}; ${problem.name} needs ${want.join(", ")}`);
         }
         const missing = problem.outputs.filter((o) => !model.targets.includes(o));
         if (missing.length > 0) throw new UsageError(`optimize: ${opts.surrogate} does not predict ${missing.join(", ")}, which ${problem.name} needs`);
-        evaluator = surrogateEvaluator(model, problem.trainingVariables);
+        // rows in the model's input order (names match; another order is fine), categoricals in the model-row coding
+        evaluator = surrogateEvaluator(model, model.inputs.map((n) => problem.trainingVariables.find((v) => v.name === n)!));
       }
       const t0 = performance.now();
       const tty = (ctx.stderr as { isTTY?: boolean }).isTTY === true;
@@ -117,7 +123,7 @@ export function registerOptimizeCommand(program: Command, ctx: CommandContext): 
       const summary = {
         kind: "floorcast.optimum",
         formatVersion: 1,
-        caution: BENCH_CAUTION,
+        caution: FLOORCAST_CAUTION,
         problem: problem.name,
         optimizer: result.method,
         evaluator: opts.exact ? "exact" : opts.surrogate,
@@ -135,6 +141,6 @@ export function registerOptimizeCommand(program: Command, ctx: CommandContext): 
       }
       for (const d of designs.slice(0, 10)) ctx.stdout.write(`${op.objectives.map((o) => `${o.output}=${Number(((d.result as Record<string, number>)[o.output] ?? NaN).toPrecision(6))}`).join(" ")}  ${JSON.stringify(d.design)}\n`);
       if (designs.length > 10) ctx.stdout.write(`… ${designs.length - 10} more front points in ${file}\n`);
-      ctx.stdout.write(`${result.method}: ${result.evaluations} evaluations (${exactEvaluations} exact), ${seconds.toFixed(2)} s; written ${file}\n${BENCH_CAUTION}\n`);
+      ctx.stdout.write(`${result.method}: ${result.evaluations} evaluations (${exactEvaluations} exact), ${seconds.toFixed(2)} s; written ${file}\n${FLOORCAST_CAUTION}\n`);
     });
 }

@@ -1,12 +1,14 @@
 import type { Command } from "commander";
 import { readFile } from "node:fs/promises";
 import { basename } from "node:path";
-import { createCsvWriter, readTable } from "@floorcast/sampler";
+import { checkSchemaRows, createCsvWriter, readTable } from "@floorcast/sampler";
 import { buildValidityDomain, domainOfModel, loadSurrogate } from "@floorcast/surrogate";
 import type { CommandContext } from "../command-context.js";
 import { UsageError } from "../usage-error.js";
 import { refuseOutsideDomain } from "../refuse-outside-domain.js";
 import { noteUnsealedModel } from "../note-unsealed-model.js";
+import { modelInputSchema } from "../model-input-schema.js";
+import { FLOORCAST_CAUTION } from "../../floorcast-caution.js";
 
 interface PredictOptions {
   model: string;
@@ -48,7 +50,9 @@ async function runPredict(opts: PredictOptions, ctx: CommandContext): Promise<vo
   }
   const model = loadSurrogate(text, basename(opts.model));
   noteUnsealedModel("predict", basename(opts.model), text, ctx);
+  const schema = modelInputSchema("predict", basename(opts.model), text);
   const table = await readTable(opts.data, { inputs: [...model.inputs], targets: [] });
+  if (schema) checkSchemaRows(schema, table.x, "predict", basename(opts.data));
   const trainX = opts.train ? (await readTable(opts.train, { inputs: [...model.inputs], targets: [] })).x : null;
   const domain = trainX ? buildValidityDomain(model.inputs, trainX) : domainOfModel(model);
   if (!domain) {
@@ -77,6 +81,6 @@ async function runPredict(opts: PredictOptions, ctx: CommandContext): Promise<vo
   ctx.stdout.write(
     `predict: ${table.x.length} rows of ${basename(opts.data)} → ${opts.out}` +
       (flags ? `; ${flags.filter((f) => !f).length} outside the domain of validity (in_domain = 0)\n` : "\n") +
-      "Estimates for early feasibility studies only: not a zoning determination. Local codes and licensed professionals decide.\n",
+      `${FLOORCAST_CAUTION}\n`,
   );
 }

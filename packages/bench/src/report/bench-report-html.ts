@@ -1,15 +1,15 @@
 import type { MassingInput } from "@floorcast/sampler";
-import { escapeHtml } from "../report/escape-html.js";
-import { formatNumber } from "../report/format-number.js";
-import { htmlTable } from "../report/html-table.js";
-import { renderFigure } from "../report/render-figure.js";
-import { renderPage, type PageSection } from "../report/render-page.js";
+import { escapeHtml } from "./escape-html.js";
+import { formatNumber } from "./format-number.js";
+import { htmlTable } from "./html-table.js";
+import { renderFigure } from "./render-figure.js";
+import { renderPage, type PageSection } from "./render-page.js";
 import { benchFigureSpecs } from "./bench-figure-specs.js";
-import type { BenchReport, ProblemReport, SurrogateOptimumRecord } from "./bench-report-types.js";
-import { fitRatio } from "./fit-ratio.js";
-import { headlineTable } from "./headline-table.js";
+import type { BenchReport, ProblemReport, SurrogateOptimumRecord } from "../harness/bench-report-types.js";
+import { fitRatio } from "../harness/fit-ratio.js";
+import { headlineTable } from "../harness/headline-table.js";
 import { massingDrawingSpec } from "./massing-drawing-spec.js";
-import { formatPercent } from "./format-percent.js";
+import { formatPercent } from "../harness/format-percent.js";
 
 const pct = formatPercent;
 const isMassing = (input: unknown): input is MassingInput => typeof input === "object" && input !== null && "parcel" in input;

@@ -1,7 +1,7 @@
-import type { BenchReport, ProblemReport } from "./bench-report-types.js";
-import { fitRatio } from "./fit-ratio.js";
-import { headlineTable } from "./headline-table.js";
-import { formatPercent } from "./format-percent.js";
+import type { BenchReport, ProblemReport } from "../harness/bench-report-types.js";
+import { fitRatio } from "../harness/fit-ratio.js";
+import { headlineTable } from "../harness/headline-table.js";
+import { formatPercent } from "../harness/format-percent.js";
 
 const cell = (s: string): string => s.replace(/\|/g, "\\|");
 const table = (header: readonly string[], rows: readonly (readonly string[])[]): string =>

@@ -1,5 +1,5 @@
 import type { TopLevelSpec } from "vega-lite";
-import type { ProblemReport } from "./bench-report-types.js";
+import type { ProblemReport } from "../harness/bench-report-types.js";
 
 /** One figure of a problem's section: the Vega-Lite spec and what it means. */
 export interface BenchFigure {

@@ -1,0 +1,38 @@
+// @floorcast/bench/harness: the optimum-gap benchmark harness, its metrics and report types.
+export { averageRanks } from "./average-ranks.js";
+export { spearmanRho } from "./spearman-rho.js";
+export { kendallTau } from "./kendall-tau.js";
+export { topKOverlap } from "./top-k-overlap.js";
+export { optimumGap } from "./optimum-gap.js";
+export { exactEvaluator } from "./exact-evaluator.js";
+export type { CountingEvaluator } from "./exact-evaluator.js";
+export { surrogateEvaluator } from "./surrogate-evaluator.js";
+export type { BatchPredictor } from "./surrogate-evaluator.js";
+export { findExactOptimum } from "./find-exact-optimum.js";
+export type { ExactOptimum } from "./find-exact-optimum.js";
+export { reevaluateSurrogateOptimum } from "./reevaluate-surrogate-optimum.js";
+export type { ReevaluatedOptimum, ReportedSource } from "./reevaluate-surrogate-optimum.js";
+export { runProblem } from "./run-problem.js";
+export type { RunProblemOptions, TrialPlan } from "./run-problem.js";
+export { runBench } from "./run-bench.js";
+export { FLOORCAST_CAUTION } from "../floorcast-caution.js";
+export type { RunBenchOptions } from "./run-bench.js";
+export { runSuite } from "./run-suite.js";
+export type { RunSuiteOptions } from "./run-suite.js";
+export { benchSettings } from "./bench-settings.js";
+export type { BenchSettings } from "./bench-settings.js";
+export { writeBenchReport } from "./write-bench-report.js";
+export type {
+  BenchReport,
+  EvaluationsToTarget,
+  ExactOptimumRecord,
+  GapSummary,
+  ProblemReport,
+  ReportedDesign,
+  SurrogateOptimumRecord,
+  TrialSeconds,
+} from "./bench-report-types.js";
+export { MODEL_FAMILIES, modelFamily } from "../families/model-families.js";
+export type { FamilyOption, FitOptions, ModelFamily } from "../families/model-family.js";
+export { fitModelFile } from "../families/fit-model-file.js";
+export type { FitModelRequest } from "../families/fit-model-file.js";
