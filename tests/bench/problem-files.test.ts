@@ -44,7 +44,7 @@ describe("problem files: errors name the file, the path and the problem", () => 
     ["missing value", { fixed: { frontage: 12 } }, /p\.json: fixed: scenario parameter "depth" needs a value/],
     ["wrong version", { formatVersion: 2 }, /p\.json: formatVersion/],
     ["extra field", { colour: "red" }, /p\.json: .*colour|Unrecognized key/],
-    ["no context", { scenario: undefined }, /give exactly one of scenario or testFunction/],
+    ["no context", { scenario: undefined }, /give exactly one of scenario, testFunction or evaluatorCommand/],
   ];
   for (const [label, over, re] of cases) {
     it(label, async () => {

@@ -22,7 +22,8 @@ export function exactEvaluator(problem: BenchProblem, site?: Design): CountingEv
     },
     evaluate(batch: readonly Design[]): Promise<readonly Outputs[]> {
       count += batch.length;
-      return Promise.resolve(batch.map((d) => problem.evaluate(site ? { ...site, ...d } : d)));
+      const designs = site ? batch.map((d) => ({ ...site, ...d })) : batch;
+      return problem.evaluateBatch ? problem.evaluateBatch(designs) : Promise.resolve(designs.map((d) => problem.evaluate(d)));
     },
   };
 }

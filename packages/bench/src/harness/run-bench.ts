@@ -61,7 +61,12 @@ export async function runBench(options: RunBenchOptions): Promise<BenchReport> {
       continue;
     }
     options.onProblem?.(problem, "start", i, total);
-    const report = await runProblem(problem, await options.plan(problem));
+    let report: ProblemReport;
+    try {
+      report = await runProblem(problem, await options.plan(problem));
+    } finally {
+      await problem.close?.(); // an external evaluator command's processes
+    }
     const tmp = `${file}.partial`;
     await writeFile(tmp, JSON.stringify({ fingerprint: key, report }));
     await rename(tmp, file);

@@ -3,6 +3,7 @@ import { createCsvWriter, createVariableCodec, readTable, writeDataset, type Des
 import type { EvaluatedDesign } from "../optimise/optimisation-problem.js";
 import { scoreOutputs } from "../optimise/evaluation-session.js";
 import type { BenchProblem } from "../problem/bench-problem.js";
+import { exactEvaluator } from "./exact-evaluator.js";
 
 /** Exactly evaluated designs over a problem's training variables, as a dataset file and its rows. */
 export interface TrainingSet {
@@ -48,10 +49,10 @@ export async function sampleTrainingSet(
   const codec = createVariableCodec(variables);
   if (unitRows) {
     const writer = createCsvWriter(csv, ["sample", ...inputs, ...targets]);
-    for (const [i, u] of unitRows.entries()) {
-      const d = codec.toDesign(codec.fromUnit(u));
-      const out = problem.evaluate(d);
-      await writer.write([i, ...inputs.map((k) => d[k]!), ...targets.map((t) => out[t] ?? Number.NaN)]);
+    const designs = unitRows.map((u) => codec.toDesign(codec.fromUnit(u)));
+    const outs = await exactEvaluator(problem).evaluate(designs);
+    for (const [i, d] of designs.entries()) {
+      await writer.write([i, ...inputs.map((k) => d[k]!), ...targets.map((t) => outs[i]![t] ?? Number.NaN)]);
     }
     await writer.close();
   } else {

@@ -44,6 +44,10 @@ export interface BenchProblem {
   readonly sites?: BenchSites;
   /** Exact outputs of one design (training variables' values); NaN outputs when it cannot be evaluated. */
   evaluate(design: Design): Outputs;
+  /** An external evaluator command's asynchronous evaluation (then `evaluate` refuses); exactEvaluator uses it. */
+  evaluateBatch?(batch: readonly Design[]): Promise<readonly Outputs[]>;
+  /** Releases what the evaluator holds (an external command's processes). */
+  close?(): Promise<void>;
   /** The full massing input of a design (massing problems only). */
   massingInput?(design: Design): MassingInput;
   /** The exact massing result of a design, with floor plates when asked (massing problems only). */

@@ -36,6 +36,6 @@ export async function loadProblem(path: string): Promise<BenchProblem> {
       throw new ProblemFileError(name, "scenario", (error as Error).message);
     }
   }
-  const problem = parseProblem(json, name, scenario);
+  const problem = parseProblem(json, name, scenario, { dir: dirname(path) });
   return { ...problem, file: path };
 }

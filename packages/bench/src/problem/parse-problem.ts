@@ -7,6 +7,7 @@ import { ProblemFileError } from "./problem-file-error.js";
 import { MASSING_OUTPUTS, problemMassingOutputs } from "./massing-outputs.js";
 import { TEST_FUNCTION_VARIABLES, testFunctionEvaluator } from "./test-function-problem.js";
 import { problemDataset } from "./problem-dataset.js";
+import { commandProblem } from "./command-problem.js";
 
 type FileVariable = ProblemFile["variables"][number];
 
@@ -51,14 +52,17 @@ function fromParameter(p: Parameter): Variable {
 /**
  * Validates a benchmark problem file's contents and builds the problem (schema in
  * problem-file-schema.ts; README "Benchmark"). A massing problem needs its scenario: every
- * scenario parameter must be a design variable, a fixed value or a site parameter.
+ * scenario parameter must be a design variable, a fixed value or a site parameter. A problem with an
+ * `evaluatorCommand` gives every variable's kind and bounds or levels itself; its fixed values go to the command
+ * with each design.
  * @param json - parsed JSON (or a JSON string).
  * @param fileName - the file's name, for messages.
  * @param scenario - the scenario the file names (massing problems).
+ * @param options - `dir`: the problem file's folder, the working directory of an `evaluatorCommand`.
  * @returns the problem.
  * @throws ProblemFileError (a RangeError) naming the file, the path and the problem.
  */
-export function parseProblem(json: unknown, fileName: string, scenario?: Scenario): BenchProblem {
+export function parseProblem(json: unknown, fileName: string, scenario?: Scenario, options: { readonly dir?: string } = {}): BenchProblem {
   let data: unknown = json;
   if (typeof json === "string") {
     try {
@@ -77,7 +81,7 @@ export function parseProblem(json: unknown, fileName: string, scenario?: Scenari
   if (f.scenario !== undefined && !scenario) fail("scenario", "the scenario was not loaded");
   const allowedVars = f.testFunction ? TEST_FUNCTION_VARIABLES[f.testFunction] : [...params.keys()];
   const variables = f.variables.map((v, i) => {
-    if (!allowedVars.includes(v.name)) {
+    if (f.evaluatorCommand === undefined && !allowedVars.includes(v.name)) {
       fail(`variables[${i}].name`, `"${v.name}" is not ${f.testFunction ? `an input of ${f.testFunction}` : `a parameter of scenario ${scenario!.name}`}; use one of ${allowedVars.join(", ")}`);
     }
     return toVariable(fileName, i, v, params.get(v.name));
@@ -94,7 +98,7 @@ export function parseProblem(json: unknown, fileName: string, scenario?: Scenari
     }
   });
   for (const key of Object.keys(f.fixed)) {
-    if (!params.has(key)) fail(`fixed.${key}`, `is not a parameter of ${scenario ? `scenario ${scenario.name}` : "a test function"}`);
+    if (f.evaluatorCommand === undefined && !params.has(key)) fail(`fixed.${key}`, `is not a parameter of ${scenario ? `scenario ${scenario.name}` : "a test function"}`);
   }
   for (const name of params.keys()) {
     if (!variables.some((v) => v.name === name) && !(name in f.fixed) && !siteParams.includes(name)) {
@@ -103,7 +107,8 @@ export function parseProblem(json: unknown, fileName: string, scenario?: Scenari
   }
   const allowedOutputs: readonly string[] = f.testFunction ? ["f"] : MASSING_OUTPUTS;
   const checkOutput = (path: string, o: string): void => {
-    if (!allowedOutputs.includes(o)) fail(path, `"${o}" is not an output; use one of ${allowedOutputs.join(", ")}`);
+    // an external command names its own outputs: they are checked when it answers
+    if (f.evaluatorCommand === undefined && !allowedOutputs.includes(o)) fail(path, `"${o}" is not an output; use one of ${allowedOutputs.join(", ")}`);
   };
   f.objectives.forEach((o, i) => checkOutput(`objectives[${i}].output`, o.output));
   f.constraints.forEach((c, i) => checkOutput(`constraints[${i}].output`, c.output));
@@ -136,6 +141,10 @@ export function parseProblem(json: unknown, fileName: string, scenario?: Scenari
     ...(sites ? { sites } : {}),
   };
   const about = { name: f.name, title: f.title, description: f.description, fileName, contents: data };
+  if (f.evaluatorCommand !== undefined) {
+    const { datasetEvaluator, ...command } = commandProblem(f.evaluatorCommand, f.fixed, options.dir);
+    return { ...base, ...command, dataset: problemDataset(about, trainingVariables, undefined, undefined, { fixed: f.fixed, evaluator: datasetEvaluator }) };
+  }
   if (f.testFunction) {
     const evaluate = testFunctionEvaluator(f.testFunction);
     return { ...base, evaluate, dataset: problemDataset(about, trainingVariables, undefined, { name: f.testFunction, evaluate }) };

@@ -64,6 +64,11 @@ export const problemFileSchema = z
     scenario: z.string().min(1).optional(),
     /** Published test function (the standard suite) instead of a scenario. */
     testFunction: z.enum(["branin", "forrester", "six-hump-camel"]).optional(),
+    /**
+     * An external evaluator instead of a scenario: a command line (run by the shell in the problem file's folder)
+     * speaking JSON Lines as `sample --evaluator-command` does; variables then give their kind and bounds or levels.
+     */
+    evaluatorCommand: z.string().min(1).optional(),
     /** Values of the scenario parameters that are not design variables (parcel, zoning). */
     fixed: z.record(z.string(), z.union([finite, z.string()])).default({}),
     variables: z.array(variable).min(1),
@@ -79,8 +84,8 @@ export const problemFileSchema = z
       .default({ gridPoints: 21, refineEvaluations: 200 }),
   })
   .superRefine((p, ctx) => {
-    if ((p.scenario === undefined) === (p.testFunction === undefined)) {
-      ctx.addIssue({ code: "custom", message: "give exactly one of scenario or testFunction", path: ["scenario"] });
+    if ([p.scenario, p.testFunction, p.evaluatorCommand].filter((x) => x !== undefined).length !== 1) {
+      ctx.addIssue({ code: "custom", message: "give exactly one of scenario, testFunction or evaluatorCommand", path: ["scenario"] });
     }
     const seen = new Set<string>();
     p.variables.forEach((v, i) => {

@@ -54,93 +54,97 @@ export function registerOptimizeCommand(program: Command, ctx: CommandContext): 
       const seed = whole("--seed", opts.seed, 0);
       const budget = whole("--budget", opts.budget, 1);
       const problem = await loadProblem(opts.problem);
-      if (problem.kind === "site-selection") throw new UsageError(`optimize: ${problem.name} is a site-selection problem; rank its sites with floorcast bench`);
-      const name = (opts.optimizer ?? (problem.kind === "two-objective" ? "nsga2" : "ga")) as OptimizerName;
-      if (!OPTIMIZER_NAMES.includes(name)) throw new UsageError(`optimize: --optimizer must be one of ${OPTIMIZER_NAMES.join(", ")}, got ${JSON.stringify(opts.optimizer)}`);
-      if ((optimizerNamed(name).objectives === "two") !== (problem.kind === "two-objective")) {
-        throw new UsageError(`optimize: --optimizer ${name} does not fit ${problem.name}: nsga2 is for two objectives, the others for one`);
-      }
-      const exact = exactEvaluator(problem);
-      let evaluator = exact as Parameters<typeof runOptimizer>[2];
-      if (opts.surrogate !== undefined) {
-        let text: string;
-        try {
-          text = await readFile(opts.surrogate, "utf8");
-        } catch (error) {
-          throw new UsageError(`optimize: cannot read ${opts.surrogate} (${(error as NodeJS.ErrnoException).code ?? String(error)})`);
+      try {
+        if (problem.kind === "site-selection") throw new UsageError(`optimize: ${problem.name} is a site-selection problem; rank its sites with floorcast bench`);
+        const name = (opts.optimizer ?? (problem.kind === "two-objective" ? "nsga2" : "ga")) as OptimizerName;
+        if (!OPTIMIZER_NAMES.includes(name)) throw new UsageError(`optimize: --optimizer must be one of ${OPTIMIZER_NAMES.join(", ")}, got ${JSON.stringify(opts.optimizer)}`);
+        if ((optimizerNamed(name).objectives === "two") !== (problem.kind === "two-objective")) {
+          throw new UsageError(`optimize: --optimizer ${name} does not fit ${problem.name}: nsga2 is for two objectives, the others for one`);
         }
-        const model = loadSurrogate(text, opts.surrogate);
-        noteUnsealedModel("optimize", opts.surrogate, text, ctx);
-        const schema = modelInputSchema("optimize", opts.surrogate, text, ctx);
-        const want = problem.trainingVariables.map((v) => v.name);
-        if (schema) checkSchemaMatch(schema, problem.trainingVariables, "optimize", opts.surrogate);
-        else if ([...model.inputs].sort().join(",") !== [...want].sort().join(",")) {
-          throw new UsageError(`optimize: ${opts.surrogate} has inputs ${model.inputs.join(", ")}; ${problem.name} needs ${want.join(", ")}`);
+        const exact = exactEvaluator(problem);
+        let evaluator = exact as Parameters<typeof runOptimizer>[2];
+        if (opts.surrogate !== undefined) {
+          let text: string;
+          try {
+            text = await readFile(opts.surrogate, "utf8");
+          } catch (error) {
+            throw new UsageError(`optimize: cannot read ${opts.surrogate} (${(error as NodeJS.ErrnoException).code ?? String(error)})`);
+          }
+          const model = loadSurrogate(text, opts.surrogate);
+          noteUnsealedModel("optimize", opts.surrogate, text, ctx);
+          const schema = modelInputSchema("optimize", opts.surrogate, text, ctx);
+          const want = problem.trainingVariables.map((v) => v.name);
+          if (schema) checkSchemaMatch(schema, problem.trainingVariables, "optimize", opts.surrogate);
+          else if ([...model.inputs].sort().join(",") !== [...want].sort().join(",")) {
+            throw new UsageError(`optimize: ${opts.surrogate} has inputs ${model.inputs.join(", ")}; ${problem.name} needs ${want.join(", ")}`);
+          }
+          const missing = problem.outputs.filter((o) => !model.targets.includes(o));
+          if (missing.length > 0) throw new UsageError(`optimize: ${opts.surrogate} does not predict ${missing.join(", ")}, which ${problem.name} needs`);
+          // rows in the model's input order (names match; another order is fine), categoricals in the model-row coding
+          evaluator = surrogateEvaluator(model, model.inputs.map((n) => problem.trainingVariables.find((v) => v.name === n)!));
         }
-        const missing = problem.outputs.filter((o) => !model.targets.includes(o));
-        if (missing.length > 0) throw new UsageError(`optimize: ${opts.surrogate} does not predict ${missing.join(", ")}, which ${problem.name} needs`);
-        // rows in the model's input order (names match; another order is fine), categoricals in the model-row coding
-        evaluator = surrogateEvaluator(model, model.inputs.map((n) => problem.trainingVariables.find((v) => v.name === n)!));
+        const t0 = performance.now();
+        const tty = (ctx.stderr as { isTTY?: boolean }).isTTY === true;
+        const bar = tty ? new cliProgress.SingleBar({ stream: ctx.stderr as NodeJS.WriteStream, format: `${name} [{bar}] {value}/{total} evaluations`, fps: 5 }, cliProgress.Presets.shades_classic) : null;
+        let started = false;
+        const result = await runOptimizer(name, problem.optimisation, evaluator, {
+          seed,
+          budget,
+          gridPoints: problem.exact.gridPoints,
+          onProgress: (done, total) => {
+            if (bar && !started) bar.start(Number.isFinite(total) ? total : budget, 0);
+            started = true;
+            bar?.update(done);
+          },
+        });
+        bar?.stop();
+        const seconds = (performance.now() - t0) / 1000;
+        const op = problem.optimisation;
+        let designs;
+        let source = "exact";
+        let exactEvaluations = opts.exact ? result.evaluations : 0;
+        if (problem.kind === "two-objective") {
+          const front = result.front.map((e) => e.design);
+          const outs = opts.exact ? result.front.map((e) => e.outputs) : await exact.evaluate(front);
+          if (!opts.exact) exactEvaluations += front.length;
+          designs = front
+            .map((d, i) => ({ d, o: outs[i]! }))
+            .filter(({ o }) => (op.constraints ?? []).every((c) => (c.op === "<=" ? o[c.output]! <= c.value : o[c.output]! >= c.value)))
+            .map(({ d, o }) => reportDesign(problem, { design: d, outputs: o, objectives: op.objectives.map((k) => o[k.output]!), violation: 0, feasible: true, valid: true }));
+        } else if (opts.exact) {
+          designs = result.best ? [reportDesign(problem, result.best)] : [];
+        } else {
+          const chosen = await reevaluateSurrogateOptimum(op, result.history ?? [], exact);
+          exactEvaluations += chosen.evaluations;
+          source = chosen.source;
+          designs = chosen.exact ? [reportDesign(problem, chosen.exact)] : [];
+        }
+        await mkdir(opts.out, { recursive: true });
+        const file = join(opts.out, "optimum.json");
+        const summary = {
+          kind: "floorcast.optimum",
+          formatVersion: 1,
+          caution: FLOORCAST_CAUTION,
+          problem: problem.name,
+          optimizer: result.method,
+          evaluator: opts.exact ? "exact" : opts.surrogate,
+          seed,
+          evaluations: result.evaluations,
+          exactEvaluations,
+          source,
+          seconds,
+          optima: designs,
+        };
+        await writeFile(file, `${JSON.stringify(summary, null, 1)}\n`);
+        if (designs.length === 0) {
+          ctx.stderr.write(`optimize: no exactly feasible design found for ${problem.name}\n`);
+          ctx.setExitCode(1);
+        }
+        for (const d of designs.slice(0, 10)) ctx.stdout.write(`${op.objectives.map((o) => `${o.output}=${Number(((d.result as Record<string, number>)[o.output] ?? NaN).toPrecision(6))}`).join(" ")}  ${JSON.stringify(d.design)}\n`);
+        if (designs.length > 10) ctx.stdout.write(`… ${designs.length - 10} more front points in ${file}\n`);
+        ctx.stdout.write(`${result.method}: ${result.evaluations} evaluations (${exactEvaluations} exact), ${seconds.toFixed(2)} s; written ${file}\n${FLOORCAST_CAUTION}\n`);
+      } finally {
+        await problem.close?.(); // an external evaluator command's processes
       }
-      const t0 = performance.now();
-      const tty = (ctx.stderr as { isTTY?: boolean }).isTTY === true;
-      const bar = tty ? new cliProgress.SingleBar({ stream: ctx.stderr as NodeJS.WriteStream, format: `${name} [{bar}] {value}/{total} evaluations`, fps: 5 }, cliProgress.Presets.shades_classic) : null;
-      let started = false;
-      const result = await runOptimizer(name, problem.optimisation, evaluator, {
-        seed,
-        budget,
-        gridPoints: problem.exact.gridPoints,
-        onProgress: (done, total) => {
-          if (bar && !started) bar.start(Number.isFinite(total) ? total : budget, 0);
-          started = true;
-          bar?.update(done);
-        },
-      });
-      bar?.stop();
-      const seconds = (performance.now() - t0) / 1000;
-      const op = problem.optimisation;
-      let designs;
-      let source = "exact";
-      let exactEvaluations = opts.exact ? result.evaluations : 0;
-      if (problem.kind === "two-objective") {
-        const front = result.front.map((e) => e.design);
-        const outs = opts.exact ? result.front.map((e) => e.outputs) : await exact.evaluate(front);
-        if (!opts.exact) exactEvaluations += front.length;
-        designs = front
-          .map((d, i) => ({ d, o: outs[i]! }))
-          .filter(({ o }) => (op.constraints ?? []).every((c) => (c.op === "<=" ? o[c.output]! <= c.value : o[c.output]! >= c.value)))
-          .map(({ d, o }) => reportDesign(problem, { design: d, outputs: o, objectives: op.objectives.map((k) => o[k.output]!), violation: 0, feasible: true, valid: true }));
-      } else if (opts.exact) {
-        designs = result.best ? [reportDesign(problem, result.best)] : [];
-      } else {
-        const chosen = await reevaluateSurrogateOptimum(op, result.history ?? [], exact);
-        exactEvaluations += chosen.evaluations;
-        source = chosen.source;
-        designs = chosen.exact ? [reportDesign(problem, chosen.exact)] : [];
-      }
-      await mkdir(opts.out, { recursive: true });
-      const file = join(opts.out, "optimum.json");
-      const summary = {
-        kind: "floorcast.optimum",
-        formatVersion: 1,
-        caution: FLOORCAST_CAUTION,
-        problem: problem.name,
-        optimizer: result.method,
-        evaluator: opts.exact ? "exact" : opts.surrogate,
-        seed,
-        evaluations: result.evaluations,
-        exactEvaluations,
-        source,
-        seconds,
-        optima: designs,
-      };
-      await writeFile(file, `${JSON.stringify(summary, null, 1)}\n`);
-      if (designs.length === 0) {
-        ctx.stderr.write(`optimize: no exactly feasible design found for ${problem.name}\n`);
-        ctx.setExitCode(1);
-      }
-      for (const d of designs.slice(0, 10)) ctx.stdout.write(`${op.objectives.map((o) => `${o.output}=${Number(((d.result as Record<string, number>)[o.output] ?? NaN).toPrecision(6))}`).join(" ")}  ${JSON.stringify(d.design)}\n`);
-      if (designs.length > 10) ctx.stdout.write(`… ${designs.length - 10} more front points in ${file}\n`);
-      ctx.stdout.write(`${result.method}: ${result.evaluations} evaluations (${exactEvaluations} exact), ${seconds.toFixed(2)} s; written ${file}\n${FLOORCAST_CAUTION}\n`);
     });
 }
