@@ -44,7 +44,7 @@ describe("floorcast bench / optimize: usage errors", () => {
     expect(d.stdout).toMatch(/--out <dir>/);
   });
   it("bench", async () => {
-    await usage(["bench", "--suite", "nope", "--out", join(dir, "x")], /suite "nope"; suites: demo, standard/);
+    await usage(["bench", "--suite", "nope", "--out", join(dir, "x")], /suite "nope"; suites: demo, quads, standard/);
     await usage(["bench", "--seeds", "abc", "--out", join(dir, "x")], /--seeds must be a whole number/);
     await usage(["bench", "--suite", "standard", "--problem", "nope", "--out", join(dir, "x")], /no problem "nope" in suite standard/);
     await usage(["bench", "--suite", "demo"], /required option '--out <dir>'/);

@@ -25,7 +25,7 @@ describe("the bench trains through the user's path", () => {
     const train = await sampleTrainingSet(problem, 24, "train-1", dir);
     const manifest = JSON.parse(readFileSync(train.csv.replace(/\.csv$/, ".manifest.json"), "utf8"));
     expect(manifest.design).toBe("lhs-maximin");
-    expect(manifest.evaluator).toBe("massing-rule-v1");
+    expect(manifest.evaluator).toBe("massing-rule-v1+plate-profile"); // the profile plate-stack trains on
     expect(manifest.inputSchema.map((e: { name: string }) => e.name)).toEqual(["maxHeight", "maxCoverage", "floorHeight"]);
     expect(manifest.inputSchema[0]).toEqual({ name: "maxHeight", kind: "continuous", min: 25, max: 90, scale: "linear", step: 0.1 });
     // every categorical cell is a level value, as `sample` writes it

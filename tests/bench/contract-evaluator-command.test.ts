@@ -103,6 +103,8 @@ describe("a problem file with an external evaluator command", () => {
     const [a, b] = reports;
     expect(b!.exactOptimum.value).toBe(a!.exactOptimum.value);
     expect(b!.surrogateOptimum.map((r) => r.gap)).toEqual(a!.surrogateOptimum.map((r) => r.gap));
-    expect(b!.evaluationsToTarget.map((e) => e.median)).toEqual(a!.evaluationsToTarget.map((e) => e.median));
+    // bo-plate-stack needs an evaluator that reports plate profiles: the built-in rule does, this command does not
+    const common = (r: typeof a) => r!.evaluationsToTarget.filter((e) => e.method !== "bo-plate-stack").map((e) => e.median);
+    expect(common(b)).toEqual(common(a));
   }, 600_000);
 });

@@ -94,3 +94,11 @@ export {
   stackPlates,
 } from "./predict/index.js";
 export type { PlateStackEvaluation, PlateStackPayload, StackRule, StackResult, StackLimit } from "./predict/index.js";
+// General composite: surrogates of named intermediate outputs combined by the caller's function (composite/)
+export { CompositeSurrogate } from "./composite/composite-surrogate.js";
+export type { CombineFunction, Combiner } from "./composite/composite-surrogate.js";
+export { fitComposite } from "./composite/fit-composite.js";
+export type { CompositeData } from "./composite/fit-composite.js";
+export { loadCompositeSurrogate } from "./composite/load-composite-surrogate.js";
+export { compositeModelFileSchema } from "./model-file/composite-model-file-schema.js";
+export type { CompositeModelFile } from "./model-file/composite-model-file-schema.js";

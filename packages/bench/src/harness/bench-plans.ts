@@ -5,6 +5,11 @@ import type { PeerProcess } from "./peer-process.js";
 import { peerTrainers } from "./peer-trainers.js";
 import type { TrialPlan } from "./run-problem.js";
 
+/** floorcast's surrogates a bench runs by default. */
+export const BENCH_SURROGATES = ["gp", "nn", "plate-stack"] as const;
+/** One of floorcast's surrogates in a bench. */
+export type BenchSurrogate = (typeof BENCH_SURROGATES)[number];
+
 /**
  * The trials of one problem: floorcast's GP and NN at every training size and seed; with the
  * peers, scikit-learn's GP and MLP on the same maximin-LHS rows, and floorcast's GP on scipy's
@@ -13,17 +18,19 @@ import type { TrialPlan } from "./run-problem.js";
  * @param settings - sizes, seeds.
  * @param quick - the demo's smaller fits.
  * @param peer - a running peer server, or null.
- * @param surrogates - which of floorcast's surrogates to run (default both).
+ * @param surrogates - which of floorcast's surrogates to run (default all three; plate-stack only where the
+ *   problem's evaluator reports plate profiles).
  */
 export function benchPlans(
   problem: BenchProblem,
   settings: BenchSettings,
   quick: boolean,
   peer: PeerProcess | null,
-  surrogates: readonly ("gp" | "nn")[] = ["gp", "nn"],
+  surrogates: readonly BenchSurrogate[] = BENCH_SURROGATES,
 ): TrialPlan[] {
   const vars = problem.trainingVariables;
-  const plans: TrialPlan[] = surrogates.map((k) => ({
+  const wanted = surrogates.filter((k) => k !== "plate-stack" || problem.plateProfile !== undefined);
+  const plans: TrialPlan[] = wanted.map((k) => ({
     trainer: floorcastTrainer(k, quick),
     sampler: "lhs-maximin",
     sizes: settings.trainingSizes,

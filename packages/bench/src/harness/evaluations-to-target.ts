@@ -2,8 +2,11 @@ import { gridAxes, gridSearch } from "../optimise/grid-search.js";
 import { optimizerNamed } from "../optimise/optimizers.js";
 import type { OptimisationResult } from "../optimise/optimisation-problem.js";
 import type { BenchProblem } from "../problem/bench-problem.js";
+import { PLATE_STACK_OUTPUTS } from "@floorcast/surrogate";
 import type { EvaluationsToTarget } from "./bench-report-types.js";
 import { exactEvaluator } from "./exact-evaluator.js";
+import { profiledExactEvaluator } from "./profiled-exact-evaluator.js";
+import { plateStackBayesianOptimisation } from "../optimise/plate-stack-bayesian.js";
 import { medianEvaluations } from "./median-evaluations.js";
 
 /** Budgets of the evaluations-to-target runs. */
@@ -28,7 +31,8 @@ function shortfall(v: number, optimum: number, sense: "max" | "min"): number {
 
 /**
  * Exact evaluations each optimiser needs to come within `target` of the exact optimum (0.005 =
- * 0.5%), on the exact evaluator: Bayesian optimisation with EI (Jones, Schonlau & Welch 1998), the
+ * 0.5%), on the exact evaluator: Bayesian optimisation with EI (Jones, Schonlau & Welch 1998), and where the
+ * evaluator reports plate profiles Bayesian optimisation through the stacking rule ("bo-plate-stack"), the
  * genetic algorithm, particle swarm, random search — each over several seeds, counted from its
  * best-so-far trace — and the grid, as the smallest full-factorial grid (2, 3, … points per
  * continuous variable) whose best is within the target (its count is that grid's size).
@@ -53,13 +57,20 @@ export async function evaluationsToTarget(
     ["pso", budgets.search, (seed) => optimizerNamed("pso").run(op, exactEvaluator(problem), { seed, maxEvaluations: budgets.search })],
     ["random", budgets.search, (seed) => optimizerNamed("random").run(op, exactEvaluator(problem), { seed, maxEvaluations: budgets.search })],
   ];
+  if (problem.plateProfile !== undefined && plateStackOutputsOnly(problem)) {
+    runs.splice(1, 0, [
+      "bo-plate-stack",
+      budgets.bo,
+      (seed) => plateStackBayesianOptimisation(op, profiledExactEvaluator(problem), { seed, maxEvaluations: budgets.bo }),
+    ]);
+  }
   const out: EvaluationsToTarget[] = [];
   for (const [method, budget, run] of runs) {
     onStep?.(method);
     const t0 = performance.now();
     const evaluations: (number | null)[] = [];
     let curve: [number, number][] = [];
-    const seeds = method === "bo" ? (budgets.boSeeds ?? budgets.seeds) : budgets.seeds;
+    const seeds = method.startsWith("bo") ? (budgets.boSeeds ?? budgets.seeds) : budgets.seeds;
     for (let s = 0; s < seeds; s++) {
       const r = await run(s + 1);
       const gaps = r.trace.map((v) => shortfall(v, optimum, sense));
@@ -88,6 +99,11 @@ export async function evaluationsToTarget(
   }
   out.push({ method: "grid", evaluations: [found], median: found, budget: cap, curve, seconds: (performance.now() - t0) / 1000 });
   return out;
+}
+
+/** Whether every output the problem uses is one the plate stack predicts. */
+function plateStackOutputsOnly(problem: BenchProblem): boolean {
+  return problem.outputs.every((o) => (PLATE_STACK_OUTPUTS as readonly string[]).includes(o));
 }
 
 /** (evaluations, shortfall) pairs of a trace, at most ~100 of them, skipping the infeasible start. */

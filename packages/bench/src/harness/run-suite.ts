@@ -2,7 +2,7 @@ import type { Writable } from "node:stream";
 import type { BenchProblem } from "../problem/bench-problem.js";
 import { DEFAULT_PROBLEMS_DIR, loadSuite } from "../problem/load-suite.js";
 import type { BenchReport } from "./bench-report-types.js";
-import { benchPlans } from "./bench-plans.js";
+import { BENCH_SURROGATES, benchPlans, type BenchSurrogate } from "./bench-plans.js";
 import { benchProgress } from "./bench-progress.js";
 import { benchSettings } from "./bench-settings.js";
 import { PeerProcess } from "./peer-process.js";
@@ -24,7 +24,7 @@ export interface RunSuiteOptions {
   /** Progress messages (stderr). */
   readonly progress?: Writable;
   /** Overrides for tests: training sizes, test size, budgets. */
-  readonly overrides?: Partial<ReturnType<typeof benchSettings>> & { readonly gridPoints?: number; readonly surrogates?: readonly ("gp" | "nn")[] };
+  readonly overrides?: Partial<ReturnType<typeof benchSettings>> & { readonly gridPoints?: number; readonly surrogates?: readonly BenchSurrogate[] };
 }
 
 /**
@@ -52,7 +52,7 @@ export async function runSuite(options: RunSuiteOptions): Promise<{ report: Benc
       suite: options.suite,
       problems,
       out: options.out,
-      settings: { suite: options.suite, quick: options.quick, ...settings, peers: peer !== null, surrogates: surrogates ?? ["gp", "nn"], gridPoints: gridPoints ?? null },
+      settings: { suite: options.suite, quick: options.quick, ...settings, peers: peer !== null, surrogates: surrogates ?? [...BENCH_SURROGATES], gridPoints: gridPoints ?? null },
       peers: peer !== null,
       plan: (problem) => ({
         plans: benchPlans(problem, settings, options.quick, peer, surrogates),

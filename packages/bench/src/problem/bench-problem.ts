@@ -50,6 +50,11 @@ export interface BenchProblem {
   close?(): Promise<void>;
   /** The full massing input of a design (massing problems only). */
   massingInput?(design: Design): MassingInput;
+  /**
+   * The exact evaluator's outputs with the plate profile (`sample --plate-profile` columns: lotArea, buildableArea,
+   * rule_*, plateArea_k, plateWidth_k) of a design; massing problems only. Throws for a design that cannot be evaluated.
+   */
+  plateProfile?(design: Design): Readonly<Record<string, number | string>>;
   /** The exact massing result of a design, with floor plates when asked (massing problems only). */
   massingResult?(design: Design, plates?: boolean): MassingResult;
 }

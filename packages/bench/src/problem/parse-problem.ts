@@ -1,4 +1,4 @@
-import { createDesign, evaluateMassing, mapUnitToSpace, scenarioToMassingInput } from "@floorcast/sampler";
+import { createDesign, evaluateMassing, mapUnitToSpace, massingEvaluator, scenarioToMassingInput } from "@floorcast/sampler";
 import type { MassingInput, Parameter, Scenario, Variable } from "@floorcast/sampler";
 import type { Design } from "../optimise/optimisation-problem.js";
 import type { BenchProblem, BenchSites } from "./bench-problem.js";
@@ -159,10 +159,12 @@ export function parseProblem(json: unknown, fileName: string, scenario?: Scenari
     return r;
   };
   const massingInput = (design: Design): MassingInput => scenarioToMassingInput(sc, record(design));
+  const profiled = massingEvaluator(sc, { plateProfile: true });
   return {
     ...base,
     dataset: problemDataset(about, trainingVariables, { scenario: sc, fixed: f.fixed }),
     massingInput,
+    plateProfile: (design) => profiled.evaluate(record(design)) as Readonly<Record<string, number | string>>,
     massingResult: (design, plates = false) => evaluateMassing(massingInput(design), { plates }),
     evaluate(design) {
       try {

@@ -53,6 +53,6 @@ export function problemDataset(
         ? command.evaluator()
         : testFunction
         ? functionEvaluator((input) => testFunction.evaluate(input as Design), { name: `test-function: ${testFunction.name}` })
-        : massingEvaluator(scenario),
+        : massingEvaluator(scenario, { plateProfile: true }),
   };
 }

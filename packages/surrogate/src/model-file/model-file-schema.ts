@@ -4,6 +4,7 @@ import { mlpModelFileSchema } from "./mlp-model-file-schema.js";
 import { ensembleModelFileSchema } from "./ensemble-model-file-schema.js";
 import { conformalModelFileSchema } from "./conformal-model-file-schema.js";
 import { plateStackModelFileSchema } from "./plate-stack-model-file-schema.js";
+import { compositeModelFileSchema } from "./composite-model-file-schema.js";
 
 /**
  * Every surrogate model file, discriminated by `modelType`. To add a model type, write its
@@ -16,6 +17,7 @@ export const modelFileSchema = z.discriminatedUnion("modelType", [
   ensembleModelFileSchema,
   conformalModelFileSchema,
   plateStackModelFileSchema,
+  compositeModelFileSchema,
 ]);
 
 /** Any parsed surrogate model file. */

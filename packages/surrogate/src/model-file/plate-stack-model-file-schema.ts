@@ -4,7 +4,11 @@ import { PLATE_STACK_RULE_NAME } from "../predict/plate-stack-rule.js";
 import { PLATE_STACK_QUANTITIES } from "../predict/plate-stack-payload.js";
 
 const finite = z.number().refine(Number.isFinite, "must be a finite number");
-const source = z.union([z.strictObject({ value: finite }), z.strictObject({ input: z.string().min(1) })]);
+const source = z.union([
+  z.strictObject({ value: finite }),
+  z.strictObject({ input: z.string().min(1) }),
+  z.strictObject({ input: z.string().min(1), levels: z.array(finite).min(1) }),
+]);
 /** An inner quantity: a constant, or a complete gp/mlp model file (validated fully by loadSurrogate). */
 const inner = z.union([
   z.strictObject({ constant: finite }),

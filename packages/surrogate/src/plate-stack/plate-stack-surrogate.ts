@@ -54,15 +54,16 @@ export class PlateStackSurrogate implements Surrogate {
    * Everything the rule yields for a batch: point values and sd for every output in PLATE_STACK_OUTPUTS order, the
    * probability of each floor count and the limiting reason.
    * @param x - rows × inputs, original units.
+   * @param keepSamples - also return every draw's outputs (`samples`, rows × draws × PLATE_STACK_OUTPUTS).
    */
-  predictMassing(x: readonly (readonly number[])[]): PlateStackEvaluation {
+  predictMassing(x: readonly (readonly number[])[], keepSamples = false): PlateStackEvaluation {
     checkMatrix("PlateStackSurrogate.predict", "x", x, this.inputs.length);
     const predictInner = (name: string, q: InnerQuantity, rows: number[][]): InnerMoments => {
       if ("constant" in q) return { mean: rows.map(() => q.constant), sd: rows.map(() => 0) };
       const p = this.inner(name)!.predict(rows);
       return { mean: p.mean.map((r) => r[0]!), sd: latentSd(p)?.map((r) => r[0]!) ?? rows.map(() => 0) };
     };
-    return evaluatePlateStack(this.#payload, this.inputs, x, predictInner);
+    return evaluatePlateStack(this.#payload, this.inputs, x, predictInner, keepSamples);
   }
 
   /**

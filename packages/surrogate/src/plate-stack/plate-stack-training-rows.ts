@@ -47,13 +47,38 @@ export function ruleSources(fn: string, data: PlateStackData): Record<string, Ru
       continue;
     }
     const j = data.inputs.findIndex((_, c) => data.x.every((row, i) => row[c] === v[i]));
-    if (j < 0) throw new RangeError(`${fn}: rule_${slot} varies between rows but equals no input column; add its column to the inputs`);
-    out[slot] = { input: data.inputs[j]! };
+    if (j >= 0) {
+      out[slot] = { input: data.inputs[j]! };
+      continue;
+    }
+    const coded = levelCoded(data, v);
+    if (coded === undefined) {
+      throw new RangeError(`${fn}: rule_${slot} varies between rows but equals no input column; add its column to the inputs`);
+    }
+    out[slot] = coded;
   }
   if (out.floorHeight === undefined || out.maxHeight === undefined) {
     throw new RangeError(`${fn}: the data must give rule_floorHeight and rule_maxHeight`);
   }
   return out;
+}
+
+/** An input holding level indices 0..L−1 that maps one to one onto the rule values (a categorical variable). */
+function levelCoded(data: PlateStackData, v: readonly number[]): RuleSource | undefined {
+  for (let c = 0; c < data.inputs.length; c++) {
+    const levels: number[] = [];
+    const ok = data.x.every((row, i) => {
+      const k = row[c]!;
+      if (!Number.isInteger(k) || k < 0 || k > 64) return false;
+      if (levels[k] === undefined) levels[k] = v[i]!;
+      return levels[k] === v[i];
+    });
+    if (!ok || levels.length < 2) continue;
+    // a level index never seen in training (a hole) leaves its value unknown: no match
+    if (Array.from(levels, (l) => l === undefined).some(Boolean)) continue;
+    return { input: data.inputs[c]!, levels };
+  }
+  return undefined;
 }
 
 /** The rule values of row i. */

@@ -44,13 +44,18 @@ export interface PlateStackEvaluation {
   readonly floorProbabilities: number[][];
   /** Per row: the reason the next floor was not built, from the inner means. */
   readonly limitedBy: StackLimit[];
+  /** When asked for: per row, per draw, the outputs (rows × draws × PLATE_STACK_OUTPUTS). */
+  readonly samples?: number[][][];
 }
 
 function ruleOf(values: Readonly<Record<string, RuleSource>>, col: ReadonlyMap<string, number>, row: readonly number[]): StackRule {
   const get = (slot: string, fallback: number | undefined): number | undefined => {
     const s = values[slot];
     if (s === undefined) return fallback;
-    return "value" in s ? s.value : row[col.get(s.input)!]!;
+    if ("value" in s) return s.value;
+    const v = row[col.get(s.input)!]!;
+    if (!("levels" in s)) return v;
+    return s.levels[Math.min(s.levels.length - 1, Math.max(0, Math.round(v)))]!;
   };
   const start = get("skyPlaneStart", undefined);
   const ratio = get("skyPlaneRatio", undefined);
@@ -88,6 +93,7 @@ function outputsOf(rule: StackRule, lot: number, buildable: number, r: ReturnTyp
  * @param inputs - the model's input names.
  * @param x - rows × inputs, original units.
  * @param predict - predicts one learned quantity.
+ * @param keepSamples - also return every draw's outputs (for Monte Carlo acquisition functions).
  * @returns point predictions, sd, floor-count probabilities and the limiting reason per row.
  */
 export function evaluatePlateStack(
@@ -95,6 +101,7 @@ export function evaluatePlateStack(
   inputs: readonly string[],
   x: readonly (readonly number[])[],
   predict: InnerPredict,
+  keepSamples = false,
 ): PlateStackEvaluation {
   const col = new Map(inputs.map((name, j) => [name, j] as const));
   const q = payload.quantities;
@@ -127,6 +134,7 @@ export function evaluatePlateStack(
   const sd: number[][] = [];
   const floorProbabilities: number[][] = [];
   const limitedBy: StackLimit[] = [];
+  const kept: number[][][] = [];
   const draws = payload.draws;
   const z0 = PLATE_STACK_QUANTITIES.map(() => 0);
   const at = (m: InnerMoments | undefined, r: number, z: number): number => (m === undefined ? Infinity : m.mean[r]! + m.sd[r]! * z);
@@ -148,6 +156,7 @@ export function evaluatePlateStack(
   for (let i = 0; i < x.length; i++) {
     const plug = one(i, z0);
     const samples = draws.length === 0 ? [plug] : draws.map((z) => one(i, z));
+    if (keepSamples) kept.push(samples);
     const avg = plug.map((_, j) => samples.reduce((s, v) => s + v[j]!, 0) / samples.length);
     const dev = plug.map((_, j) => Math.sqrt(samples.reduce((s, v) => s + (v[j]! - avg[j]!) ** 2, 0) / samples.length));
     mean.push(payload.pointMode === "expected" ? avg : plug);
@@ -156,5 +165,5 @@ export function evaluatePlateStack(
     for (const v of samples) counts[v[1]!] = (counts[v[1]!] ?? 0) + 1;
     floorProbabilities.push(Array.from(counts, (c) => (c ?? 0) / samples.length));
   }
-  return { mean, sd, floorProbabilities, limitedBy };
+  return keepSamples ? { mean, sd, floorProbabilities, limitedBy, samples: kept } : { mean, sd, floorProbabilities, limitedBy };
 }

@@ -1,7 +1,13 @@
 import type { ModelFileShape } from "./model-file-shape.js";
 
-/** Where a rule value comes from: a value fixed for the model, or one of the model's input columns. */
-export type RuleSource = { readonly value: number } | { readonly input: string };
+/**
+ * Where a rule value comes from: a value fixed for the model, one of the model's input columns, or an input
+ * column holding a level index (a categorical variable coded 0, 1, …), whose value is `levels[index]`.
+ */
+export type RuleSource =
+  | { readonly value: number }
+  | { readonly input: string }
+  | { readonly input: string; readonly levels: readonly number[] };
 
 /** A learned quantity: constant over the training data, or an inner model file (gp or mlp). */
 export type InnerQuantity = { readonly constant: number } | { readonly model: ModelFileShape };

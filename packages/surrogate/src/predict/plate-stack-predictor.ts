@@ -24,8 +24,9 @@ function checkPayload(file: ModelFileShape): PlateStackPayload {
   }
   for (const [slot, src] of Object.entries(p.ruleValues as Record<string, unknown>)) {
     const s = objectField(FN, `payload.ruleValues.${slot}`, src);
-    const ok = typeof s.value === "number" ? Number.isFinite(s.value) : typeof s.input === "string" && file.inputs.includes(s.input);
-    if (!ok) throw new RangeError(`${FN}: payload.ruleValues.${slot} must be { value } or { input } naming an input`);
+    const levelsOk = s.levels === undefined || (Array.isArray(s.levels) && s.levels.length > 0 && s.levels.every((l) => typeof l === "number" && Number.isFinite(l)));
+    const ok = typeof s.value === "number" ? Number.isFinite(s.value) : typeof s.input === "string" && file.inputs.includes(s.input) && levelsOk;
+    if (!ok) throw new RangeError(`${FN}: payload.ruleValues.${slot} must be { value } or { input[, levels] } naming an input`);
   }
   for (const row of p.draws as unknown[]) {
     if (!Array.isArray(row) || row.length !== PLATE_STACK_QUANTITIES.length || !row.every((v) => typeof v === "number" && Number.isFinite(v))) {
