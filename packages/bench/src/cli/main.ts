@@ -4,6 +4,7 @@ import type { CommandContext } from "./command-context.js";
 import { EXIT_CODES } from "./exit-codes.js";
 import { UsageError } from "./usage-error.js";
 import { registerCommands } from "./register-commands.js";
+import { CLI_VERSION } from "./cli-version.js";
 
 
 /**
@@ -26,6 +27,7 @@ export async function main(argv: readonly string[], io?: Partial<CommandContext>
     .description(
       `Fast, validated surrogates of an exact floor-area (massing) calculation.\n${FLOORCAST_CAUTION}`,
     )
+    .version(CLI_VERSION, "-V, --version", "print the version of floorcast and exit")
     .exitOverride()
     .configureOutput({
       writeOut: (s) => ctx.stdout.write(s),

@@ -17,6 +17,7 @@ export function registerDemoCommand(program: Command, ctx: CommandContext): void
     .description("Run the Quillmere demo suite end to end (sample, fit GP and NN, assess, optimise, report) in a few minutes")
     .option("--out <dir>", "output directory", "floorcast-demo")
     .option("--no-peers", "skip scikit-learn's GP/MLP and scipy's LHS even when present")
+    .option("--quick", "the quick sizes (training sizes 20, 40, 80; 2 seeds): the demo always uses them; accepted as in bench")
     .action(async (opts: { out: string; peers: boolean }) => {
       const t0 = performance.now();
       ctx.stderr.write(`floorcast demo: the Quillmere demo suite, quick sizes. ${FLOORCAST_CAUTION}\n`);
