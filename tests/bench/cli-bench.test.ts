@@ -86,6 +86,14 @@ describe("floorcast optimize", () => {
     const d = o.optima[0].design;
     // the reported value is the exact Branin value at the design, not the surrogate's
     expect(o.optima[0].value).toBeCloseTo(branin(d.x1, d.x2), 12);
+    // beside it, the surrogate's own prediction there (the model file's mean and sd at the design)
+    // and exact − predicted
+    const at = gp.predict([[d.x1, d.x2]]);
+    expect(o.optima[0].surrogate.mean.f).toBeCloseTo(at.mean[0]![0]!, 9);
+    expect(o.optima[0].surrogate.sd.f).toBeCloseTo(at.sd![0]![0]!, 9);
+    expect(o.optima[0].surrogate.exact.f).toBe(o.optima[0].value);
+    expect(o.optima[0].surrogate.difference.f).toBeCloseTo(branin(d.x1, d.x2) - at.mean[0]![0]!, 9);
+    expect(r.stdout).toMatch(/surrogate f=\S+ ± \S+ \(exact \S+, exact − surrogate \S+\)/);
     expect(o.exactEvaluations).toBeGreaterThanOrEqual(1);
     const wrong = join(dir, "wrong.json");
     const gp1 = fitGaussianProcess({ inputs: ["a", "b"], targets: ["f"], x, y: x.map((q) => [q[0]!]) }, { seed: 1 });

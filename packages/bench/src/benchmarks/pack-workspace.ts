@@ -54,8 +54,9 @@ export function packWorkspace(dest: string): Record<(typeof PACKAGE_NAMES)[numbe
  * registry is asked anything.
  * @param dir - folder to create, in the folder that holds the tarballs.
  * @param tarballs - package name → tarball path.
+ * @param optionalPeers - also install their optional peer dependencies.
  */
-export function installTarballs(dir: string, tarballs: Readonly<Record<string, string>>): void {
+export function installTarballs(dir: string, tarballs: Readonly<Record<string, string>>, optionalPeers = false): void {
   mkdirSync(dir, { recursive: true });
   const name = "floorcast-install-check";
   const local: Record<string, string> = {};
@@ -63,7 +64,7 @@ export function installTarballs(dir: string, tarballs: Readonly<Record<string, s
     local[pkg] = join(dir, basename(file));
     copyFileSync(file, local[pkg]!);
   }
-  const { lockfile, dependencies } = tarballLockfile(join(WORKSPACE_ROOT, "package-lock.json"), local, name);
+  const { lockfile, dependencies } = tarballLockfile(join(WORKSPACE_ROOT, "package-lock.json"), local, name, optionalPeers);
   writeFileSync(join(dir, "package.json"), `${JSON.stringify({ name, private: true, type: "module", dependencies }, null, 2)}\n`);
   writeFileSync(join(dir, "package-lock.json"), `${JSON.stringify(lockfile, null, 2)}\n`);
   runNpm(dir, ["ci", "--offline", "--ignore-scripts", "--no-audit", "--no-fund", "--loglevel=error"]);

@@ -30,9 +30,9 @@ function resolveEntry(packages: Readonly<Record<string, LockEntry>>, from: strin
   }
 }
 
-/** Names a package needs installed: dependencies, optional dependencies and non-optional peers. */
-function needs(entry: LockEntry): string[] {
-  const peers = Object.keys(entry.peerDependencies ?? {}).filter((p) => entry.peerDependenciesMeta?.[p]?.optional !== true);
+/** Names a package needs installed: dependencies, optional dependencies and peers (optional peers only when asked). */
+function needs(entry: LockEntry, optionalPeers = false): string[] {
+  const peers = Object.keys(entry.peerDependencies ?? {}).filter((p) => optionalPeers || entry.peerDependenciesMeta?.[p]?.optional !== true);
   return [...Object.keys(entry.dependencies ?? {}), ...Object.keys(entry.optionalDependencies ?? {}), ...peers];
 }
 
@@ -41,12 +41,14 @@ function needs(entry: LockEntry): string[] {
  * @param workspaceLock - path of the workspace's package-lock.json.
  * @param tarballs - package name → tarball path (the project refers to it as `file:<basename>` beside it).
  * @param projectName - the project's name.
+ * @param optionalPeers - also install the tarballs' optional peer dependencies (as a user who adds them).
  * @returns the lockfile and the package.json dependencies.
  */
 export function tarballLockfile(
   workspaceLock: string,
   tarballs: Readonly<Record<string, string>>,
   projectName: string,
+  optionalPeers = false,
 ): { lockfile: unknown; dependencies: Record<string, string> } {
   const ws = JSON.parse(readFileSync(workspaceLock, "utf8")) as { packages: Record<string, LockEntry> };
   const dependencies: Record<string, string> = {};
@@ -62,7 +64,7 @@ export function tarballLockfile(
     const { name: _n, ...rest } = manifest;
     void _n;
     out[`node_modules/${name}`] = { ...rest, resolved: spec, integrity };
-    for (const dep of needs(manifest)) todo.push([`node_modules/${name}`, dep]);
+    for (const dep of needs(manifest, optionalPeers)) todo.push([`node_modules/${name}`, dep]);
   }
   while (todo.length > 0) {
     const [from, name] = todo.pop()!;

@@ -5,6 +5,7 @@ import { EXIT_CODES } from "./exit-codes.js";
 import { UsageError } from "./usage-error.js";
 import { registerCommands } from "./register-commands.js";
 import { CLI_VERSION } from "./cli-version.js";
+import { requiredOptionsAfterUnknown } from "./required-options.js";
 
 
 /**
@@ -34,6 +35,7 @@ export async function main(argv: readonly string[], io?: Partial<CommandContext>
       writeErr: (s) => ctx.stderr.write(s),
     });
   await registerCommands(program, ctx, argv);
+  requiredOptionsAfterUnknown(program);
   try {
     await program.parseAsync(argv as string[]);
   } catch (error) {
