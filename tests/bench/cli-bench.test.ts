@@ -114,8 +114,13 @@ describe("floorcast bench: a quick end-to-end run of a tiny suite, then a resume
     const args = ["bench", "--suite", "standard", "--problems", suite, "--quick", "--seeds", "1", "--no-peers", "--out", out];
     const r = run(args);
     expect(r.status, r.stderr).toBe(0);
-    expect(r.stdout).toMatch(/standard-forrester\s+gp\s+80/);
-    expect(r.stdout).toMatch(/standard-forrester\s+nn\s+80/);
+    // one training size for every row: said in the caption, the rows name problem and model
+    expect(r.stdout).toMatch(/largest training size \(n = 80\)/);
+    expect(r.stdout).toMatch(/standard-forrester\s+gp\s/);
+    expect(r.stdout).toMatch(/standard-forrester\s+nn\s/);
+    const table = r.stdout.split("\n").filter((l) => /^(problem |-{7}|standard-forrester )/.test(l));
+    expect(table).toHaveLength(4);
+    for (const line of table) expect(line.length, line).toBeLessThanOrEqual(100);
     expect(r.stdout).toMatch(/not a zoning determination/);
     expect(r.stdout).toMatch(/report: .*report\.html/);
     expect(r.stderr).toMatch(/problem 1\/1 standard-forrester: starting/);

@@ -65,6 +65,12 @@ export function tarballLockfile(
     void _n;
     out[`node_modules/${name}`] = { ...rest, resolved: spec, integrity };
     for (const dep of needs(manifest, optionalPeers)) todo.push([`node_modules/${name}`, dep]);
+    // A user who wants an optional peer installs it themselves: it becomes the project's own dependency.
+    if (optionalPeers) {
+      for (const [peer, range] of Object.entries(manifest.peerDependencies ?? {})) {
+        if (manifest.peerDependenciesMeta?.[peer]?.optional === true) dependencies[peer] = range;
+      }
+    }
   }
   while (todo.length > 0) {
     const [from, name] = todo.pop()!;

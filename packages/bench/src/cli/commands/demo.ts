@@ -24,7 +24,6 @@ export function registerDemoCommand(program: Command, ctx: CommandContext): void
       const { report, paths } = await runSuite({ suite: "demo", quick: true, out: opts.out, peers: opts.peers, progress: ctx.stderr });
       const seconds = (performance.now() - t0) / 1000;
       ctx.stdout.write(`\n${formatTextTable(headlineTable(report))}\n\n`);
-      ctx.stdout.write("gap = share of the exact optimum lost by optimising on the surrogate (design re-evaluated exactly); refined = after 20 exact refinement evaluations.\n");
       ctx.stdout.write(`${FLOORCAST_CAUTION}\n\n`);
       ctx.stdout.write(`demo finished in ${seconds.toFixed(1)} s; report: ${paths.html}\n  (also ${paths.markdown} and ${paths.json})\n`);
     });

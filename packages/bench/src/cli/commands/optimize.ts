@@ -11,6 +11,7 @@ import { exactEvaluator } from "../../harness/exact-evaluator.js";
 import { surrogateEvaluator } from "../../harness/surrogate-evaluator.js";
 import { reevaluateSurrogateOptimum } from "../../harness/reevaluate-surrogate-optimum.js";
 import { reportDesign } from "../../harness/report-design.js";
+import { formatDesign } from "../../harness/format-design.js";
 import { surrogateAtOptimum, type SurrogateAtOptimum } from "../../harness/surrogate-at-optimum.js";
 import type { ReportedDesign } from "../../harness/bench-report-types.js";
 import { OPTIMIZER_NAMES, runOptimizer, type OptimizerName } from "../../harness/run-optimizer.js";
@@ -154,7 +155,7 @@ export function registerOptimizeCommand(program: Command, ctx: CommandContext): 
         }
         const g6 = (v: number | undefined): number => Number((v ?? NaN).toPrecision(6));
         for (const d of designs.slice(0, 10)) {
-          ctx.stdout.write(`${op.objectives.map((o) => `${o.output}=${g6((d.result as Record<string, number>)[o.output])}`).join(" ")}  ${JSON.stringify(d.design)}\n`);
+          ctx.stdout.write(`${op.objectives.map((o) => `${o.output}=${g6((d.result as Record<string, number>)[o.output])}`).join(" ")}  ${formatDesign(d.design)}\n`);
           const at = d.surrogate;
           if (at && designs.length === 1) {
             for (const k of Object.keys(at.mean)) {
