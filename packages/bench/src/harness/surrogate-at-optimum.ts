@@ -1,5 +1,6 @@
 import type { Surrogate } from "@floorcast/surrogate";
-import type { Design, OptimisationVariable } from "../optimise/optimisation-problem.js";
+import type { Variable } from "@floorcast/sampler";
+import type { Design } from "../optimise/optimisation-problem.js";
 import { designRow } from "./design-row.js";
 
 /**
@@ -26,7 +27,7 @@ export interface SurrogateAtOptimum {
  */
 export function surrogateAtOptimum(
   model: Surrogate,
-  variables: readonly OptimisationVariable[],
+  variables: readonly Variable[],
   design: Design,
   exact: Readonly<Record<string, number>>,
   outputs: readonly string[],
