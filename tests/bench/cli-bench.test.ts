@@ -86,6 +86,14 @@ describe("floorcast optimize", () => {
     const d = o.optima[0].design;
     // the reported value is the exact Branin value at the design, not the surrogate's
     expect(o.optima[0].value).toBeCloseTo(branin(d.x1, d.x2), 12);
+    // beside it, the surrogate's own prediction there (the model file's mean and sd at the design)
+    // and exact − predicted
+    const at = gp.predict([[d.x1, d.x2]]);
+    expect(o.optima[0].surrogate.mean.f).toBeCloseTo(at.mean[0]![0]!, 9);
+    expect(o.optima[0].surrogate.sd.f).toBeCloseTo(at.sd![0]![0]!, 9);
+    expect(o.optima[0].surrogate.exact.f).toBe(o.optima[0].value);
+    expect(o.optima[0].surrogate.difference.f).toBeCloseTo(branin(d.x1, d.x2) - at.mean[0]![0]!, 9);
+    expect(r.stdout).toMatch(/surrogate f=\S+ ± \S+ \(exact \S+, exact − surrogate \S+\)/);
     expect(o.exactEvaluations).toBeGreaterThanOrEqual(1);
     const wrong = join(dir, "wrong.json");
     const gp1 = fitGaussianProcess({ inputs: ["a", "b"], targets: ["f"], x, y: x.map((q) => [q[0]!]) }, { seed: 1 });
@@ -106,8 +114,13 @@ describe("floorcast bench: a quick end-to-end run of a tiny suite, then a resume
     const args = ["bench", "--suite", "standard", "--problems", suite, "--quick", "--seeds", "1", "--no-peers", "--out", out];
     const r = run(args);
     expect(r.status, r.stderr).toBe(0);
-    expect(r.stdout).toMatch(/standard-forrester\s+gp\s+80/);
-    expect(r.stdout).toMatch(/standard-forrester\s+nn\s+80/);
+    // one training size for every row: said in the caption, the rows name problem and model
+    expect(r.stdout).toMatch(/largest training size \(n = 80\)/);
+    expect(r.stdout).toMatch(/standard-forrester\s+gp\s/);
+    expect(r.stdout).toMatch(/standard-forrester\s+nn\s/);
+    const table = r.stdout.split("\n").filter((l) => /^(problem |-{7}|standard-forrester )/.test(l));
+    expect(table).toHaveLength(4);
+    for (const line of table) expect(line.length, line).toBeLessThanOrEqual(100);
     expect(r.stdout).toMatch(/not a zoning determination/);
     expect(r.stdout).toMatch(/report: .*report\.html/);
     expect(r.stderr).toMatch(/problem 1\/1 standard-forrester: starting/);

@@ -41,7 +41,7 @@ describe("floorcast fit --model nn / predict", () => {
     // Nothing but floorcast's own lines: tfjs would print "Hi, looks like you are running TensorFlow.js in Node.js".
     for (const line of `${fit.stdout}${fit.stderr}`.trim().split("\n")) expect(line).toMatch(/^(fit: |Estimates for early feasibility)/);
     expect(fit.stderr).toMatch(/fit: nn 8-8 on (wasm|cpu): \d+ epochs/);
-    const pred = run(["predict", "--model", p("nn.json"), "--data", p("query.csv"), "--out", p("nn.csv")]);
+    const pred = run(["predict", "--model", p("nn.json"), "--data", p("query.csv"), "--keep", "", "--out", p("nn.csv")]);
     expect(pred.status).toBe(0);
     expect(`${pred.stdout}${pred.stderr}`).not.toMatch(/TensorFlow|tfjs/);
     const out = readCsv(p("nn.csv"));
@@ -62,7 +62,7 @@ describe("floorcast fit --model nn / predict", () => {
     expect(file.modelType).toBe("conformal");
     expect(file.payload.base.modelType).toBe("ensemble");
     expect(file.payload.base.payload.members.map((m: { modelType: string }) => m.modelType)).toEqual(["mlp", "mlp"]);
-    expect(run(["predict", "--model", p("nnc.json"), "--data", p("query.csv"), "--out", p("nnc.csv")]).status).toBe(0);
+    expect(run(["predict", "--model", p("nnc.json"), "--data", p("query.csv"), "--keep", "", "--out", p("nnc.csv")]).status).toBe(0);
     const out = readCsv(p("nnc.csv"));
     expect(out.header).toEqual(["y_mean", "y_sd", "y_lower", "y_upper", "z_mean", "z_sd", "z_lower", "z_upper", "in_domain"]);
     for (const r of out.rows) {

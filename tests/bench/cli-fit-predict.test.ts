@@ -46,18 +46,58 @@ describe("floorcast fit / predict", () => {
     const pred = run(["predict", "--model", p("m.json"), "--data", p("query.csv"), "--out", p("pred.csv")]);
     expect(pred.status).toBe(0);
     const out = readCsv(p("pred.csv"));
-    expect(out.header).toEqual(["y_mean", "y_sd", "z_mean", "z_sd", "in_domain"]);
+    // the data's own columns first (here the input x), then the predictions
+    expect(out.header).toEqual(["x", "y_mean", "y_sd", "z_mean", "z_sd", "in_domain"]);
     const model = loadSurrogate(readFileSync(p("m.json"), "utf8"));
     const q = [[0.9], [0.7572487585], [0.1], [0.5]];
     const lib = model.predict(q);
-    q.forEach((_, i) => {
+    q.forEach((row, i) => {
+      expect(out.rows[i]![0]).toBe(row[0]);
       // CSV numbers are written as shortest round-trip text, so they read back bit for bit (sampler's CSV contract).
-      expect(out.rows[i]![0]).toBe(lib.mean[i]![0]);
-      expect(out.rows[i]![1]).toBe(lib.sd![i]![0]);
-      expect(out.rows[i]![2]).toBe(lib.mean[i]![1]);
+      expect(out.rows[i]![1]).toBe(lib.mean[i]![0]);
+      expect(out.rows[i]![2]).toBe(lib.sd![i]![0]);
+      expect(out.rows[i]![3]).toBe(lib.mean[i]![1]);
     });
     // 12 evenly spaced points: the GP's mean at the published minimiser lies within 3 of its own sd of −6.0207401.
-    expect(Math.abs(out.rows[1]![0]! - -6.0207400558)).toBeLessThan(3 * out.rows[1]![1]!);
+    expect(Math.abs(out.rows[1]![1]! - -6.0207400558)).toBeLessThan(3 * out.rows[1]![2]!);
+  });
+
+  it("predict keeps the data's columns verbatim (or the --keep list) and reads stdin / writes stdout with -", async () => {
+    expect(run(["fit", "--data", p("train.csv"), "--inputs", "x", "--target", "y", "--seed", "4", "--out", p("k.json")]).status).toBe(0);
+    const data = "id,x,label\nlot-7,0.90,\"corner, north\"\nlot-2,0.1,plain\n";
+    writeFileSync(p("keyed.csv"), data);
+    const lib = loadSurrogate(readFileSync(p("k.json"), "utf8")).predict([[0.9], [0.1]]);
+    const byFile = await runHere(["predict", "--model", p("k.json"), "--data", p("keyed.csv"), "--out", p("keyed-pred.csv")]);
+    expect(byFile.status, byFile.stderr).toBe(0);
+    const lines = readFileSync(p("keyed-pred.csv"), "utf8").trim().split("\n");
+    expect(lines[0]).toBe("id,x,label,y_mean,y_sd,in_domain");
+    // text columns are copied as they were (quoted again where RFC 4180 needs it); the input as the number it is
+    expect(lines[1]).toBe(`lot-7,0.9,"corner, north",${lib.mean[0]![0]},${lib.sd![0]![0]},1`);
+    expect(lines[2]).toBe(`lot-2,0.1,plain,${lib.mean[1]![0]},${lib.sd![1]![0]},1`);
+    // --keep chooses the copied columns, in its order; "" copies none
+    const keep = await runHere(["predict", "--model", p("k.json"), "--data", p("keyed.csv"), "--keep", "label,id", "--out", p("keep.csv")]);
+    expect(keep.status, keep.stderr).toBe(0);
+    expect(readFileSync(p("keep.csv"), "utf8").split("\n")[0]).toBe("label,id,y_mean,y_sd,in_domain");
+    expect((await runHere(["predict", "--model", p("k.json"), "--data", p("keyed.csv"), "--keep", "", "--out", p("none.csv")])).status).toBe(0);
+    expect(readFileSync(p("none.csv"), "utf8").split("\n")[0]).toBe("y_mean,y_sd,in_domain");
+    // - : the same bytes through stdin and stdout; the summary and the caution go to stderr
+    const piped = await runCli(["predict", "--model", p("k.json"), "--data", "-", "--out", "-"], data);
+    expect(piped.code, piped.err).toBe(0);
+    expect(piped.out).toBe(readFileSync(p("keyed-pred.csv"), "utf8"));
+    expect(piped.err).toMatch(/predict: 2 rows of stdin → stdout/);
+    expect(piped.err).toMatch(/not a zoning determination/);
+    // fit reads stdin too
+    const fitPiped = await runCli(["fit", "--data", "-", "--inputs", "x", "--target", "y", "--seed", "4", "--out", p("k2.json")], readFileSync(p("train.csv"), "utf8"));
+    expect(fitPiped.code, fitPiped.err).toBe(0);
+    expect(JSON.parse(readFileSync(p("k2.json"), "utf8")).payload).toEqual(JSON.parse(readFileSync(p("k.json"), "utf8")).payload);
+    // a kept column may not take a prediction column's name; stdin cannot be read twice
+    writeFileSync(p("clash.csv"), "x,y_mean\n0.5,1\n");
+    const clash = await runHere(["predict", "--model", p("k.json"), "--data", p("clash.csv"), "--out", p("clash-pred.csv")]);
+    expect(clash.status).toBe(2);
+    expect(clash.stderr).toMatch(/kept column y_mean has the name of a prediction column/);
+    const twice = await runHere(["predict", "--model", p("k.json"), "--data", "-", "--train", "-", "--out", p("t.csv")]);
+    expect(twice.status).toBe(2);
+    expect(twice.stderr).toMatch(/only one of --data and --train can read stdin/);
   });
 
   it("--kernel se / --shared-lengthscale / --noise reach the model file", () => {

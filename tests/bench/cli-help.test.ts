@@ -1,5 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { execFileSync } from "node:child_process";
+import { readFileSync } from "node:fs";
+import { runCli } from "./run-cli.js";
 import { fileURLToPath } from "node:url";
 
 const bin = fileURLToPath(new URL("../../packages/bench/bin/floorcast.js", import.meta.url));
@@ -9,5 +11,26 @@ describe("floorcast --help", () => {
     const out = execFileSync(process.execPath, [bin, "--help"], { encoding: "utf8" });
     expect(out).toMatch(/Usage: floorcast/);
     expect(out).toMatch(/not a zoning determination/);
+  });
+  it("--version and -V print the version of @floorcast/bench and exit 0", () => {
+    const { version } = JSON.parse(readFileSync(new URL("../../packages/bench/package.json", import.meta.url), "utf8")) as { version: string };
+    for (const flag of ["--version", "-V"]) expect(execFileSync(process.execPath, [bin, flag], { encoding: "utf8" }).trim()).toBe(version);
+  });
+  it("an unknown option is reported before a missing required one, for every command", async () => {
+    for (const command of ["sample", "fit", "predict", "optimize", "design", "assess", "merge"]) {
+      const r = await runCli([command, "--nope"]);
+      expect(r.code, command).toBe(2);
+      expect(r.err, command).toMatch(/^error: unknown option '--nope'\n/); // commander may add "(Did you mean …?)"
+      expect(r.err, command).not.toMatch(/required option/);
+    }
+    const missing = await runCli(["sample", "--n", "3"]);
+    expect(missing.code).toBe(2);
+    expect(missing.err).toBe("error: required option '--scenario <file>' not specified\n");
+  });
+  it("help marks every required option (required) and no other", async () => {
+    const help = (await runCli(["sample", "--help"])).out.replace(/\s+/g, " ");
+    for (const flag of ["--scenario <file>", "--n <n>", "--seed <s>", "--out <file.csv>"]) expect(help).toMatch(new RegExp(`${flag.replace(/[.*+?^${}()|[\]\\]/g, "\\$&")} [^-]*\\(required\\)`));
+    expect(help).not.toMatch(/--force [^-]*\(required\)/);
+    expect((await runCli(["predict", "--help"])).out.match(/\(required\)/g)).toHaveLength(3);
   });
 });

@@ -70,6 +70,9 @@ describe("floorcast massing", () => {
       const res = JSON.parse(r.out);
       expect(res).toEqual(evaluateMassing(ferrow, { plates: true }));
       expect(res.plates).toHaveLength(res.floors);
+      // --input - is stdin, the same answer
+      const piped = await run(["massing", "--input", "-", "--plates"], `${JSON.stringify(ferrow)}\n`);
+      expect([piped.code, piped.out]).toEqual([0, r.out]);
     } finally {
       rmSync(dir, { recursive: true, force: true });
     }

@@ -57,7 +57,7 @@ describe("sample --plate-profile → fit --model plate-stack → predict", () =>
       [16, 3.5, 1.2],
     ];
     writeFileSync(p("q.csv"), `frontage,setbackSide,maxFar\n${query.map((q) => q.join(",")).join("\n")}\n`);
-    const pr = await runCli(["predict", "--model", p("m.json"), "--data", p("q.csv"), "--out", p("pred.csv")]);
+    const pr = await runCli(["predict", "--model", p("m.json"), "--data", p("q.csv"), "--keep", "", "--out", p("pred.csv")]);
     expect(pr.code, pr.err).toBe(0);
     const lines = readFileSync(p("pred.csv"), "utf8").trim().split("\n");
     expect(lines[0]).toBe("gfa_mean,gfa_sd,floors_mean,floors_sd,in_domain");

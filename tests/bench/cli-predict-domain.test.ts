@@ -22,7 +22,7 @@ beforeAll(async () => {
 describe("floorcast predict: in_domain column and --strict", () => {
   it("flags each row 1 inside / 0 outside the GP's domain of validity (from its stored training inputs)", async () => {
     const out = join(dir, "pred.csv");
-    const r = await runCli(["predict", "--model", join(dir, "model.json"), "--data", join(dir, "query.csv"), "--out", out]);
+    const r = await runCli(["predict", "--model", join(dir, "model.json"), "--data", join(dir, "query.csv"), "--keep", "", "--out", out]);
     expect(r.code).toBe(0);
     expect(r.out).toMatch(/2 outside the domain of validity/);
     const lines = (await readFile(out, "utf8")).trim().split("\n");
@@ -30,7 +30,7 @@ describe("floorcast predict: in_domain column and --strict", () => {
     expect(lines.slice(1).map((l) => l.split(",")[2])).toEqual(["1", "1", "0", "0"]);
     // The same flags from --train (the same rows).
     const out2 = join(dir, "pred2.csv");
-    expect((await runCli(["predict", "--model", join(dir, "model.json"), "--data", join(dir, "query.csv"), "--train", join(dir, "train.csv"), "--out", out2])).code).toBe(0);
+    expect((await runCli(["predict", "--model", join(dir, "model.json"), "--data", join(dir, "query.csv"), "--train", join(dir, "train.csv"), "--keep", "", "--out", out2])).code).toBe(0);
     expect(await readFile(out2, "utf8")).toBe(await readFile(out, "utf8"));
   });
 

@@ -2,22 +2,25 @@ import { describe, expect, it } from "vitest";
 import { mkdtempSync, readFileSync, writeFileSync, statSync, existsSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
+import { fileURLToPath } from "node:url";
 import { runSuite } from "../../packages/bench/src/harness/run-suite.js";
-import { DEFAULT_PROBLEMS_DIR } from "../../packages/bench/src/problem/load-suite.js";
 import { evaluateMassing } from "@floorcast/sampler";
 import { chromiumAvailable, withOfflinePage } from "./offline-page.js";
+
+/** The repository's problem files (the build copies them into the bench package). */
+const PROBLEMS_DIR = fileURLToPath(new URL("../../datasets/problems/", import.meta.url));
 
 const hasChromium = chromiumAvailable();
 
 /** A tiny suite: the Larkspur fit problem (massing) and Forrester (test function), both in suite "tiny". */
 function tinySuite(): string {
   const dir = mkdtempSync(join(tmpdir(), "fc-suite-"));
-  const fit = JSON.parse(readFileSync(join(DEFAULT_PROBLEMS_DIR, "larkspur-fit-gfa.json"), "utf8"));
-  fit.scenario = join(DEFAULT_PROBLEMS_DIR, "../scenarios/larkspur-terraces.json");
+  const fit = JSON.parse(readFileSync(join(PROBLEMS_DIR, "larkspur-fit-gfa.json"), "utf8"));
+  fit.scenario = join(PROBLEMS_DIR, "../scenarios/larkspur-terraces.json");
   fit.suites = ["tiny"];
   fit.exact = { gridPoints: 11, refineEvaluations: 40 };
   writeFileSync(join(dir, "fit.json"), JSON.stringify(fit));
-  const fo = JSON.parse(readFileSync(join(DEFAULT_PROBLEMS_DIR, "standard-forrester.json"), "utf8"));
+  const fo = JSON.parse(readFileSync(join(PROBLEMS_DIR, "standard-forrester.json"), "utf8"));
   fo.suites = ["tiny"];
   fo.exact = { gridPoints: 101, refineEvaluations: 40 };
   writeFileSync(join(dir, "forrester.json"), JSON.stringify(fo));

@@ -2,13 +2,17 @@ import { describe, expect, it } from "vitest";
 import { mkdtempSync, writeFileSync, readFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
+import { fileURLToPath } from "node:url";
 import { loadProblem } from "../../packages/bench/src/problem/load-problem.js";
-import { loadSuite, DEFAULT_PROBLEMS_DIR } from "../../packages/bench/src/problem/load-suite.js";
+import { loadSuite } from "../../packages/bench/src/problem/load-suite.js";
 import { parseProblem } from "../../packages/bench/src/problem/parse-problem.js";
 import { findExactOptimum } from "../../packages/bench/src/harness/find-exact-optimum.js";
 import type { BenchProblem } from "../../packages/bench/src/problem/bench-problem.js";
 
-const scenarioPath = join(DEFAULT_PROBLEMS_DIR, "../scenarios/larkspur-terraces.json");
+/** The repository's problem files (the build copies them into the bench package). */
+const PROBLEMS_DIR = fileURLToPath(new URL("../../datasets/problems/", import.meta.url));
+
+const scenarioPath = join(PROBLEMS_DIR, "../scenarios/larkspur-terraces.json");
 
 function problemJson(overrides: Record<string, unknown> = {}): Record<string, unknown> {
   return {
@@ -98,7 +102,7 @@ async function cornersBest(p: BenchProblem): Promise<number> {
 }
 
 describe("the demo suite", async () => {
-  const demo = await loadSuite("demo");
+  const demo = await loadSuite("demo", PROBLEMS_DIR);
   it("has ≥ 3 single-objective, one two-objective (gfa vs openSpace) and one site-selection problem over ≥ 200 sites", () => {
     expect(demo.filter((p) => p.kind === "single").length).toBeGreaterThanOrEqual(3);
     const two = demo.filter((p) => p.kind === "two-objective");
@@ -139,7 +143,7 @@ describe("the demo suite", async () => {
 });
 
 describe("the quads suite (plate-stack benchmarks)", async () => {
-  const quads = await loadSuite("quads");
+  const quads = await loadSuite("quads", PROBLEMS_DIR);
   it("holds 5–6-variable single-objective problems over yards, height, floor height and coverage, with and without a sky plane", () => {
     expect(quads.length).toBeGreaterThanOrEqual(3);
     for (const p of quads) {
@@ -170,7 +174,7 @@ describe("the quads suite (plate-stack benchmarks)", async () => {
 });
 
 describe("the standard suite reaches the published optima (Virtual Library of Simulation Experiments)", async () => {
-  const standard = await loadSuite("standard");
+  const standard = await loadSuite("standard", PROBLEMS_DIR);
   const expected: Record<string, number> = {
     "standard-branin": 0.39788735772973816, // 5/(4π)
     "standard-forrester": -6.0207400558,
@@ -184,10 +188,10 @@ describe("the standard suite reaches the published optima (Virtual Library of Si
     });
   }
   it("an unknown suite is named with the known ones", async () => {
-    await expect(loadSuite("nope")).rejects.toThrow(/no problem .* suite "nope"; suites: demo, quads, standard/);
+    await expect(loadSuite("nope", PROBLEMS_DIR)).rejects.toThrow(/no problem .* suite "nope"; suites: demo, quads, standard/);
   });
   it("site lists are seeded: the same file gives the same parcels", async () => {
-    const file = join(DEFAULT_PROBLEMS_DIR, "larkspur-site-ranking.json");
+    const file = join(PROBLEMS_DIR, "larkspur-site-ranking.json");
     const a = await loadProblem(file);
     const b = parseProblem(JSON.parse(readFileSync(file, "utf8")), "x.json", (await import("@floorcast/sampler")).parseScenario(readFileSync(scenarioPath, "utf8"), "l.json"));
     expect(b.sites!.sites).toEqual(a.sites!.sites);

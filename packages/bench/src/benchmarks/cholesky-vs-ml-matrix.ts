@@ -5,6 +5,7 @@
  */
 import { CholeskyDecomposition, Matrix } from "ml-matrix";
 import { choleskyWithJitter } from "@floorcast/surrogate";
+import { FLOORCAST_CAUTION } from "../floorcast-caution.js";
 
 const sizes = process.argv.slice(2).map(Number).filter((n) => Number.isInteger(n) && n > 0);
 const ns = sizes.length ? sizes : [500, 1000];
@@ -49,3 +50,4 @@ for (const n of ns) {
   const t = median(theirs);
   console.log(`${String(n).padEnd(6)} ${o.toFixed(0).padStart(9)}   ${t.toFixed(0).padStart(9)}   ${(t / o).toFixed(2).padStart(21)}   ${diff.toExponential(1)}`);
 }
+console.log(`\n${FLOORCAST_CAUTION}`);

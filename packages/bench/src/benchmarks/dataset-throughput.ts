@@ -20,6 +20,7 @@ import {
   scenarioToMassingInput,
   writeDataset,
 } from "@floorcast/sampler";
+import { FLOORCAST_CAUTION } from "../floorcast-caution.js";
 
 const N = Number(process.env.FLOORCAST_BENCH_ROWS ?? "20000");
 const scenariosDir = fileURLToPath(new URL("../../../../datasets/scenarios/", import.meta.url));
@@ -80,3 +81,4 @@ for await (const line of createInterface({ input: process.stdin })) {
 } finally {
   rmSync(dir, { recursive: true, force: true });
 }
+console.log(`\n${FLOORCAST_CAUTION}`);

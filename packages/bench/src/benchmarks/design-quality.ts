@@ -12,6 +12,7 @@ import { existsSync } from "node:fs";
 import { fileURLToPath } from "node:url";
 import { centredL2Discrepancy, createDesign, minPairwiseDistance, phiP } from "@floorcast/sampler";
 import type { DesignKind } from "@floorcast/sampler";
+import { FLOORCAST_CAUTION } from "../floorcast-caution.js";
 
 const N = 500;
 const D = 12;
@@ -104,3 +105,4 @@ for (const [label, iterations] of [["default", undefined], [String(longRun), lon
       `(×${(big.minDist / start.minDist).toFixed(3)}), cd2 ${start.cd.toPrecision(4)} → ${big.cd.toPrecision(4)}`,
   );
 }
+console.log(`\n${FLOORCAST_CAUTION}`);

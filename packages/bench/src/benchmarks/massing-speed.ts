@@ -10,6 +10,7 @@ import seedrandom from "seedrandom";
 import { evaluateMassing, quadParcel } from "@floorcast/sampler";
 import type { MassingInput, Parcel } from "@floorcast/sampler";
 import { SIMPLE_LOT_FAMILIES, simpleLot } from "./simple-lot-families.js";
+import { FLOORCAST_CAUTION } from "../floorcast-caution.js";
 
 const AIM = 50_000;
 const NON_CONVEX_AIM = 20_000;
@@ -161,3 +162,4 @@ print(ncRows);
 process.stdout.write(
   `\nconvex ÷ non-convex (mixed, plain): ${(mixed.perSecond / mixedNc.perSecond).toFixed(1)}× — ${mixed.perSecond.toFixed(0)} vs ${mixedNc.perSecond.toFixed(0)} evaluations per CPU-second, side by side in this run\n`,
 );
+console.log(`\n${FLOORCAST_CAUTION}`);

@@ -17,6 +17,7 @@ import { projectedGradient } from "../optimise/projected-gradient.js";
 import { randomSearch } from "../optimise/random-search.js";
 import { branin } from "../problem/branin.js";
 import { sixHumpCamel } from "../problem/six-hump-camel.js";
+import { FLOORCAST_CAUTION } from "../floorcast-caution.js";
 
 const root = fileURLToPath(new URL("../../../../", import.meta.url));
 const [seedArg, budgetArg] = process.argv.slice(2).map(Number);
@@ -110,3 +111,4 @@ async function main(): Promise<void> {
 }
 
 await main();
+console.log(`\n${FLOORCAST_CAUTION}`);

@@ -4,6 +4,8 @@ import type { CommandContext } from "./command-context.js";
 import { EXIT_CODES } from "./exit-codes.js";
 import { UsageError } from "./usage-error.js";
 import { registerCommands } from "./register-commands.js";
+import { CLI_VERSION } from "./cli-version.js";
+import { requiredOptionsAfterUnknown } from "./required-options.js";
 
 
 /**
@@ -26,12 +28,14 @@ export async function main(argv: readonly string[], io?: Partial<CommandContext>
     .description(
       `Fast, validated surrogates of an exact floor-area (massing) calculation.\n${FLOORCAST_CAUTION}`,
     )
+    .version(CLI_VERSION, "-V, --version", "print the version of floorcast and exit")
     .exitOverride()
     .configureOutput({
       writeOut: (s) => ctx.stdout.write(s),
       writeErr: (s) => ctx.stderr.write(s),
     });
   await registerCommands(program, ctx, argv);
+  requiredOptionsAfterUnknown(program);
   try {
     await program.parseAsync(argv as string[]);
   } catch (error) {

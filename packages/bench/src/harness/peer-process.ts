@@ -5,12 +5,12 @@ import { fileURLToPath } from "node:url";
 
 /** Debian's interpreter, whose python3-sklearn and python3-scipy are the peers. */
 export const PEER_PYTHON = "/usr/bin/python3";
-/** The peer server script (tests/reference/peer_surrogates.py of the workspace). */
-export const PEER_SCRIPT = fileURLToPath(new URL("../../../../tests/reference/peer_surrogates.py", import.meta.url));
+/** The peer server script, shipped in the package (python/peer_surrogates.py). */
+export const PEER_SCRIPT = fileURLToPath(new URL("../../python/peer_surrogates.py", import.meta.url));
 
 /**
  * A running peer server: scikit-learn's GP and MLP and scipy's LHS behind a JSON-lines pipe
- * (tests/reference/peer_surrogates.py run with /usr/bin/python3). Requests are answered in order.
+ * (python/peer_surrogates.py of this package run with /usr/bin/python3). Requests are answered in order.
  */
 export class PeerProcess {
   private readonly child: ChildProcessWithoutNullStreams;

@@ -5,7 +5,7 @@ import type { BenchReport } from "./bench-report-types.js";
 import { BENCH_SURROGATES, benchPlans, type BenchSurrogate } from "./bench-plans.js";
 import { benchProgress } from "./bench-progress.js";
 import { benchSettings } from "./bench-settings.js";
-import { PeerProcess } from "./peer-process.js";
+import { PEER_PYTHON, PeerProcess } from "./peer-process.js";
 import { runBench } from "./run-bench.js";
 import { writeBenchReport } from "./write-bench-report.js";
 
@@ -19,7 +19,7 @@ export interface RunSuiteOptions {
   readonly out: string;
   /** Run the scikit-learn / scipy peers when present (default true). */
   readonly peers?: boolean;
-  /** Problems directory (default datasets/problems). */
+  /** Problems directory (default {@link DEFAULT_PROBLEMS_DIR}, the problems shipped with floorcast). */
   readonly problemsDir?: string;
   /** Progress messages (stderr). */
   readonly progress?: Writable;
@@ -46,7 +46,11 @@ export async function runSuite(options: RunSuiteOptions): Promise<{ report: Benc
   const settings = { ...benchSettings(options.quick, options.seeds), ...over };
   const peer = options.peers === false ? null : PeerProcess.start();
   const progress = options.progress ? benchProgress(options.progress) : null;
-  const notes = peer ? [] : ["Peers skipped: Debian's python3-sklearn and python3-scipy were not found (or were turned off)."];
+  const notes = peer
+    ? []
+    : options.peers === false
+      ? ["Peers skipped: turned off (--no-peers)."]
+      : [`Peers skipped: ${PEER_PYTHON} could not import Debian's python3-sklearn and python3-scipy.`];
   try {
     const report = await runBench({
       suite: options.suite,

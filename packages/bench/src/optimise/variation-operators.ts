@@ -7,7 +7,7 @@ export interface VariationSettings {
   readonly crossoverProbability: number;
   /** SBX distribution index ηc (default 15; larger keeps children nearer their parents). */
   readonly crossoverEta: number;
-  /** Per-variable mutation probability (default 1/dims). */
+  /** Per-variable mutation probability (default min(0.5, 1/dims)). */
   readonly mutationProbability: number;
   /** Polynomial mutation distribution index ηm (default 20). */
   readonly mutationEta: number;
@@ -158,7 +158,9 @@ export function variationSettings(
   return {
     crossoverProbability: prob("crossoverProbability", o.crossoverProbability, 0.9),
     crossoverEta: eta("crossoverEta", o.crossoverEta, 15),
-    mutationProbability: prob("mutationProbability", o.mutationProbability, 1 / dims),
+    // 1/dims (Deb et al. 2002), at most 0.5 as pymoo's Mutation.get_prob_var has it: with one
+    // variable, mutating every child would spread each one over the whole range and stall refinement.
+    mutationProbability: prob("mutationProbability", o.mutationProbability, Math.min(0.5, 1 / dims)),
     mutationEta: eta("mutationEta", o.mutationEta, 20),
   };
 }

@@ -4,8 +4,11 @@ import { fileURLToPath } from "node:url";
 import type { BenchProblem } from "./bench-problem.js";
 import { loadProblem } from "./load-problem.js";
 
-/** The problems directory shipped with floorcast (datasets/problems at the workspace root). */
-export const DEFAULT_PROBLEMS_DIR = fileURLToPath(new URL("../../../../datasets/problems/", import.meta.url));
+/**
+ * The problems directory shipped with floorcast: dist/demo/problems inside the installed package
+ * (a copy of the workspace's datasets/problems made by the build, with datasets/scenarios beside it).
+ */
+export const DEFAULT_PROBLEMS_DIR = fileURLToPath(new URL("../demo/problems/", import.meta.url));
 
 /**
  * Loads every problem file (*.json) of a directory that belongs to a suite, sorted by name.

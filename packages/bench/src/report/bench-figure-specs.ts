@@ -24,7 +24,14 @@ export function benchFigureSpecs(p: ProblemReport): BenchFigure[] {
   const trials = p.surrogateOptimum.map((r) => ({ surrogate: label(r.surrogate, r.sampler), n: r.trainingSize, gap: r.gap ?? 1, refined: r.refined?.gap ?? null }));
   const medians = p.summary.map((s) => ({ surrogate: label(s.surrogate, s.sampler), n: s.trainingSize, gap: s.medianGap }));
   const color = { field: "surrogate", type: "nominal", title: "surrogate" } as const;
-  const gapTitle = p.kind === "two-objective" ? "gap = 1 − hypervolume ratio" : "gap (fraction of the exact optimum)";
+  const gapTitle = p.kind === "two-objective" ? "hypervolume gap (1 − hypervolume ratio)" : "gap (share of the exact optimum)";
+  // At least a 1% span, so an all-zero figure still has a readable axis; sizes as categories and
+  // each surrogate dodged beside the others, so series with equal values stay visible.
+  const gaps = trials.map((t) => t.gap);
+  const domain: [number, number] = [Math.min(0, ...gaps), Math.max(0.01, ...gaps)];
+  const y = { field: "gap", type: "quantitative", title: gapTitle, axis: { format: ".1%" }, scale: { domain, nice: true } } as const;
+  const x = { field: "n", type: "ordinal", title: "training size (exact evaluations)", sort: "ascending" } as const;
+  const dodge = { field: "surrogate", type: "nominal" } as const;
   figs.push({
     id: "gap-vs-size",
     title: "Gap against training size",
@@ -33,11 +40,11 @@ export function benchFigureSpecs(p: ProblemReport): BenchFigure[] {
       width: 460,
       height: 260,
       layer: [
-        { data: { values: trials }, mark: { type: "circle", size: 40, opacity: 0.5 }, encoding: { x: { field: "n", type: "quantitative", scale: { type: "log" }, title: "training size (exact evaluations)" }, y: { field: "gap", type: "quantitative", title: gapTitle }, color } },
-        { data: { values: medians }, mark: { type: "line", point: true }, encoding: { x: { field: "n", type: "quantitative", scale: { type: "log" } }, y: { field: "gap", type: "quantitative" }, color } },
+        { data: { values: trials }, mark: { type: "circle", size: 40, opacity: 0.5 }, encoding: { x, xOffset: dodge, y, color } },
+        { data: { values: medians }, mark: { type: "point", filled: true, size: 90, shape: "diamond", opacity: 1 }, encoding: { x, xOffset: dodge, y, color } },
       ],
     },
-    caption: `Each dot is one trial (a surrogate, a training size, a seed): how much of the exact optimum the surrogate-driven design, re-evaluated exactly, lost; lines join the medians. Lower is better; 0 means the surrogate led to the exact optimum.`,
+    caption: `Each dot is one trial (a surrogate, a training size, a seed): how much of the exact optimum the surrogate-driven design, re-evaluated exactly, lost; diamonds mark the medians, and the surrogates stand side by side at each size. Lower is better; 0 means the surrogate led to the exact optimum.`,
   });
   if (p.evaluationsToTarget.length > 0) {
     const pts = p.evaluationsToTarget.flatMap((e) => e.curve.map(([n, g]) => ({ method: e.method, n, shortfall: Math.max(g, 1e-5) })));

@@ -8,7 +8,8 @@ import { benchFigureSpecs } from "./bench-figure-specs.js";
 import type { BenchReport, ProblemReport, SurrogateOptimumRecord } from "../harness/bench-report-types.js";
 import { fitRatio } from "../harness/fit-ratio.js";
 import { headlineTable } from "../harness/headline-table.js";
-import { massingDrawingSpec } from "./massing-drawing-spec.js";
+import { massingDrawingSpec, massingSectionTop } from "./massing-drawing-spec.js";
+import { formatDesign } from "../harness/format-design.js";
 import { formatPercent } from "../harness/format-percent.js";
 
 const pct = formatPercent;
@@ -24,7 +25,7 @@ function drawnTrial(p: ProblemReport): SurrogateOptimumRecord | undefined {
 async function problemSection(p: ProblemReport): Promise<PageSection> {
   const parts: string[] = [`<p>${escapeHtml(p.description)}</p>`];
   const e = p.exactOptimum;
-  parts.push(`<p>Exact optimum <strong>${escapeHtml(formatNumber(e.value, 6))}</strong> at <code>${escapeHtml(JSON.stringify(e.design))}</code>, found with ${e.evaluations} exact evaluations (grid of ${e.gridPoints} points per continuous variable, ${e.gridEvaluations} evaluations, then ${e.refineEvaluations} of refinement).</p>`);
+  parts.push(`<p>Exact optimum <strong>${escapeHtml(formatNumber(e.value, 6))}</strong> at <code>${escapeHtml(formatDesign(e.design))}</code>, found with ${e.evaluations} exact evaluations (grid of ${e.gridPoints} points per continuous variable, ${e.gridEvaluations} evaluations, then ${e.refineEvaluations} of refinement).</p>`);
   parts.push(
     htmlTable(
       ["surrogate", "sampler", "n", "trials", "median gap", "worst gap", "median refined", "worst refined", "fallbacks", "median R²", "exact evals", "fit time ÷ floorcast gp"],
@@ -40,9 +41,11 @@ async function problemSection(p: ProblemReport): Promise<PageSection> {
   const trial = drawnTrial(p);
   if (isMassing(e.input)) {
     parts.push("<h3>Plan and section of the optimal massing</h3>");
-    parts.push(await renderFigure(massingDrawingSpec(e.input, "exact optimum"), "The exact optimum: the parcel (solid), its yard lines (dashed: each lot line moved in by its setback), the ground-floor and top floor plates in plan, and every floor in section across the lot depth with the height limit (dashed red)."));
-    if (trial && isMassing(trial.input)) {
-      parts.push(await renderFigure(massingDrawingSpec(trial.input, `${trial.surrogate}-driven optimum (n = ${trial.trainingSize}, seed ${trial.seed})`), `The design the ${trial.surrogate} surrogate led to, re-evaluated exactly (gap ${pct(trial.gap)}; source: ${trial.source}). Compare with the exact optimum above.`));
+    const drawn = trial && isMassing(trial.input) ? trial.input : null;
+    const top = massingSectionTop(drawn ? [e.input, drawn] : [e.input]);
+    parts.push(await renderFigure(massingDrawingSpec(e.input, "exact optimum", top), "The exact optimum: the parcel (solid), its yard lines (dashed: each lot line moved in by its setback), the top floor plate (wide, orange) and the ground-floor plate over it (blue) in plan, and every floor in section across the lot depth with the height limit (dashed red); this section and the surrogate-driven one below share their height scale."));
+    if (trial && drawn) {
+      parts.push(await renderFigure(massingDrawingSpec(drawn, `${trial.surrogate}-driven optimum (n = ${trial.trainingSize}, seed ${trial.seed})`, top), `The design the ${trial.surrogate} surrogate led to, re-evaluated exactly (gap ${pct(trial.gap)}; source: ${trial.source}). Compare with the exact optimum above.`));
     }
   }
   if (p.notes.length > 0) parts.push(...p.notes.map((n) => `<p class="note">${escapeHtml(n)}</p>`));
@@ -61,8 +64,10 @@ export async function renderBenchHtml(report: BenchReport): Promise<string> {
   const intro: PageSection = {
     title: "Headline",
     html: [
-      "<p>Gap = (exact optimum − exact value at the surrogate-driven optimum) / |exact optimum|, signed so that a positive gap is a loss. Every design shown as an optimum was re-evaluated with the exact evaluator, and an exactly infeasible design is never reported: the harness falls back to the surrogate's next candidates, then to the best exactly feasible training design (counted as fallbacks). For two objectives the gap is 1 − the hypervolume ratio of the exactly re-evaluated surrogate front to the exact front. Each surrogate is shown at its largest training size.</p>",
+      "<p>Gap = (exact optimum − exact value at the surrogate-driven optimum) / |exact optimum|, signed so that a positive gap is a loss. Every design shown as an optimum was re-evaluated with the exact evaluator, and an exactly infeasible design is never reported: the harness falls back to the surrogate's next candidates, then to the best exactly feasible training design (counted as fallbacks). For two objectives the gap is 1 − the hypervolume ratio of the exactly re-evaluated surrogate front to the exact front (a hypervolume gap).</p>",
+      `<p>${escapeHtml(h.caption)}</p>`,
       htmlTable(h.header, h.rows),
+      ...h.notes.map((n) => `<p class="note">${escapeHtml(n)}</p>`),
     ].join("\n"),
   };
   const sections = [intro];

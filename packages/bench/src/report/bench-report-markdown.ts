@@ -1,6 +1,7 @@
 import type { BenchReport, ProblemReport } from "../harness/bench-report-types.js";
 import { fitRatio } from "../harness/fit-ratio.js";
 import { headlineTable } from "../harness/headline-table.js";
+import { formatDesign } from "../harness/format-design.js";
 import { formatPercent } from "../harness/format-percent.js";
 
 const cell = (s: string): string => s.replace(/\|/g, "\\|");
@@ -15,7 +16,7 @@ function problemSection(p: ProblemReport): string {
   const constraints = p.constraints.map((c) => `${c.output} ${c.op === "<=" ? "≤" : "≥"} ${c.value}`).join(", ") || "none";
   out.push(`- Problem \`${p.name}\` (${p.kind}): ${objective}; constraints: ${constraints}; variables: ${p.variables.join(", ")}.`);
   const e = p.exactOptimum;
-  out.push(`- Exact optimum: ${fmt(e.value)} at ${JSON.stringify(e.design)} — ${e.evaluations} exact evaluations (grid of ${e.gridPoints} points per continuous variable: ${e.gridEvaluations}; refinement: ${e.refineEvaluations}), ${fmt(e.seconds)} s.`);
+  out.push(`- Exact optimum: ${fmt(e.value)} at ${formatDesign(e.design)} — ${e.evaluations} exact evaluations (grid of ${e.gridPoints} points per continuous variable: ${e.gridEvaluations}; refinement: ${e.refineEvaluations}), ${fmt(e.seconds)} s.`);
   if (p.exactFront) out.push(`- Exact front: ${p.exactFront.points.length} points, hypervolume ${fmt(p.exactFront.hypervolume)} from reference ${JSON.stringify(p.exactFront.reference.map((v) => fmt(v)))}.`);
   out.push("", "### Gap by surrogate and training size", "");
   out.push(
@@ -51,10 +52,13 @@ export function renderBenchMarkdown(report: BenchReport): string {
     "",
     "Gap = (exact optimum − exact value at the surrogate-driven optimum) / |exact optimum| (for a minimised objective the sign is flipped, so a positive gap is always a loss). Every reported design was re-evaluated exactly; an exactly infeasible design is never reported. For two objectives the gap is 1 − (hypervolume of the exactly re-evaluated surrogate front / hypervolume of the exact front).",
     "",
-    "## Headline (largest training size per surrogate)",
+    "## Headline",
+    "",
+    h.caption,
     "",
     table(h.header, h.rows),
     "",
+    ...h.notes.flatMap((n) => [n, ""]),
     ...report.problems.map(problemSection).flatMap((s) => [s, ""]),
     `Run: ${report.environment.cpus} CPUs, Node ${report.environment.node}, peers ${report.environment.peers ? "present" : "absent"}, ${report.seconds.toFixed(1)} s in this process.`,
     "",

@@ -27,6 +27,19 @@ function yardLines(input: MassingInput): { id: string; x: number; y: number; k: 
   return out;
 }
 
+/** The plates' colours, the same in every layer: ground floor blue, top floor orange. */
+const PLATE_COLOR = { field: "id", type: "nominal", title: "plates", scale: { domain: ["ground floor", "top floor"], range: ["#2b6cb0", "#dd6b20"] } } as const;
+
+/**
+ * A common top for the section's height axis of drawings compared side by side: 8% above the
+ * tallest height limit or building among them.
+ * @param inputs - the massing inputs drawn.
+ * @returns the top in metres.
+ */
+export function massingSectionTop(inputs: readonly MassingInput[]): number {
+  return Math.max(...inputs.map((i) => Math.max(i.maxHeight, evaluateMassing(i).height))) * 1.08;
+}
+
 const ring = (id: string, pts: readonly Pt[]): { id: string; x: number; y: number; k: number }[] =>
   [...pts, pts[0]!].map((p, k) => ({ id, x: p[0], y: p[1], k }));
 
@@ -35,15 +48,21 @@ const ring = (id: string, pts: readonly Pt[]): { id: string; x: number; y: numbe
  * (`evaluateMassing(input, { plates: true })`): in plan the parcel, its yard lines (each lot line
  * moved in by its setback), the ground-floor plate and the top plate; in section (across the lot
  * depth) every floor as a band from its plate's front to its back edge, and the height limit.
+ * The parcel and yard lines are drawn first, then the top plate, wide and light, and the
+ * ground-floor plate over it, thin, so both outlines show where they coincide (with each other, and
+ * with a yard line when the yards alone shape the plate). Drawings meant to be compared share their section's vertical
+ * scale through `sectionTop` (see {@link massingSectionTop}).
  * @param input - the full massing input.
  * @param title - the drawing's title.
+ * @param sectionTop - top of the section's height axis in metres (default this massing's own).
  * @returns a Vega-Lite spec (two panels side by side).
  */
-export function massingDrawingSpec(input: MassingInput, title: string): TopLevelSpec {
+export function massingDrawingSpec(input: MassingInput, title: string, sectionTop = massingSectionTop([input])): TopLevelSpec {
   const r = evaluateMassing(input, { plates: true });
   const plates = r.plates ?? [];
   const lines = [...ring("parcel", input.parcel.vertices), ...yardLines(input)];
-  const fills = plates.length > 0 ? [...ring("ground floor", plates[0]!), ...(plates.length > 1 ? ring("top floor", plates[plates.length - 1]!) : [])] : [];
+  const ground = plates.length > 0 ? ring("ground floor", plates[0]!) : [];
+  const topPlate = plates.length > 1 ? ring("top floor", plates[plates.length - 1]!) : [];
   const xs = input.parcel.vertices.map((p) => p[0]);
   const ys = input.parcel.vertices.map((p) => p[1]);
   const span = Math.max(Math.max(...xs) - Math.min(...xs), Math.max(...ys) - Math.min(...ys));
@@ -59,7 +78,6 @@ export function massingDrawingSpec(input: MassingInput, title: string): TopLevel
     z0: k * input.floorHeight,
     z1: (k + 1) * input.floorHeight,
   }));
-  const top = Math.max(input.maxHeight, r.height) * 1.08;
   return {
     $schema: SCHEMA,
     title,
@@ -69,8 +87,9 @@ export function massingDrawingSpec(input: MassingInput, title: string): TopLevel
         width: size,
         height: size,
         layer: [
-          { data: { values: fills }, mark: { type: "line", strokeWidth: 2 }, encoding: { x: { field: "x", type: "quantitative", scale: { domain: dom(xs) }, title: "x (m)" }, y: { field: "y", type: "quantitative", scale: { domain: dom(ys) }, title: "y (m, front to rear)" }, detail: { field: "id" }, order: { field: "k" }, color: { field: "id", type: "nominal", title: "plates", scale: { range: ["#2b6cb0", "#c05621"] } } } },
-          { data: { values: lines }, mark: { type: "line", color: "#333" }, encoding: { x: { field: "x", type: "quantitative" }, y: { field: "y", type: "quantitative" }, detail: { field: "id" }, order: { field: "k" }, strokeDash: { condition: { test: "datum.id !== 'parcel'", value: [4, 3] }, value: [1, 0] } } },
+          { data: { values: lines }, mark: { type: "line", color: "#333" }, encoding: { x: { field: "x", type: "quantitative", scale: { domain: dom(xs) }, title: "x (m)" }, y: { field: "y", type: "quantitative", scale: { domain: dom(ys) }, title: "y (m, front to rear)" }, detail: { field: "id" }, order: { field: "k" }, strokeDash: { condition: { test: "datum.id !== 'parcel'", value: [4, 3] }, value: [1, 0] } } },
+          { data: { values: topPlate }, mark: { type: "line", strokeWidth: 6, opacity: 0.6 }, encoding: { x: { field: "x", type: "quantitative" }, y: { field: "y", type: "quantitative" }, detail: { field: "id" }, order: { field: "k" }, color: PLATE_COLOR } },
+          { data: { values: ground }, mark: { type: "line", strokeWidth: 2.5 }, encoding: { x: { field: "x", type: "quantitative" }, y: { field: "y", type: "quantitative" }, detail: { field: "id" }, order: { field: "k" }, color: PLATE_COLOR } },
         ],
       },
       {
@@ -78,7 +97,7 @@ export function massingDrawingSpec(input: MassingInput, title: string): TopLevel
         width: size,
         height: size,
         layer: [
-          { data: { values: bands }, mark: { type: "rect", color: "#90cdf4", stroke: "#2b6cb0" }, encoding: { x: { field: "y0", type: "quantitative", scale: { domain: [Math.min(...ys), Math.max(...ys)] }, title: "y (m, front to rear)" }, x2: { field: "y1" }, y: { field: "z0", type: "quantitative", scale: { domain: [0, top] }, title: "height (m)" }, y2: { field: "z1" } } },
+          { data: { values: bands }, mark: { type: "rect", color: "#90cdf4", stroke: "#2b6cb0" }, encoding: { x: { field: "y0", type: "quantitative", scale: { domain: [Math.min(...ys), Math.max(...ys)] }, title: "y (m, front to rear)" }, x2: { field: "y1" }, y: { field: "z0", type: "quantitative", scale: { domain: [0, sectionTop] }, title: "height (m)" }, y2: { field: "z1" } } },
           { data: { values: [{ h: input.maxHeight }] }, mark: { type: "rule", color: "#a33", strokeDash: [4, 4] }, encoding: { y: { field: "h", type: "quantitative" } } },
         ],
       },

@@ -1,10 +1,11 @@
-import * as tf from "@tensorflow/tfjs";
+import type * as Tf from "@tensorflow/tfjs";
+import { tf } from "./load-tfjs.js";
 import type { MlpActivation } from "../predict/mlp-payload.js";
 
 /** A dense layer's tensors. */
 export interface DenseTensors {
-  readonly w: tf.Tensor2D;
-  readonly b: tf.Tensor1D;
+  readonly w: Tf.Tensor2D;
+  readonly b: Tf.Tensor1D;
 }
 
 /**
@@ -13,10 +14,10 @@ export interface DenseTensors {
  * @param z - rows × inputs, inputs already mapped to [-1, 1].
  * @returns rows × targets in standardised units.
  */
-export function mlpForward(z: tf.Tensor2D, layers: readonly DenseTensors[], activation: MlpActivation): tf.Tensor2D {
-  let h: tf.Tensor2D = z;
+export function mlpForward(z: Tf.Tensor2D, layers: readonly DenseTensors[], activation: MlpActivation): Tf.Tensor2D {
+  let h: Tf.Tensor2D = z;
   layers.forEach((layer, l) => {
-    const a = tf.add(tf.matMul(h, layer.w), layer.b) as tf.Tensor2D;
+    const a = tf.add(tf.matMul(h, layer.w), layer.b) as Tf.Tensor2D;
     if (l === layers.length - 1) h = a;
     else if (activation === "relu") h = tf.relu(a);
     else if (activation === "tanh") h = tf.tanh(a);

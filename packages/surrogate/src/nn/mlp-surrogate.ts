@@ -1,4 +1,5 @@
-import * as tf from "@tensorflow/tfjs";
+import type * as Tf from "@tensorflow/tfjs";
+import { tf } from "./load-tfjs.js";
 import type { Prediction, Surrogate } from "../surrogate-types.js";
 import type { ModelFileShape } from "../predict/model-file-shape.js";
 import type { MlpPayload } from "../predict/mlp-payload.js";
@@ -101,8 +102,8 @@ export class MlpSurrogate implements Surrogate {
     return this.targets.map((_, j) =>
       tf.tidy(() => {
         const layers = this.#tensors();
-        const f = (z: tf.Tensor): tf.Scalar =>
-          tf.sum(tf.slice(mlpForward(z as tf.Tensor2D, layers, this.#file.payload.activation), [0, j], [1, 1]));
+        const f = (z: Tf.Tensor): Tf.Scalar =>
+          tf.sum(tf.slice(mlpForward(z as Tf.Tensor2D, layers, this.#file.payload.activation), [0, j], [1, 1]));
         const z = tf.tensor2d(this.#scaled([x]), [1, d]);
         const g = tf.grad(f)(z).dataSync();
         return Array.from({ length: d }, (_, k) => std[j]! * g[k]! * this.#scale[k]!);

@@ -1,5 +1,4 @@
-import * as tf from "@tensorflow/tfjs";
-import "@tensorflow/tfjs-backend-wasm";
+import { tf } from "./load-tfjs.js";
 
 /** A CPU backend for the neural-network surrogate: WebAssembly or plain JavaScript. Never a GPU. */
 export type NnBackend = "wasm" | "cpu";
@@ -47,7 +46,7 @@ export async function useNnBackend(request: NnBackendRequest = "auto"): Promise<
     ok = false;
   }
   if (ok && tf.getBackend() === "wasm") return "wasm";
-  if (request === "wasm") throw new Error("useNnBackend: the WebAssembly backend could not be initialised");
+  if (request === "wasm") throw new Error("useNnBackend: the WebAssembly backend could not be initialised (is @tensorflow/tfjs-backend-wasm installed?)");
   await tf.setBackend("cpu");
   await tf.ready();
   return "cpu";

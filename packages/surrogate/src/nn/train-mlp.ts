@@ -1,4 +1,5 @@
-import * as tf from "@tensorflow/tfjs";
+import type * as Tf from "@tensorflow/tfjs";
+import { tf } from "./load-tfjs.js";
 import seedrandom from "seedrandom";
 import { initWeights, type DenseParams } from "./init-weights.js";
 import { shuffleInPlace } from "../seeded-shuffle.js";
@@ -60,20 +61,20 @@ export function trainMlp(
   // tf.tidy disposes each variable's initial-value tensor and keeps the variable.
   const vars: DenseTensors[] = tf.tidy(() =>
     init.map((p) => ({
-      w: tf.variable(tf.tensor2d(p.weights, [p.shape[0], p.shape[1]])) as tf.Variable<tf.Rank.R2>,
-      b: tf.variable(tf.tensor1d(p.bias)) as tf.Variable<tf.Rank.R1>,
+      w: tf.variable(tf.tensor2d(p.weights, [p.shape[0], p.shape[1]])) as Tf.Variable<Tf.Rank.R2>,
+      b: tf.variable(tf.tensor1d(p.bias)) as Tf.Variable<Tf.Rank.R1>,
     })),
   );
-  const flat = vars.flatMap((v) => [v.w, v.b]) as tf.Variable[];
+  const flat = vars.flatMap((v) => [v.w, v.b]) as Tf.Variable[];
   // Adam's moments for all parameters in two flat variables: a dozen tensor ops per step instead of a dozen per parameter.
   const sizes = flat.map((v) => v.size);
   const total = sizes.reduce((a, b) => a + b, 0);
   const moments = tf.tidy(() => ({ m: tf.variable(tf.zeros([total])), v: tf.variable(tf.zeros([total])) }));
   // Mean squared error + (l2 / rows) Σ W², i.e. scikit-learn's ½ MSE + α/(2·rows) Σ W² doubled (same minimiser).
-  const loss = (x: tf.Tensor2D, y: tf.Tensor2D, rows: number): tf.Scalar => {
-    const mse = tf.mean(tf.squaredDifference(mlpForward(x, vars, o.activation), y)) as tf.Scalar;
+  const loss = (x: Tf.Tensor2D, y: Tf.Tensor2D, rows: number): Tf.Scalar => {
+    const mse = tf.mean(tf.squaredDifference(mlpForward(x, vars, o.activation), y)) as Tf.Scalar;
     if (o.l2 === 0) return mse;
-    return tf.add(mse, tf.mul(o.l2 / rows, tf.addN(vars.map((v) => tf.sum(tf.square(v.w)))))) as tf.Scalar;
+    return tf.add(mse, tf.mul(o.l2 / rows, tf.addN(vars.map((v) => tf.sum(tf.square(v.w)))))) as Tf.Scalar;
   };
 
   let lr = o.learningRate;

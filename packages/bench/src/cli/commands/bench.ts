@@ -30,7 +30,7 @@ export function registerBenchCommand(program: Command, ctx: CommandContext): voi
     .option("--seeds <k>", "seeds per training size (default 2 with --quick, else 3)")
     .option("--quick", "the demo's smaller training sizes and budgets")
     .option("--no-peers", "skip scikit-learn's GP/MLP and scipy's LHS even when present")
-    .option("--problems <dir>", "problems directory (default datasets/problems)")
+    .option("--problems <dir>", "problems directory (default: the demo and standard problems shipped with floorcast)")
     .requiredOption("--out <dir>", "output directory: report.json, report.md, report.html; finished problems under problems/ (re-run to resume)")
     .action(async (opts: BenchOptions) => {
       let seeds: number | undefined;

@@ -2,6 +2,7 @@ import type { Command } from "commander";
 import { writeFile } from "node:fs/promises";
 import { basename } from "node:path";
 import type { CommandContext } from "../command-context.js";
+import { STDIO_PATH, withTableFile } from "../stdio-table.js";
 import { UsageError } from "../usage-error.js";
 import { FLOORCAST_CAUTION } from "../../floorcast-caution.js";
 import { MODEL_FAMILIES } from "../../families/model-families.js";
@@ -37,7 +38,7 @@ export function registerFitCommand(program: Command, ctx: CommandContext): void 
   const cmd = program
     .command("fit")
     .description(`Fit a surrogate (${families}) to a CSV's input and target columns and write the model file`)
-    .requiredOption("--data <file.csv>", "training data with a header row")
+    .requiredOption("--data <file.csv>", "training data with a header row (- reads stdin)")
     .requiredOption("--inputs <a,b,...>", "input columns, comma-separated")
     .requiredOption("--target <col[,col2]>", "target column(s), comma-separated")
     .option("--model <family>", `model family (${families})`, "gp")
@@ -59,11 +60,14 @@ async function runFit(opts: FitCommandOptions, ctx: CommandContext): Promise<voi
   const clash = targets.find((t) => inputs.includes(t));
   if (clash) throw new UsageError(`fit: column ${clash} is both an input and a target`);
   const seed = parseWhole("fit", "--seed", opts.seed, 0);
-  const { text, rows } = await fitModelFile({ data: opts.data, inputs, targets, model: opts.model, seed, options: opts, say: (line) => ctx.stderr.write(`${line}\n`) });
+  // `-` is stdin, kept in a temporary file while the family reads it (plate-stack reads it twice).
+  const { text, rows } = await withTableFile(ctx, opts.data, (file) =>
+    fitModelFile({ data: file, inputs, targets, model: opts.model, seed, options: opts, say: (line) => ctx.stderr.write(`${line}\n`) }),
+  );
   try {
     await writeFile(opts.out, text);
   } catch (e) {
     throw new UsageError(`fit: cannot write ${opts.out} (${(e as Error).message})`);
   }
-  ctx.stdout.write(`fit: ${opts.model} on ${rows} rows of ${basename(opts.data)} → ${opts.out}\n${FLOORCAST_CAUTION}\n`);
+  ctx.stdout.write(`fit: ${opts.model} on ${rows} rows of ${opts.data === STDIO_PATH ? "stdin" : basename(opts.data)} → ${opts.out}\n${FLOORCAST_CAUTION}\n`);
 }

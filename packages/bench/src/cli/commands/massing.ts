@@ -7,6 +7,7 @@ import type { Command } from "commander";
 import { evaluateMassing } from "@floorcast/sampler";
 import type { CommandContext } from "../command-context.js";
 import { EXIT_CODES } from "../exit-codes.js";
+import { STDIO_PATH } from "../stdio-table.js";
 import { UsageError } from "../usage-error.js";
 
 interface MassingOptions {
@@ -35,7 +36,7 @@ function lineError(line: number, error: unknown): LineError {
 }
 
 async function openInput(ctx: CommandContext, file: string | undefined): Promise<Readable> {
-  if (file === undefined) return ctx.stdin;
+  if (file === undefined || file === STDIO_PATH) return ctx.stdin;
   try {
     await access(file, constants.R_OK);
     if (!(await stat(file)).isFile()) throw new Error("not a file");
@@ -61,7 +62,7 @@ export function registerMassingCommand(program: Command, ctx: CommandContext): v
       "Evaluate the exact massing rule on JSON Lines of massing inputs (one result line per input line). " +
         "Estimates for early feasibility studies, not a zoning determination.",
     )
-    .option("--input <file>", "read JSON Lines from this file instead of stdin")
+    .option("--input <file>", "read JSON Lines from this file instead of stdin (- is stdin)")
     .option("--plates", "include the floor plates (polygons, floor by floor) in each result")
     .action(async (opts: MassingOptions) => {
       const source = await openInput(ctx, opts.input);

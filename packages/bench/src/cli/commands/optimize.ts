@@ -2,7 +2,7 @@ import { mkdir, readFile, writeFile } from "node:fs/promises";
 import { join } from "node:path";
 import type { Command } from "commander";
 import cliProgress from "cli-progress";
-import { loadSurrogate } from "@floorcast/surrogate";
+import { loadSurrogate, type Surrogate } from "@floorcast/surrogate";
 import { checkSchemaMatch } from "@floorcast/sampler";
 import type { CommandContext } from "../command-context.js";
 import { UsageError } from "../usage-error.js";
@@ -11,6 +11,9 @@ import { exactEvaluator } from "../../harness/exact-evaluator.js";
 import { surrogateEvaluator } from "../../harness/surrogate-evaluator.js";
 import { reevaluateSurrogateOptimum } from "../../harness/reevaluate-surrogate-optimum.js";
 import { reportDesign } from "../../harness/report-design.js";
+import { formatDesign } from "../../harness/format-design.js";
+import { surrogateAtOptimum, type SurrogateAtOptimum } from "../../harness/surrogate-at-optimum.js";
+import type { ReportedDesign } from "../../harness/bench-report-types.js";
 import { OPTIMIZER_NAMES, runOptimizer, type OptimizerName } from "../../harness/run-optimizer.js";
 import { optimizerNamed } from "../../optimise/optimizers.js";
 import { FLOORCAST_CAUTION } from "../../floorcast-caution.js";
@@ -63,6 +66,7 @@ export function registerOptimizeCommand(program: Command, ctx: CommandContext): 
         }
         const exact = exactEvaluator(problem);
         let evaluator = exact as Parameters<typeof runOptimizer>[2];
+        let surrogate: { readonly model: Surrogate; readonly variables: typeof problem.trainingVariables } | null = null;
         if (opts.surrogate !== undefined) {
           let text: string;
           try {
@@ -81,7 +85,9 @@ export function registerOptimizeCommand(program: Command, ctx: CommandContext): 
           const missing = problem.outputs.filter((o) => !model.targets.includes(o));
           if (missing.length > 0) throw new UsageError(`optimize: ${opts.surrogate} does not predict ${missing.join(", ")}, which ${problem.name} needs`);
           // rows in the model's input order (names match; another order is fine), categoricals in the model-row coding
-          evaluator = surrogateEvaluator(model, model.inputs.map((n) => problem.trainingVariables.find((v) => v.name === n)!));
+          const variables = model.inputs.map((n) => problem.trainingVariables.find((v) => v.name === n)!);
+          evaluator = surrogateEvaluator(model, variables);
+          surrogate = { model, variables };
         }
         const t0 = performance.now();
         const tty = (ctx.stderr as { isTTY?: boolean }).isTTY === true;
@@ -100,7 +106,7 @@ export function registerOptimizeCommand(program: Command, ctx: CommandContext): 
         bar?.stop();
         const seconds = (performance.now() - t0) / 1000;
         const op = problem.optimisation;
-        let designs;
+        let designs: (ReportedDesign & { readonly surrogate?: SurrogateAtOptimum })[];
         let source = "exact";
         let exactEvaluations = opts.exact ? result.evaluations : 0;
         if (problem.kind === "two-objective") {
@@ -118,6 +124,13 @@ export function registerOptimizeCommand(program: Command, ctx: CommandContext): 
           exactEvaluations += chosen.evaluations;
           source = chosen.source;
           designs = chosen.exact ? [reportDesign(problem, chosen.exact)] : [];
+        }
+        if (surrogate !== null) {
+          const { model, variables } = surrogate;
+          designs = designs.map((d) => ({
+            ...d,
+            surrogate: surrogateAtOptimum(model, variables, d.design, d.result as Record<string, number>, problem.outputs),
+          }));
         }
         await mkdir(opts.out, { recursive: true });
         const file = join(opts.out, "optimum.json");
@@ -140,7 +153,17 @@ export function registerOptimizeCommand(program: Command, ctx: CommandContext): 
           ctx.stderr.write(`optimize: no exactly feasible design found for ${problem.name}\n`);
           ctx.setExitCode(1);
         }
-        for (const d of designs.slice(0, 10)) ctx.stdout.write(`${op.objectives.map((o) => `${o.output}=${Number(((d.result as Record<string, number>)[o.output] ?? NaN).toPrecision(6))}`).join(" ")}  ${JSON.stringify(d.design)}\n`);
+        const g6 = (v: number | undefined): number => Number((v ?? NaN).toPrecision(6));
+        for (const d of designs.slice(0, 10)) {
+          ctx.stdout.write(`${op.objectives.map((o) => `${o.output}=${g6((d.result as Record<string, number>)[o.output])}`).join(" ")}  ${formatDesign(d.design)}\n`);
+          const at = d.surrogate;
+          if (at && designs.length === 1) {
+            for (const k of Object.keys(at.mean)) {
+              const sd = at.sd ? ` ± ${g6(at.sd[k])}` : "";
+              ctx.stdout.write(`  surrogate ${k}=${g6(at.mean[k])}${sd} (exact ${g6(at.exact[k])}, exact − surrogate ${g6(at.difference[k])})\n`);
+            }
+          }
+        }
         if (designs.length > 10) ctx.stdout.write(`… ${designs.length - 10} more front points in ${file}\n`);
         ctx.stdout.write(`${result.method}: ${result.evaluations} evaluations (${exactEvaluations} exact), ${seconds.toFixed(2)} s; written ${file}\n${FLOORCAST_CAUTION}\n`);
       } finally {

@@ -1,7 +1,7 @@
 import type { Command } from "commander";
 import { readFile } from "node:fs/promises";
 import { basename } from "node:path";
-import { checkSchemaRows, createCsvWriter, readTable } from "@floorcast/sampler";
+import { checkSchemaRows, createCsvWriter, openTableStream, readTable, type CsvValue } from "@floorcast/sampler";
 import { buildValidityDomain, domainOfModel, loadSurrogate } from "@floorcast/surrogate";
 import type { CommandContext } from "../command-context.js";
 import { UsageError } from "../usage-error.js";
@@ -9,6 +9,7 @@ import { refuseOutsideDomain } from "../refuse-outside-domain.js";
 import { noteUnsealedModel } from "../note-unsealed-model.js";
 import { modelInputSchema } from "../model-input-schema.js";
 import { FLOORCAST_CAUTION } from "../../floorcast-caution.js";
+import { STDIO_PATH, readTableArg, stdoutSink, withTableFile } from "../stdio-table.js";
 
 interface PredictOptions {
   model: string;
@@ -16,14 +17,16 @@ interface PredictOptions {
   out: string;
   train?: string;
   strict?: boolean;
+  keep?: string;
 }
 
 /**
  * `floorcast predict`: predictions of a saved surrogate for every row of a CSV, in the rows' order, as
  * `<target>_mean` and `<target>_sd` columns (sd empty for a model without uncertainty; conformal files add
  * `<target>_lower` and `<target>_upper`, the interval with the file's coverage), and `in_domain`
- * (1 inside the model's domain of validity, 0 outside, empty when no domain is known; see checkDomain).
- * `--strict` refuses rows outside the domain instead.
+ * (1 inside the model's domain of validity, 0 outside, empty when no domain is known; see checkDomain),
+ * after the data's own columns (all of them, or the `--keep` list). `--strict` refuses rows outside the
+ * domain instead. `-` reads the data from stdin or writes the predictions to stdout.
  * @param program - the root command.
  * @param ctx - the streams and exit status.
  */
@@ -32,8 +35,9 @@ export function registerPredictCommand(program: Command, ctx: CommandContext): v
     .command("predict")
     .description("Predict with a saved surrogate: <target>_mean and <target>_sd for every row of a CSV, in order")
     .requiredOption("--model <model.json>", "model file written by `floorcast fit`")
-    .requiredOption("--data <file.csv>", "rows to predict, with the model's input columns")
-    .requiredOption("--out <predictions.csv>", "CSV to write")
+    .requiredOption("--data <file.csv>", "rows to predict, with the model's input columns (- reads stdin)")
+    .requiredOption("--out <predictions.csv>", "CSV to write (- writes stdout)")
+    .option("--keep <columns>", "data columns to copy before the predictions, comma-separated (default all; \"\" for none)")
     .option("--train <train.csv>", "the model's training data, for the in_domain flag of models that do not store their inputs")
     .option("--strict", "refuse (exit 2, nothing written) when rows lie outside the model's domain of validity")
     .action(async (opts: PredictOptions) => {
@@ -50,10 +54,20 @@ async function runPredict(opts: PredictOptions, ctx: CommandContext): Promise<vo
   }
   const model = loadSurrogate(text, basename(opts.model));
   noteUnsealedModel("predict", basename(opts.model), text, ctx);
+  if (opts.data === STDIO_PATH && opts.train === STDIO_PATH) throw new UsageError("predict: only one of --data and --train can read stdin (-)");
+  const inputs = [...model.inputs];
+  const keepList = opts.keep?.split(",").map((c) => c.trim()).filter((c) => c !== "");
+  // Kept columns other than the inputs are read as text and copied verbatim.
+  const table = await withTableFile(ctx, opts.data, async (file) => {
+    const head = await openTableStream(file, { columns: [] });
+    head.close();
+    const keep = keepList ?? head.header;
+    return readTable(file, { inputs, targets: [], categorical: keep.filter((c) => !inputs.includes(c)) });
+  });
+  const keep = keepList ?? table.header;
   const schema = modelInputSchema("predict", basename(opts.model), text);
-  const table = await readTable(opts.data, { inputs: [...model.inputs], targets: [] });
-  if (schema) checkSchemaRows(schema, table.x, "predict", basename(opts.data));
-  const trainX = opts.train ? (await readTable(opts.train, { inputs: [...model.inputs], targets: [] })).x : null;
+  if (schema) checkSchemaRows(schema, table.x, "predict", opts.data === STDIO_PATH ? "stdin" : basename(opts.data));
+  const trainX = opts.train ? (await readTableArg(ctx, opts.train, { inputs, targets: [] })).x : null;
   const domain = trainX ? buildValidityDomain(model.inputs, trainX) : domainOfModel(model);
   if (!domain) {
     if (opts.strict) throw new UsageError("predict: --strict needs a domain of validity: give --train (this model file stores no training inputs)");
@@ -62,13 +76,24 @@ async function runPredict(opts: PredictOptions, ctx: CommandContext): Promise<vo
   const flags = domain ? refuseOutsideDomain("predict", domain, table.x, opts.data, opts.strict === true) : null;
   const p = model.predict(table.x);
   const iv = p.interval;
-  const columns = [
+  const predicted = [
     ...model.targets.flatMap((t) => [`${t}_mean`, `${t}_sd`, ...(iv ? [`${t}_lower`, `${t}_upper`] : [])]),
     "in_domain",
   ];
-  const writer = createCsvWriter(opts.out, columns);
+  const clash = keep.filter((c) => predicted.includes(c));
+  if (clash.length > 0) throw new UsageError(`predict: kept column ${clash.join(", ")} has the name of a prediction column; choose others with --keep`);
+  const kept: ((i: number) => CsvValue)[] = keep.map((c) => {
+    const j = inputs.indexOf(c);
+    if (j >= 0) return (i) => table.x[i]![j]!;
+    const text = table.categorical[c]!;
+    return (i) => text[i]!;
+  });
+  const columns = [...keep, ...predicted];
+  const toStdout = opts.out === STDIO_PATH;
+  const writer = createCsvWriter(toStdout ? stdoutSink(ctx.stdout) : opts.out, columns);
   for (let i = 0; i < table.x.length; i++) {
     await writer.write([
+      ...kept.map((value) => value(i)),
       ...model.targets.flatMap((_, j) => [
         p.mean[i]![j]!,
         p.sd ? p.sd[i]![j]! : "",
@@ -78,8 +103,8 @@ async function runPredict(opts: PredictOptions, ctx: CommandContext): Promise<vo
     ]);
   }
   await writer.close();
-  ctx.stdout.write(
-    `predict: ${table.x.length} rows of ${basename(opts.data)} → ${opts.out}` +
+  (toStdout ? ctx.stderr : ctx.stdout).write(
+    `predict: ${table.x.length} rows of ${opts.data === STDIO_PATH ? "stdin" : basename(opts.data)} → ${toStdout ? "stdout" : opts.out}` +
       (flags ? `; ${flags.filter((f) => !f).length} outside the domain of validity (in_domain = 0)\n` : "\n") +
       `${FLOORCAST_CAUTION}\n`,
   );
