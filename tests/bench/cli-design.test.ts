@@ -32,7 +32,7 @@ describe("floorcast design", () => {
     writeFileSync(out, "precious\n");
     const r = await run(["design", "--n", "4", "--dims", "2", "--design", "lhs", "--seed", "1", "--out", out]);
     expect(r.code).toBe(2);
-    expect(r.err).toMatch(/exists; pass --force/);
+    expect(r.err).toMatch(/already exists; use --force/);
     expect(readFileSync(out, "utf8")).toBe("precious\n");
     const forced = await run(["design", "--n", "4", "--dims", "2", "--design", "lhs", "--seed", "1", "--out", out, "--force"]);
     expect(forced.code).toBe(0);

@@ -86,7 +86,7 @@ describe("runSuite: report.json structure, resume", () => {
     const stamp = statSync(join(out, "problems", "larkspur-fit-gfa.json")).mtimeMs;
     const states: string[] = [];
     const progress = { write: (s: string) => (states.push(s), true) } as unknown as NodeJS.WritableStream;
-    const { report } = await runSuite({ suite: "tiny", quick: true, out, peers: false, problemsDir, overrides, progress: progress as never });
+    const { report } = await runSuite({ suite: "tiny", quick: true, out, force: true, peers: false, problemsDir, overrides, progress: progress as never });
     expect(states.filter((s) => /already finished/.test(s)).length).toBe(2);
     expect(statSync(join(out, "problems", "larkspur-fit-gfa.json")).mtimeMs).toBe(stamp);
     expect(report.problems[0]!.surrogateOptimum[0]!.gap).toBeDefined();
@@ -96,11 +96,11 @@ describe("runSuite: report.json structure, resume", () => {
     unlinkSync(join(out, "problems", "standard-forrester.json"));
     const lines: string[] = [];
     const progress = { write: (s: string) => (lines.push(s), true) };
-    await runSuite({ suite: "tiny", quick: true, out, peers: false, problemsDir, overrides, progress: progress as never });
+    await runSuite({ suite: "tiny", quick: true, out, force: true, peers: false, problemsDir, overrides, progress: progress as never });
     expect(lines.filter((s) => /already finished/.test(s)).length).toBe(1);
     expect(existsSync(join(out, "problems", "standard-forrester.json"))).toBe(true);
     const other: string[] = [];
-    await runSuite({ suite: "tiny", quick: true, out, peers: false, problemsDir, overrides: { ...overrides, refineBudget: 6 }, problem: "standard-forrester", progress: { write: (s: string) => (other.push(s), true) } as never });
+    await runSuite({ suite: "tiny", quick: true, out, force: true, peers: false, problemsDir, overrides: { ...overrides, refineBudget: 6 }, problem: "standard-forrester", progress: { write: (s: string) => (other.push(s), true) } as never });
     expect(other.filter((s) => /already finished/.test(s)).length).toBe(0);
   });
   it("names an unknown problem", async () => {

@@ -62,6 +62,12 @@ export type { DatasetManifest } from "./dataset/dataset-manifest.js";
 export { sha256File } from "./dataset/sha256-file.js";
 export { recoverPartial } from "./dataset/recover-partial.js";
 export type { RecoveredPartial } from "./dataset/recover-partial.js";
+export { claimOutput } from "./output/claim-output.js";
+export type { ClaimedOutput, ClaimOutputOptions, OutputDigest } from "./output/claim-output.js";
+export { checkOutputPath } from "./output/check-output-path.js";
+export type { CheckOutputOptions } from "./output/check-output-path.js";
+export { acquireOutputLock, lockPathFor } from "./output/output-lock.js";
+export { writeFileAtomically } from "./output/write-file-atomically.js";
 export { createProgressBar } from "./dataset/progress-bar.js";
 export type { ProgressBar } from "./dataset/progress-bar.js";
 export type {

@@ -1,4 +1,5 @@
 import { Command, CommanderError } from "commander";
+import { claimOutput, type ClaimedOutput } from "@floorcast/sampler";
 import type { CommandContext } from "./command-context.js";
 import { EXIT_CODES } from "./exit-codes.js";
 import { UsageError } from "./usage-error.js";
@@ -15,12 +16,19 @@ const CAUTION =
  */
 export async function main(argv: readonly string[], io?: Partial<CommandContext>): Promise<number> {
   let exitCode: number = EXIT_CODES.success;
+  const claims: ClaimedOutput[] = [];
   const ctx: CommandContext = {
     stdin: io?.stdin ?? process.stdin,
     stdout: io?.stdout ?? process.stdout,
     stderr: io?.stderr ?? process.stderr,
     setExitCode(code: number) {
       exitCode = Math.max(exitCode, code);
+    },
+    async claimOutput(command, paths, options) {
+      const inputs = (options.inputs ?? []).filter((p): p is string => p !== undefined);
+      const claim = await claimOutput(paths, { fn: command, force: options.force === true, inputs });
+      claims.push(claim);
+      return claim;
     },
   };
   const program = new Command("floorcast")
@@ -46,6 +54,8 @@ export async function main(argv: readonly string[], io?: Partial<CommandContext>
     }
     ctx.stderr.write(`floorcast: ${error instanceof Error ? error.message : String(error)}\n`);
     return EXIT_CODES.someFailed;
+  } finally {
+    await Promise.all(claims.map((c) => c.release()));
   }
   return exitCode;
 }

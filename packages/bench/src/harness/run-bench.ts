@@ -1,5 +1,6 @@
 import { createHash } from "node:crypto";
-import { mkdir, readFile, rename, writeFile } from "node:fs/promises";
+import { mkdir, readFile } from "node:fs/promises";
+import { writeFileAtomically } from "@floorcast/sampler";
 import { join } from "node:path";
 import { cpus } from "node:os";
 import type { BenchProblem } from "../problem/bench-problem.js";
@@ -65,9 +66,7 @@ export async function runBench(options: RunBenchOptions): Promise<BenchReport> {
     }
     options.onProblem?.(problem, "start", i, total);
     const report = await runProblem(problem, await options.plan(problem));
-    const tmp = `${file}.partial`;
-    await writeFile(tmp, JSON.stringify({ fingerprint: key, report }));
-    await rename(tmp, file);
+    await writeFileAtomically(file, JSON.stringify({ fingerprint: key, report }));
     reports.push(report);
     options.onProblem?.(problem, "done", i, total);
   }

@@ -17,10 +17,11 @@ export function registerDemoCommand(program: Command, ctx: CommandContext): void
     .description("Run the Quillmere demo suite end to end (sample, fit GP and NN, assess, optimise, report) in a few minutes")
     .option("--out <dir>", "output directory", "floorcast-demo")
     .option("--no-peers", "skip scikit-learn's GP/MLP and scipy's LHS even when present")
-    .action(async (opts: { out: string; peers: boolean }) => {
+    .option("--force", "replace the report files of an earlier demo in --out")
+    .action(async (opts: { out: string; peers: boolean; force?: boolean }) => {
       const t0 = performance.now();
       ctx.stderr.write(`floorcast demo: the Quillmere demo suite, quick sizes. ${BENCH_CAUTION}\n`);
-      const { report, paths } = await runSuite({ suite: "demo", quick: true, out: opts.out, peers: opts.peers, progress: ctx.stderr });
+      const { report, paths } = await runSuite({ suite: "demo", quick: true, out: opts.out, force: opts.force === true, peers: opts.peers, progress: ctx.stderr });
       const seconds = (performance.now() - t0) / 1000;
       ctx.stdout.write(`\n${formatTextTable(headlineTable(report))}\n\n`);
       ctx.stdout.write("gap = share of the exact optimum lost by optimising on the surrogate (design re-evaluated exactly); refined = after 20 exact refinement evaluations.\n");

@@ -1,5 +1,4 @@
 import type { Command } from "commander";
-import { writeFile } from "node:fs/promises";
 import { basename } from "node:path";
 import { readTable } from "@floorcast/sampler";
 import { KERNEL_NAMES, fitGaussianProcess, type KernelName, type Surrogate, type TrainingData } from "@floorcast/surrogate";
@@ -17,6 +16,7 @@ type FitOptions = Record<string, string | boolean | undefined> & {
   model: string;
   seed: string;
   out: string;
+  force?: boolean;
 };
 
 /** Fits one model family from the parsed options; `say` prints notes (warnings) to stderr. */
@@ -91,7 +91,8 @@ export function registerFitCommand(program: Command, ctx: CommandContext): void 
     .requiredOption("--target <col[,col2]>", "target column(s), comma-separated")
     .option("--model <family>", `model family (${familyNames()})`, "gp")
     .option("--seed <n>", "seed of every random choice", "0")
-    .requiredOption("--out <model.json>", "model file to write");
+    .requiredOption("--out <model.json>", "model file to write")
+    .option("--force", "replace an existing output file");
   addGpOptions(cmd);
   addNnOptions(cmd);
   addUncertaintyOptions(cmd);
@@ -109,16 +110,14 @@ async function runFit(opts: FitOptions, ctx: CommandContext): Promise<void> {
   const clash = targets.find((t) => inputs.includes(t));
   if (clash) throw new UsageError(`fit: column ${clash} is both an input and a target`);
   const seed = integer("--seed", opts.seed, 0);
+  const claim = await ctx.claimOutput("fit", opts.out, { force: opts.force, inputs: [opts.data] });
   const table = await readTable(opts.data, { inputs, targets });
   const data: TrainingData = { inputs, targets, x: table.x, y: table.y };
   const say = (line: string): void => void ctx.stderr.write(`${line}\n`);
   const model = fitter
     ? await fitter(data, opts, seed, say)
     : await fitPlateStackCsv(opts.data, inputs, targets, opts, seed, (d, s) => fitNn(d, { ...opts, epochs: opts.epochs }, s, say));
-  try {
-    await writeFile(opts.out, `${JSON.stringify(model.toJSON())}\n`);
-  } catch (e) {
-    throw new UsageError(`fit: cannot write ${opts.out} (${(e as Error).message})`);
-  }
+  await claim.put(opts.out, `${JSON.stringify(model.toJSON())}\n`);
+  await claim.commit();
   ctx.stdout.write(`fit: ${opts.model} on ${data.x.length} rows of ${basename(opts.data)} → ${opts.out}\n${CAUTION}\n`);
 }

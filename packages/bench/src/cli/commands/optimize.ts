@@ -1,4 +1,4 @@
-import { mkdir, readFile, writeFile } from "node:fs/promises";
+import { mkdir, readFile } from "node:fs/promises";
 import { join } from "node:path";
 import type { Command } from "commander";
 import cliProgress from "cli-progress";
@@ -22,6 +22,7 @@ interface OptimizeOptions {
   seed: string;
   budget: string;
   out: string;
+  force?: boolean;
 }
 
 const whole = (flag: string, v: string, min: number): number => {
@@ -46,10 +47,14 @@ export function registerOptimizeCommand(program: Command, ctx: CommandContext): 
     .option("--seed <s>", "seed of every random draw", "1")
     .option("--budget <n>", "evaluations allowed (grid: its own count)", "2000")
     .requiredOption("--out <dir>", "output directory (optimum.json)")
+    .option("--force", "replace an existing optimum.json")
     .action(async (opts: OptimizeOptions) => {
       if ((opts.surrogate === undefined) === (opts.exact !== true)) throw new UsageError("optimize: give exactly one of --surrogate FILE or --exact");
       const seed = whole("--seed", opts.seed, 0);
       const budget = whole("--budget", opts.budget, 1);
+      await mkdir(opts.out, { recursive: true });
+      const file = join(opts.out, "optimum.json");
+      const claim = await ctx.claimOutput("optimize", file, { force: opts.force, inputs: [opts.problem, opts.surrogate] });
       const problem = await loadProblem(opts.problem);
       if (problem.kind === "site-selection") throw new UsageError(`optimize: ${problem.name} is a site-selection problem; rank its sites with floorcast bench`);
       const name = (opts.optimizer ?? (problem.kind === "two-objective" ? "nsga2" : "ga")) as OptimizerName;
@@ -112,8 +117,6 @@ export function registerOptimizeCommand(program: Command, ctx: CommandContext): 
         source = chosen.source;
         designs = chosen.exact ? [reportDesign(problem, chosen.exact)] : [];
       }
-      await mkdir(opts.out, { recursive: true });
-      const file = join(opts.out, "optimum.json");
       const summary = {
         kind: "floorcast.optimum",
         formatVersion: 1,
@@ -128,7 +131,8 @@ export function registerOptimizeCommand(program: Command, ctx: CommandContext): 
         seconds,
         optima: designs,
       };
-      await writeFile(file, `${JSON.stringify(summary, null, 1)}\n`);
+      await claim.put(file, `${JSON.stringify(summary, null, 1)}\n`);
+      await claim.commit();
       if (designs.length === 0) {
         ctx.stderr.write(`optimize: no exactly feasible design found for ${problem.name}\n`);
         ctx.setExitCode(1);

@@ -14,6 +14,7 @@ interface PredictOptions {
   out: string;
   train?: string;
   strict?: boolean;
+  force?: boolean;
 }
 
 /**
@@ -32,6 +33,7 @@ export function registerPredictCommand(program: Command, ctx: CommandContext): v
     .requiredOption("--model <model.json>", "model file written by `floorcast fit`")
     .requiredOption("--data <file.csv>", "rows to predict, with the model's input columns")
     .requiredOption("--out <predictions.csv>", "CSV to write")
+    .option("--force", "replace an existing output file")
     .option("--train <train.csv>", "the model's training data, for the in_domain flag of models that do not store their inputs")
     .option("--strict", "refuse (exit 2, nothing written) when rows lie outside the model's domain of validity")
     .action(async (opts: PredictOptions) => {
@@ -40,6 +42,7 @@ export function registerPredictCommand(program: Command, ctx: CommandContext): v
 }
 
 async function runPredict(opts: PredictOptions, ctx: CommandContext): Promise<void> {
+  const claim = await ctx.claimOutput("predict", opts.out, { force: opts.force, inputs: [opts.model, opts.data, opts.train] });
   let text: string;
   try {
     text = await readFile(opts.model, "utf8");
@@ -62,7 +65,7 @@ async function runPredict(opts: PredictOptions, ctx: CommandContext): Promise<vo
     ...model.targets.flatMap((t) => [`${t}_mean`, `${t}_sd`, ...(iv ? [`${t}_lower`, `${t}_upper`] : [])]),
     "in_domain",
   ];
-  const writer = createCsvWriter(opts.out, columns);
+  const writer = createCsvWriter(claim.temporary(opts.out), columns);
   for (let i = 0; i < table.x.length; i++) {
     await writer.write([
       ...model.targets.flatMap((_, j) => [
@@ -74,6 +77,7 @@ async function runPredict(opts: PredictOptions, ctx: CommandContext): Promise<vo
     ]);
   }
   await writer.close();
+  await claim.commit();
   ctx.stdout.write(
     `predict: ${table.x.length} rows of ${basename(opts.data)} → ${opts.out}` +
       (flags ? `; ${flags.filter((f) => !f).length} outside the domain of validity (in_domain = 0)\n` : "\n") +

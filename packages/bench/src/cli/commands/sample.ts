@@ -108,6 +108,7 @@ export function registerSampleCommand(program: Command, ctx: CommandContext): vo
           ...(shard === undefined ? {} : { shard }),
           resume: opts.resume === true,
           force: opts.force === true,
+          inputs: [opts.scenario],
           ...(evaluator === undefined ? {} : { evaluator }),
           onProgress: (done, total) => {
             bar ??= createProgressBar(ctx.stderr, total, `sample ${scenario.name}`);
