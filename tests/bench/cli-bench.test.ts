@@ -123,5 +123,5 @@ describe("floorcast bench: a quick end-to-end run of a tiny suite, then a resume
     expect(again.status).toBe(0);
     expect(again.stderr).toMatch(/standard-forrester: already finished, reusing its results/);
     expect(JSON.parse(readFileSync(join(out, "report.json"), "utf8")).problems).toEqual(report.problems);
-  });
+  }, 180_000);
 });

@@ -61,7 +61,7 @@ setInterval(() => {}, 1000);`;
 const stubbornBody = `process.on("SIGTERM", () => {});
 for await (const line of createInterface({ input: process.stdin })) {
   const x = JSON.parse(line);
-  process.stdout.write(JSON.stringify({ twice: 2 * x.a }) + "\\n");
+  process.stdout.write(JSON.stringify({ sample: x.sample, twice: 2 * x.a }) + "\\n");
 }
 setInterval(() => {}, 1000);`;
 /** Answers one line at a time, each 1.2 s after the previous answer. */
@@ -71,13 +71,13 @@ const next = () => {
   if (busy || lines.length === 0) return;
   busy = true;
   const x = JSON.parse(lines.shift());
-  setTimeout(() => { process.stdout.write(JSON.stringify({ twice: 2 * x.a }) + "\\n"); busy = false; next(); }, 1200);
+  setTimeout(() => { process.stdout.write(JSON.stringify({ sample: x.sample, twice: 2 * x.a }) + "\\n"); busy = false; next(); }, 1200);
 };
 for await (const line of createInterface({ input: process.stdin })) { lines.push(line); next(); }`;
 /** Answers the first 3 lines, then goes silent (still reading). */
 const stallBody = `let k = 0;
 for await (const line of createInterface({ input: process.stdin })) {
-  if (++k <= 3) process.stdout.write(JSON.stringify({ twice: 2 * JSON.parse(line).a }) + "\\n");
+  if (++k <= 3) process.stdout.write(JSON.stringify({ sample: JSON.parse(line).sample, twice: 2 * JSON.parse(line).a }) + "\\n");
 }
 setInterval(() => {}, 1000);`;
 
@@ -88,10 +88,10 @@ describe("commandEvaluator answer timeout", () => {
     const t0 = Date.now();
     const first = e.evaluate({ a: 1 });
     const second = e.evaluate({ a: 2 });
-    await expect(first).rejects.toThrow(/commandEvaluator: no answer to line 1 within 0\.3 s from .*silent\.mjs.* \(process 1 of 1\); the program was stopped/);
-    await expect(second).rejects.toThrow(/no answer to line 1 within 0\.3 s/);
+    await expect(first).rejects.toThrow(/commandEvaluator: no answer for sample \d+ \(line 1\) within 0\.3 s from .*silent\.mjs.* \(process 1 of 1\); the program was stopped/);
+    await expect(second).rejects.toThrow(/no answer for sample \d+ \(line 1\) within 0\.3 s/);
     expect(Date.now() - t0).toBeGreaterThanOrEqual(290); // not before the limit (timer granularity ~ms)
-    await expect(e.evaluate({ a: 3 })).rejects.toThrow(/no answer to line 1/); // later samples fail at once
+    await expect(e.evaluate({ a: 3 })).rejects.toThrow(/no answer for sample \d+ \(line 1\)/); // later samples fail at once
     await e.close();
     expect(Date.now() - t0).toBeLessThan(20_000); // it ends: 300 ms + SIGTERM grace 200 ms + SIGKILL
     const pids = pidsOf("silent.mjs");
@@ -130,7 +130,7 @@ describe("commandEvaluator answer timeout", () => {
     expect(results.filter((r) => r.status === "fulfilled")).toHaveLength(6);
     const reasons = results.flatMap((r) => (r.status === "rejected" ? [String(r.reason)] : []));
     expect(reasons).toHaveLength(2);
-    for (const m of reasons) expect(m).toMatch(/no answer to line 4 within 3 s from .*\(process [12] of 2\)/);
+    for (const m of reasons) expect(m).toMatch(/no answer for sample \d+ \(line 4\) within 3 s from .*\(process [12] of 2\)/);
     await e.close();
     const pids = pidsOf("stall.mjs");
     expect(pids).toHaveLength(2);
@@ -140,7 +140,7 @@ describe("commandEvaluator answer timeout", () => {
   it("stops what the shell started too (a compound command line is not exec'd by the shell)", async () => {
     const cmd = `cd ${JSON.stringify(dir)} && ${program("nested.mjs", silentBody)}`;
     const e = commandEvaluator(cmd, { timeoutMs: 300, graceMs: 200 });
-    await expect(e.evaluate({ a: 1 })).rejects.toThrow(/no answer to line 1 within 0\.3 s/);
+    await expect(e.evaluate({ a: 1 })).rejects.toThrow(/no answer for sample \d+ \(line 1\) within 0\.3 s/);
     await e.close();
     const pids = pidsOf("nested.mjs");
     expect(pids).toHaveLength(1);

@@ -16,6 +16,7 @@ import { recoverPartial } from "./recover-partial.js";
 import type { Shard } from "./shard.js";
 import { shardRange } from "./shard-range.js";
 import { claimOutput, type ClaimedOutput } from "../output/claim-output.js";
+import { EvaluatorProtocolError } from "../evaluator/evaluator-protocol-error.js";
 
 /** Options of {@link writeDataset}. */
 export interface WriteDatasetOptions {
@@ -97,7 +98,13 @@ async function writeClaimed(scenario: Scenario, options: WriteDatasetOptions, cl
     const recovered = await recoverPartial(partial.csv);
     if (recovered !== undefined) {
       const expectedLast = recovered.rows === 0 ? undefined : start + recovered.rows - 1;
-      if (recovered.header[0] !== "sample" || recovered.lastSample !== expectedLast) {
+      const expectedFirst = recovered.rows === 0 ? undefined : start;
+      if (recovered.brokenSequenceLine !== undefined) {
+        throw new RangeError(
+          `${fn}: ${partial.csv} line ${recovered.brokenSequenceLine}: the sample ids are not consecutive (a row missing, repeated or out of order); run without --resume`,
+        );
+      }
+      if (recovered.header[0] !== "sample" || recovered.lastSample !== expectedLast || recovered.firstSample !== expectedFirst) {
         throw new RangeError(`${fn}: ${partial.csv} does not hold rows ${start}… of this run; run without --resume`);
       }
       done = recovered.rows;
@@ -124,6 +131,16 @@ async function writeClaimed(scenario: Scenario, options: WriteDatasetOptions, cl
       done += 1;
       options.onProgress?.(done, total);
     }
+    await evaluator.finish?.();
+  } catch (error) {
+    await writer?.close().catch(() => undefined);
+    writer = undefined;
+    if (error instanceof EvaluatorProtocolError && error.misaligned) {
+      // answers of a program without ids may belong to other samples: keep no row of this run for --resume
+      await rm(partial.csv, { force: true });
+      await rm(partial.settings, { force: true });
+    }
+    throw error;
   } finally {
     await writer?.close();
   }
