@@ -46,7 +46,7 @@ describe("floorcast fit / predict", () => {
     const pred = run(["predict", "--model", p("m.json"), "--data", p("query.csv"), "--out", p("pred.csv")]);
     expect(pred.status).toBe(0);
     const out = readCsv(p("pred.csv"));
-    expect(out.header).toEqual(["y_mean", "y_sd", "z_mean", "z_sd", "in_domain"]);
+    expect(out.header).toEqual(["y_mean", "y_sd", "z_mean", "z_sd", "in_domain", "error"]);
     const model = loadSurrogate(readFileSync(p("m.json"), "utf8"));
     const q = [[0.9], [0.7572487585], [0.1], [0.5]];
     const lib = model.predict(q);

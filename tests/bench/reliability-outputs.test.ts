@@ -149,3 +149,22 @@ describe("one writer per output; nothing partial under a final name", () => {
     if (text !== KEEP) expect(text.trimEnd().split("\n")).toHaveLength(120_001);
   }, 240_000);
 });
+
+describe("predict reports a row it cannot predict in place", () => {
+  it("rows far beyond the model's domain get an error in their row; the others are predicted; exit 1", async () => {
+    writeFileSync(p("far.csv"), "a,b\n2,3\n1e160,3\n5,2\n4,-1e200\n");
+    const out = p("far-pred.csv");
+    const r = await runCli(["predict", "--model", p("model.json"), "--data", p("far.csv"), "--out", out]);
+    expectCleanOutcome(r, [1], "far rows");
+    expect(r.err).toMatch(/data row 2 of far\.csv: input a = 1e\+160 lies more than 1e\+150 training ranges outside the model's domain/);
+    expect(r.err).toMatch(/2 of 4 rows could not be predicted/);
+    const lines = readFileSync(out, "utf8").trimEnd().split("\n");
+    expect(lines[0]).toBe("y_mean,y_sd,in_domain,error");
+    expect(lines).toHaveLength(5);
+    // y = a + 2b (derived): the GP interpolates its own training rows' neighbourhood closely
+    expect(Number(lines[1]!.split(",")[0])).toBeCloseTo(8, 0);
+    expect(lines[2]).toMatch(/^,,0,input a = 1e\+160 lies more than/);
+    expect(Number(lines[3]!.split(",")[0])).toBeCloseTo(9, 0);
+    expect(lines[4]).toMatch(/^,,0,input b = -1e\+200 lies more than/);
+  });
+});

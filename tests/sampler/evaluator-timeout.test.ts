@@ -85,6 +85,8 @@ describe("commandEvaluator answer timeout", () => {
   it("a program that never answers fails the sample, naming the line and the limit, and is killed", async () => {
     const cmd = program("silent.mjs", silentBody);
     const e = commandEvaluator(cmd, { timeoutMs: 300, graceMs: 200 });
+    // the limit runs from the first request: ask once the program has started (a loaded machine starts node slowly)
+    expect(await eventually(() => pidsOf("silent.mjs").length === 1, 60_000)).toBe(true);
     const t0 = Date.now();
     const first = e.evaluate({ a: 1 });
     const second = e.evaluate({ a: 2 });
@@ -140,6 +142,7 @@ describe("commandEvaluator answer timeout", () => {
   it("stops what the shell started too (a compound command line is not exec'd by the shell)", async () => {
     const cmd = `cd ${JSON.stringify(dir)} && ${program("nested.mjs", silentBody)}`;
     const e = commandEvaluator(cmd, { timeoutMs: 300, graceMs: 200 });
+    expect(await eventually(() => pidsOf("nested.mjs").length === 1, 60_000)).toBe(true);
     await expect(e.evaluate({ a: 1 })).rejects.toThrow(/no answer for sample \d+ \(line 1\) within 0\.3 s/);
     await e.close();
     const pids = pidsOf("nested.mjs");

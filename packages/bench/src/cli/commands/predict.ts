@@ -7,6 +7,7 @@ import type { CommandContext } from "../command-context.js";
 import { UsageError } from "../usage-error.js";
 import { refuseOutsideDomain } from "../refuse-outside-domain.js";
 import { noteUnsealedModel } from "../note-unsealed-model.js";
+import { predictRows } from "../predict-rows.js";
 
 interface PredictOptions {
   model: string;
@@ -59,25 +60,37 @@ async function runPredict(opts: PredictOptions, ctx: CommandContext): Promise<vo
     ctx.stderr.write("predict: the model stores no training inputs, so in_domain is left empty (give --train to fill it)\n");
   }
   const flags = domain ? refuseOutsideDomain("predict", domain, table.x, opts.data, opts.strict === true) : null;
-  const p = model.predict(table.x);
-  const iv = p.interval;
+  const rows = predictRows(model, table.x, domain);
+  const iv = model.kind === "conformal" || rows.some((r) => r.lower !== undefined);
   const columns = [
     ...model.targets.flatMap((t) => [`${t}_mean`, `${t}_sd`, ...(iv ? [`${t}_lower`, `${t}_upper`] : [])]),
     "in_domain",
+    "error",
   ];
   const writer = createCsvWriter(claim.temporary(opts.out), columns);
+  let failed = 0;
   for (let i = 0; i < table.x.length; i++) {
+    const r = rows[i]!;
+    if (r.error) {
+      failed += 1;
+      if (failed === 1) ctx.stderr.write(`predict: data row ${i + 1} of ${basename(opts.data)}: ${r.error}\n`);
+    }
     await writer.write([
       ...model.targets.flatMap((_, j) => [
-        p.mean[i]![j]!,
-        p.sd ? p.sd[i]![j]! : "",
-        ...(iv ? [iv.lower[i]![j]!, iv.upper[i]![j]!] : []),
+        r.mean ? r.mean[j]! : "",
+        r.sd ? r.sd[j]! : "",
+        ...(iv ? [r.lower ? r.lower[j]! : "", r.upper ? r.upper[j]! : ""] : []),
       ]),
       flags ? (flags[i] ? 1 : 0) : "",
+      r.error ?? "",
     ]);
   }
   await writer.close();
   await claim.commit();
+  if (failed > 0) {
+    ctx.stderr.write(`predict: ${failed} of ${table.x.length} rows could not be predicted (their error column says why)\n`);
+    ctx.setExitCode(1);
+  }
   ctx.stdout.write(
     `predict: ${table.x.length} rows of ${basename(opts.data)} → ${opts.out}` +
       (flags ? `; ${flags.filter((f) => !f).length} outside the domain of validity (in_domain = 0)\n` : "\n") +
