@@ -25,6 +25,12 @@ interface OptimizeOptions {
   force?: boolean;
 }
 
+/**
+ * Most evaluations one `optimize` run may ask for: the optimisers keep every evaluation (a few hundred bytes
+ * each), so this bounds the run's memory to a few hundred MB, checked before anything is allocated.
+ */
+const MAX_OPTIMIZE_BUDGET = 1_000_000;
+
 const whole = (flag: string, v: string, min: number): number => {
   if (!/^\d+$/.test(v) || Number(v) < min) throw new UsageError(`optimize: ${flag} must be a whole number ≥ ${min}, got ${JSON.stringify(v)}`);
   return Number(v);
@@ -52,6 +58,9 @@ export function registerOptimizeCommand(program: Command, ctx: CommandContext): 
       if ((opts.surrogate === undefined) === (opts.exact !== true)) throw new UsageError("optimize: give exactly one of --surrogate FILE or --exact");
       const seed = whole("--seed", opts.seed, 0);
       const budget = whole("--budget", opts.budget, 1);
+      if (budget > MAX_OPTIMIZE_BUDGET) {
+        throw new UsageError(`optimize: --budget must be at most ${MAX_OPTIMIZE_BUDGET} evaluations (every evaluation is kept for the report), got ${opts.budget}`);
+      }
       await mkdir(opts.out, { recursive: true });
       const file = join(opts.out, "optimum.json");
       const claim = await ctx.claimOutput("optimize", file, { force: opts.force, inputs: [opts.problem, opts.surrogate] });
