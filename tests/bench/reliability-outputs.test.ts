@@ -168,3 +168,20 @@ describe("predict reports a row it cannot predict in place", () => {
     expect(lines[4]).toMatch(/^,,0,input b = -1e\+200 lies more than/);
   });
 });
+
+describe("merge checks each shard's row count", () => {
+  it("a manifest whose row count is not its shard's range is refused (exit 2), naming it", async () => {
+    const { copyFileSync } = await import("node:fs");
+    for (const s of [1, 2]) {
+      copyFileSync(p(`shard${s}.csv`), p(`rc${s}.csv`));
+      copyFileSync(p(`shard${s}.manifest.json`), p(`rc${s}.manifest.json`));
+    }
+    const m = JSON.parse(readFileSync(p("rc1.manifest.json"), "utf8"));
+    m.rows = m.rows + 2;
+    writeFileSync(p("rc1.manifest.json"), JSON.stringify(m, null, 2));
+    const r = await runCli(["merge", p("rc1.csv"), p("rc2.csv"), "--out", p("rc-all.csv")]);
+    expectCleanOutcome(r, [2], "merge rows");
+    expect(r.err).toMatch(/rc1\.csv: its manifest says 5 rows but shard 1\/2 covers 3/);
+    expect(existsSync(p("rc-all.csv"))).toBe(false);
+  });
+});

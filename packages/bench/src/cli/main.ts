@@ -44,6 +44,7 @@ export async function main(argv: readonly string[], io?: Partial<CommandContext>
   try {
     await program.parseAsync(argv as string[]);
   } catch (error) {
+    if ((error as { code?: unknown } | null)?.code === "EPIPE") return exitCode; // the reader closed the pipe: end quietly
     if (error instanceof CommanderError) {
       if (error.exitCode === 0) return EXIT_CODES.success;
       return EXIT_CODES.usage;

@@ -15,7 +15,10 @@ interface DesignOptions {
 
 /** Parses a whole-number option, naming it in the error. */
 function wholeNumber(name: string, text: string): number {
-  if (!/^[+-]?\d+$/.test(text.trim())) throw new UsageError(`design: --${name} must be a whole number, got ${JSON.stringify(text)}`);
+  // digits only, as sample and optimize read them: no sign (a negative seed or count is refused), no blanks
+  if (!/^\d+$/.test(text) || !Number.isSafeInteger(Number(text))) {
+    throw new UsageError(`design: --${name} must be a whole number ≥ 0, got ${JSON.stringify(text)}`);
+  }
   return Number(text);
 }
 
