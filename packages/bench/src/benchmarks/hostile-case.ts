@@ -1,6 +1,6 @@
 import { spawn } from "node:child_process";
 import { createHash } from "node:crypto";
-import { existsSync, readFileSync, writeFileSync } from "node:fs";
+import { existsSync, readFileSync, statSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { loadScenario, writeDataset } from "@floorcast/sampler";
@@ -143,7 +143,14 @@ export async function runHostileCase(c: HostileCase, dir: string, name: string):
       if (codes !== "0,2") unexpected = `exits ${codes}, expected 0,2`;
     } else {
       const size = readFileSync(reference).length;
-      const sizeOf = (): number => (existsSync(`${out}.partial`) ? readFileSync(`${out}.partial`).length : 0);
+      // the partial file is renamed away when the run completes: a vanished file has size 0, not an error
+      const sizeOf = (): number => {
+        try {
+          return statSync(`${out}.partial`).size;
+        } catch {
+          return 0;
+        }
+      };
       let attempts = 0;
       while (!existsSync(out) && attempts < 6) {
         const killAt = attempts === 0 ? c.killShare * size : Infinity;
