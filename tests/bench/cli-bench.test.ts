@@ -98,7 +98,7 @@ describe("floorcast optimize", () => {
     const wrong = join(dir, "wrong.json");
     const gp1 = fitGaussianProcess({ inputs: ["a", "b"], targets: ["f"], x, y: x.map((q) => [q[0]!]) }, { seed: 1 });
     writeFileSync(wrong, JSON.stringify(gp1.toJSON()));
-    await usage(["optimize", "--problem", join(problems, "standard-branin.json"), "--surrogate", wrong, "--out", out], /has inputs a, b; standard-branin needs x1, x2/);
+    await usage(["optimize", "--problem", join(problems, "standard-branin.json"), "--surrogate", wrong, "--out", `${out}-wrong`], /has inputs a, b; standard-branin needs x1, x2/);
   });
 });
 
@@ -128,9 +128,13 @@ describe("floorcast bench: a quick end-to-end run of a tiny suite, then a resume
     expect(report.problems[0].surrogateOptimum.length).toBe(6);
     // Forrester's exact optimum −6.0207400558 (VLSE), found by the 201-point grid plus refinement
     expect(report.problems[0].exactOptimum.value).toBeCloseTo(-6.0207400558, 6);
-    const again = run(args);
+    // The finished report is kept unless --force (the same meaning as on every writing command).
+    const refused = run(args);
+    expect(refused.status).toBe(2);
+    expect(refused.stderr).toMatch(/report\.json already exists; use --force/);
+    const again = run([...args, "--force"]);
     expect(again.status).toBe(0);
     expect(again.stderr).toMatch(/standard-forrester: already finished, reusing its results/);
     expect(JSON.parse(readFileSync(join(out, "report.json"), "utf8")).problems).toEqual(report.problems);
-  });
+  }, 180_000);
 });

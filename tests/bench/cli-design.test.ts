@@ -32,7 +32,7 @@ describe("floorcast design", () => {
     writeFileSync(out, "precious\n");
     const r = await run(["design", "--n", "4", "--dims", "2", "--design", "lhs", "--seed", "1", "--out", out]);
     expect(r.code).toBe(2);
-    expect(r.err).toMatch(/exists; pass --force/);
+    expect(r.err).toMatch(/already exists; use --force/);
     expect(readFileSync(out, "utf8")).toBe("precious\n");
     const forced = await run(["design", "--n", "4", "--dims", "2", "--design", "lhs", "--seed", "1", "--out", out, "--force"]);
     expect(forced.code).toBe(0);
@@ -45,7 +45,8 @@ describe("floorcast design", () => {
       [["--n", "0", "--dims", "2", "--design", "lhs"], /n must be an integer ≥ 1/],
       [["--n", "abc", "--dims", "2", "--design", "lhs"], /--n must be a whole number/],
       [["--n", "2.5", "--dims", "2", "--design", "lhs"], /--n must be a whole number/],
-      [["--n", "4", "--dims", "-1", "--design", "lhs"], /dims must be an integer ≥ 1/],
+      [["--n", "4", "--dims", "0", "--design", "lhs"], /dims must be an integer ≥ 1/],
+      [["--n", "4", "--dims", "-1", "--design", "lhs"], /--dims must be a whole number ≥ 0, got "-1"/],
       [["--n", "4", "--dims", "2", "--design", "grid"], /--design must be one of/],
       [["--n", "4", "--dims", "99", "--design", "sobol"], /dims must be ≤/],
     ];

@@ -45,7 +45,7 @@ describe("floorcast fit --model nn / predict", () => {
     expect(pred.status).toBe(0);
     expect(`${pred.stdout}${pred.stderr}`).not.toMatch(/TensorFlow|tfjs/);
     const out = readCsv(p("nn.csv"));
-    expect(out.header).toEqual(["y_mean", "y_sd", "z_mean", "z_sd", "in_domain"]);
+    expect(out.header).toEqual(["y_mean", "y_sd", "z_mean", "z_sd", "in_domain", "error"]);
     const lib = loadSurrogate(readFileSync(p("nn.json"), "utf8")).predict([[4.5, 0.5], [0, 0], [9, 1]]);
     out.rows.forEach((r, i) => {
       expect(Number(r[0])).toBe(lib.mean[i]![0]);
@@ -64,7 +64,7 @@ describe("floorcast fit --model nn / predict", () => {
     expect(file.payload.base.payload.members.map((m: { modelType: string }) => m.modelType)).toEqual(["mlp", "mlp"]);
     expect(run(["predict", "--model", p("nnc.json"), "--data", p("query.csv"), "--keep", "", "--out", p("nnc.csv")]).status).toBe(0);
     const out = readCsv(p("nnc.csv"));
-    expect(out.header).toEqual(["y_mean", "y_sd", "y_lower", "y_upper", "z_mean", "z_sd", "z_lower", "z_upper", "in_domain"]);
+    expect(out.header).toEqual(["y_mean", "y_sd", "y_lower", "y_upper", "z_mean", "z_sd", "z_lower", "z_upper", "in_domain", "error"]);
     for (const r of out.rows) {
       const [m, sd, lo, hi] = r.slice(0, 4).map(Number);
       expect(sd).toBeGreaterThanOrEqual(0);

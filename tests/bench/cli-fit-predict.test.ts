@@ -47,7 +47,7 @@ describe("floorcast fit / predict", () => {
     expect(pred.status).toBe(0);
     const out = readCsv(p("pred.csv"));
     // the data's own columns first (here the input x), then the predictions
-    expect(out.header).toEqual(["x", "y_mean", "y_sd", "z_mean", "z_sd", "in_domain"]);
+    expect(out.header).toEqual(["x", "y_mean", "y_sd", "z_mean", "z_sd", "in_domain", "error"]);
     const model = loadSurrogate(readFileSync(p("m.json"), "utf8"));
     const q = [[0.9], [0.7572487585], [0.1], [0.5]];
     const lib = model.predict(q);
@@ -70,16 +70,16 @@ describe("floorcast fit / predict", () => {
     const byFile = await runHere(["predict", "--model", p("k.json"), "--data", p("keyed.csv"), "--out", p("keyed-pred.csv")]);
     expect(byFile.status, byFile.stderr).toBe(0);
     const lines = readFileSync(p("keyed-pred.csv"), "utf8").trim().split("\n");
-    expect(lines[0]).toBe("id,x,label,y_mean,y_sd,in_domain");
+    expect(lines[0]).toBe("id,x,label,y_mean,y_sd,in_domain,error");
     // text columns are copied as they were (quoted again where RFC 4180 needs it); the input as the number it is
-    expect(lines[1]).toBe(`lot-7,0.9,"corner, north",${lib.mean[0]![0]},${lib.sd![0]![0]},1`);
-    expect(lines[2]).toBe(`lot-2,0.1,plain,${lib.mean[1]![0]},${lib.sd![1]![0]},1`);
+    expect(lines[1]).toBe(`lot-7,0.9,"corner, north",${lib.mean[0]![0]},${lib.sd![0]![0]},1,`);
+    expect(lines[2]).toBe(`lot-2,0.1,plain,${lib.mean[1]![0]},${lib.sd![1]![0]},1,`);
     // --keep chooses the copied columns, in its order; "" copies none
     const keep = await runHere(["predict", "--model", p("k.json"), "--data", p("keyed.csv"), "--keep", "label,id", "--out", p("keep.csv")]);
     expect(keep.status, keep.stderr).toBe(0);
-    expect(readFileSync(p("keep.csv"), "utf8").split("\n")[0]).toBe("label,id,y_mean,y_sd,in_domain");
+    expect(readFileSync(p("keep.csv"), "utf8").split("\n")[0]).toBe("label,id,y_mean,y_sd,in_domain,error");
     expect((await runHere(["predict", "--model", p("k.json"), "--data", p("keyed.csv"), "--keep", "", "--out", p("none.csv")])).status).toBe(0);
-    expect(readFileSync(p("none.csv"), "utf8").split("\n")[0]).toBe("y_mean,y_sd,in_domain");
+    expect(readFileSync(p("none.csv"), "utf8").split("\n")[0]).toBe("y_mean,y_sd,in_domain,error");
     // - : the same bytes through stdin and stdout; the summary and the caution go to stderr
     const piped = await runCli(["predict", "--model", p("k.json"), "--data", "-", "--out", "-"], data);
     expect(piped.code, piped.err).toBe(0);

@@ -60,7 +60,7 @@ describe("sample --plate-profile → fit --model plate-stack → predict", () =>
     const pr = await runCli(["predict", "--model", p("m.json"), "--data", p("q.csv"), "--keep", "", "--out", p("pred.csv")]);
     expect(pr.code, pr.err).toBe(0);
     const lines = readFileSync(p("pred.csv"), "utf8").trim().split("\n");
-    expect(lines[0]).toBe("gfa_mean,gfa_sd,floors_mean,floors_sd,in_domain");
+    expect(lines[0]).toBe("gfa_mean,gfa_sd,floors_mean,floors_sd,in_domain,error");
     lines.slice(1).forEach((line, i) => {
       const [f, s, far] = query[i]!;
       const exact = evaluateMassing({

@@ -26,7 +26,7 @@ describe("floorcast predict: in_domain column and --strict", () => {
     expect(r.code).toBe(0);
     expect(r.out).toMatch(/2 outside the domain of validity/);
     const lines = (await readFile(out, "utf8")).trim().split("\n");
-    expect(lines[0]).toBe("y_mean,y_sd,in_domain");
+    expect(lines[0]).toBe("y_mean,y_sd,in_domain,error");
     expect(lines.slice(1).map((l) => l.split(",")[2])).toEqual(["1", "1", "0", "0"]);
     // The same flags from --train (the same rows).
     const out2 = join(dir, "pred2.csv");

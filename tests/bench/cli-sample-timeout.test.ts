@@ -37,7 +37,7 @@ let k = 0;
 for await (const line of createInterface({ input: process.stdin })) {
   if (stall && ++k > 12) continue;
   const x = JSON.parse(line);
-  process.stdout.write(JSON.stringify({ area: x.frontage * x.depth }) + "\\n");
+  process.stdout.write(JSON.stringify({ sample: x.sample, area: x.frontage * x.depth }) + "\\n");
 }
 if (process.argv[2] === "linger") setInterval(() => {}, 1000);
 `,
@@ -55,7 +55,7 @@ describe("floorcast sample --evaluator-timeout", () => {
     expect(hung.status).toBe(1);
     const lines = hung.stderr.trim().split("\n");
     expect(lines).toHaveLength(1);
-    expect(lines[0]).toMatch(/^floorcast: commandEvaluator: no answer to line 13 within 3 s from .*model\.mjs.*\(process 1 of 1\); the program was stopped/);
+    expect(lines[0]).toMatch(/^floorcast: commandEvaluator: no answer for sample 12 \(line 13\) within 3 s from .*model\.mjs.*\(process 1 of 1\); the program was stopped/);
     expect(hung.stderr).not.toMatch(/\n\s+at /);
     expect(existsSync(join(dir, "t.csv"))).toBe(false);
     // the 12 answered samples are on disk (header + 12 rows) and equal the uninterrupted run's first rows
@@ -108,11 +108,11 @@ setInterval(() => {}, 1000);`);
   });
 
   it("bad --evaluator-timeout values exit 2 with one line", async () => {
-    for (const v of ["-1", "abc", "1e3", "", "9999999"]) {
+    for (const v of ["-1", "abc", "1e3", "", "9999999", "0.000001", "0.0015"]) {
       const r = await floorcast(...base, "--evaluator-command", cmd, "--evaluator-timeout", v, "--out", "bad.csv");
       expect(r.status, v).toBe(2);
       expect(r.stderr.trim().split("\n"), v).toHaveLength(1);
-      expect(r.stderr).toMatch(/--evaluator-timeout must be a number of seconds in \[0, 2147483\] \(0 = no limit\)/);
+      expect(r.stderr).toMatch(/--evaluator-timeout must be 0 \(no limit\) or whole milliseconds in \[0\.001, 2147483\.647\] seconds/);
     }
     expect(existsSync(join(dir, "bad.csv"))).toBe(false);
   });

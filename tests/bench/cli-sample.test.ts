@@ -63,7 +63,7 @@ let k = 0;
 for await (const line of createInterface({ input: process.stdin })) {
   if (++k === 25 && existsSync(${JSON.stringify(join(dir, "crash"))})) process.exit(9);
   const x = JSON.parse(line);
-  process.stdout.write(JSON.stringify({ area: x.frontage * x.depth }) + "\\n");
+  process.stdout.write(JSON.stringify({ sample: x.sample, area: x.frontage * x.depth }) + "\\n");
 }`,
     );
     const cmd = `${JSON.stringify(process.execPath)} ${JSON.stringify(model)}`;

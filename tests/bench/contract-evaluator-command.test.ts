@@ -26,7 +26,8 @@ for await (const line of createInterface({ input: process.stdin })) {
   if (line.trim() === "") continue;
   const input = JSON.parse(line);
   const record = Object.fromEntries(names.map((n) => [n, input[n]]));
-  process.stdout.write(JSON.stringify(massingOutputs(evaluateMassing(scenarioToMassingInput(scenario, record)))) + "\\n");
+  // the answer echoes the request's sample id (the evaluator protocol)
+  process.stdout.write(JSON.stringify({ sample: input.sample, ...massingOutputs(evaluateMassing(scenarioToMassingInput(scenario, record))) }) + "\\n");
 }
 `;
 

@@ -92,21 +92,32 @@ describe("runSuite: report.json structure, resume", () => {
     const stamp = statSync(join(out, "problems", "larkspur-fit-gfa.json")).mtimeMs;
     const states: string[] = [];
     const progress = { write: (s: string) => (states.push(s), true) } as unknown as NodeJS.WritableStream;
-    const { report } = await runSuite({ suite: "tiny", quick: true, out, peers: false, problemsDir, overrides, progress: progress as never });
+    const { report } = await runSuite({ suite: "tiny", quick: true, out, force: true, peers: false, problemsDir, overrides, progress: progress as never });
     expect(states.filter((s) => /already finished/.test(s)).length).toBe(2);
     expect(statSync(join(out, "problems", "larkspur-fit-gfa.json")).mtimeMs).toBe(stamp);
     expect(report.problems[0]!.surrogateOptimum[0]!.gap).toBeDefined();
+  });
+  it("a saved problem whose report was edited is measured again, never trusted", async () => {
+    const file = join(out, "problems", "larkspur-fit-gfa.json");
+    const saved = JSON.parse(readFileSync(file, "utf8"));
+    delete saved.report.summary; // same fingerprint, damaged report
+    writeFileSync(file, JSON.stringify(saved));
+    const lines: string[] = [];
+    const progress = { write: (s: string) => (lines.push(s), true) };
+    const { report } = await runSuite({ suite: "tiny", quick: true, out, force: true, peers: false, problemsDir, overrides, progress: progress as never });
+    expect(lines.filter((s) => /already finished/.test(s)).length).toBe(1); // only standard-forrester reused
+    expect(Array.isArray(report.problems.find((p) => p.name === "larkspur-fit-gfa")!.summary)).toBe(true);
   });
   it("a missing problem file is measured again; other options measure everything again", async () => {
     const { unlinkSync } = await import("node:fs");
     unlinkSync(join(out, "problems", "standard-forrester.json"));
     const lines: string[] = [];
     const progress = { write: (s: string) => (lines.push(s), true) };
-    await runSuite({ suite: "tiny", quick: true, out, peers: false, problemsDir, overrides, progress: progress as never });
+    await runSuite({ suite: "tiny", quick: true, out, force: true, peers: false, problemsDir, overrides, progress: progress as never });
     expect(lines.filter((s) => /already finished/.test(s)).length).toBe(1);
     expect(existsSync(join(out, "problems", "standard-forrester.json"))).toBe(true);
     const other: string[] = [];
-    await runSuite({ suite: "tiny", quick: true, out, peers: false, problemsDir, overrides: { ...overrides, refineBudget: 6 }, problem: "standard-forrester", progress: { write: (s: string) => (other.push(s), true) } as never });
+    await runSuite({ suite: "tiny", quick: true, out, force: true, peers: false, problemsDir, overrides: { ...overrides, refineBudget: 6 }, problem: "standard-forrester", progress: { write: (s: string) => (other.push(s), true) } as never });
     expect(other.filter((s) => /already finished/.test(s)).length).toBe(0);
   });
   it("names an unknown problem", async () => {

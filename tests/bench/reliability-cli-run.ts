@@ -8,7 +8,7 @@ const BIN = fileURLToPath(new URL("../../packages/bench/bin/floorcast.js", impor
  * Spawns the real `floorcast` process, killed after `timeoutMs` (a hang fails the test, never blocks it).
  * @returns exit status (null when killed), stdout, stderr.
  */
-export function spawnCli(args: string[], stdin = "", timeoutMs = 20_000): Promise<{ code: number | null; out: string; err: string }> {
+export function spawnCli(args: string[], stdin = "", timeoutMs = 120_000): Promise<{ code: number | null; out: string; err: string }> {
   return new Promise((resolve) => {
     const child = spawn(process.execPath, [BIN, ...args], { stdio: ["pipe", "pipe", "pipe"], timeout: timeoutMs, killSignal: "SIGKILL" });
     let out = "";

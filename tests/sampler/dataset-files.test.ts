@@ -79,7 +79,7 @@ describe("writeDataset", () => {
   });
   it("an output folder that does not exist is a RangeError naming it", async () => {
     await expect(writeDataset(scenario, { out: join(root, "no", "such", "x.csv"), ...run })).rejects.toThrow(
-      /the folder of .*x\.csv does not exist/,
+      /cannot write .*x\.csv: the folder .* does not exist/,
     );
   });
   it("an interrupted run leaves only the temporary file; the output name appears when complete", async () => {

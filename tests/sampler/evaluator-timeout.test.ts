@@ -58,14 +58,15 @@ async function eventually(check: () => boolean, ms = 1000): Promise<boolean> {
 const silentBody = `process.on("SIGTERM", () => {});
 let k = 0;
 for await (const line of createInterface({ input: process.stdin })) {
-  if (++k === 1) process.stdout.write(JSON.stringify({ twice: 2 * JSON.parse(line).a }) + "\\n");
+  const x = JSON.parse(line);
+  if (++k === 1) process.stdout.write(JSON.stringify({ sample: x.sample, twice: 2 * x.a }) + "\\n");
 }
 setInterval(() => {}, 1000);`;
 /** Answers every line at once, then ignores the end of its input and SIGTERM. */
 const stubbornBody = `process.on("SIGTERM", () => {});
 for await (const line of createInterface({ input: process.stdin })) {
   const x = JSON.parse(line);
-  process.stdout.write(JSON.stringify({ twice: 2 * x.a }) + "\\n");
+  process.stdout.write(JSON.stringify({ sample: x.sample, twice: 2 * x.a }) + "\\n");
 }
 setInterval(() => {}, 1000);`;
 /** Answers one line at a time, each 1.2 s after the previous answer. */
@@ -75,13 +76,13 @@ const next = () => {
   if (busy || lines.length === 0) return;
   busy = true;
   const x = JSON.parse(lines.shift());
-  setTimeout(() => { process.stdout.write(JSON.stringify({ twice: 2 * x.a }) + "\\n"); busy = false; next(); }, 1200);
+  setTimeout(() => { process.stdout.write(JSON.stringify({ sample: x.sample, twice: 2 * x.a }) + "\\n"); busy = false; next(); }, 1200);
 };
 for await (const line of createInterface({ input: process.stdin })) { lines.push(line); next(); }`;
 /** Answers the first 3 lines, then goes silent (still reading). */
 const stallBody = `let k = 0;
 for await (const line of createInterface({ input: process.stdin })) {
-  if (++k <= 3) process.stdout.write(JSON.stringify({ twice: 2 * JSON.parse(line).a }) + "\\n");
+  if (++k <= 3) process.stdout.write(JSON.stringify({ sample: JSON.parse(line).sample, twice: 2 * JSON.parse(line).a }) + "\\n");
 }
 setInterval(() => {}, 1000);`;
 
@@ -93,10 +94,10 @@ describe("commandEvaluator answer timeout", () => {
     const t0 = Date.now();
     const second = e.evaluate({ a: 2 });
     const third = e.evaluate({ a: 3 });
-    await expect(second).rejects.toThrow(/commandEvaluator: no answer to line 2 within 3 s from .*silent\.mjs.* \(process 1 of 1\); the program was stopped/);
-    await expect(third).rejects.toThrow(/no answer to line 2 within 3 s/);
+    await expect(second).rejects.toThrow(/commandEvaluator: no answer for sample \d+ \(line 2\) within 3 s from .*silent\.mjs.* \(process 1 of 1\); the program was stopped/);
+    await expect(third).rejects.toThrow(/no answer for sample \d+ \(line 2\) within 3 s/);
     expect(Date.now() - t0).toBeGreaterThanOrEqual(2990); // not before the limit (timer granularity ~ms)
-    await expect(e.evaluate({ a: 4 })).rejects.toThrow(/no answer to line 2/); // later samples fail at once
+    await expect(e.evaluate({ a: 4 })).rejects.toThrow(/no answer for sample \d+ \(line 2\)/); // later samples fail at once
     await e.close();
     expect(Date.now() - t0).toBeLessThan(30_000); // it ends: 3 s + SIGTERM grace 200 ms + SIGKILL
     const pids = pidsOf("silent.mjs");
@@ -135,7 +136,7 @@ describe("commandEvaluator answer timeout", () => {
     expect(results.filter((r) => r.status === "fulfilled")).toHaveLength(6);
     const reasons = results.flatMap((r) => (r.status === "rejected" ? [String(r.reason)] : []));
     expect(reasons).toHaveLength(2);
-    for (const m of reasons) expect(m).toMatch(/no answer to line 4 within 3 s from .*\(process [12] of 2\)/);
+    for (const m of reasons) expect(m).toMatch(/no answer for sample \d+ \(line 4\) within 3 s from .*\(process [12] of 2\)/);
     await e.close();
     const pids = pidsOf("stall.mjs");
     expect(pids).toHaveLength(2);
@@ -146,7 +147,7 @@ describe("commandEvaluator answer timeout", () => {
     const cmd = `cd ${JSON.stringify(dir)} && ${program("nested.mjs", silentBody)}`;
     const e = commandEvaluator(cmd, { timeoutMs: 3000, graceMs: 200 });
     await expect(e.evaluate({ a: 1 })).resolves.toEqual({ twice: 2 });
-    await expect(e.evaluate({ a: 2 })).rejects.toThrow(/no answer to line 2 within 3 s/);
+    await expect(e.evaluate({ a: 2 })).rejects.toThrow(/no answer for sample \d+ \(line 2\) within 3 s/);
     await e.close();
     const pids = pidsOf("nested.mjs");
     expect(pids).toHaveLength(1);

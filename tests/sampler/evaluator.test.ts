@@ -29,7 +29,7 @@ const rl = createInterface({ input: process.stdin });
 for await (const line of rl) {
   const x = JSON.parse(line);
   if (x.frontage < 0) { process.stderr.write("negative frontage\\n"); process.exit(3); }
-  process.stdout.write(JSON.stringify({ area: x.frontage * x.depth, perimeter: 2 * (x.frontage + x.depth) }) + "\\n");
+  process.stdout.write(JSON.stringify({ sample: x.sample, area: x.frontage * x.depth, perimeter: 2 * (x.frontage + x.depth) }) + "\\n");
 }
 `,
 );
@@ -88,7 +88,7 @@ describe("commandEvaluator (JSON Lines to an external program)", () => {
       `import { createInterface } from "node:readline";
 for await (const line of createInterface({ input: process.stdin })) {
   const x = JSON.parse(line);
-  process.stdout.write(JSON.stringify({ area: x.frontage * x.depth, pid: process.pid }) + "\\n");
+  process.stdout.write(JSON.stringify({ sample: x.sample, area: x.frontage * x.depth, pid: process.pid }) + "\\n");
 }`,
     );
     const one = commandEvaluator(`${node} ${JSON.stringify(pidProgram)}`);
@@ -109,7 +109,7 @@ for await (const line of createInterface({ input: process.stdin })) {
   it("reports a program that dies, quoting its status and stderr", async () => {
     const e = commandEvaluator(`${node} ${JSON.stringify(program)}`);
     await expect(e.evaluate({ frontage: 2, depth: 3 })).resolves.toEqual({ area: 6, perimeter: 10 });
-    await expect(e.evaluate({ frontage: -1, depth: 3 })).rejects.toThrow(/exited \(status 3\) after 1 answers: negative frontage/);
+    await expect(e.evaluate({ frontage: -1, depth: 3 })).rejects.toThrow(/exited \(status 3\) after 1 answers; sample \d+ unanswered: negative frontage/);
     await expect(e.evaluate({ frontage: 1, depth: 1 })).rejects.toThrow(/exited/);
     await e.close();
   });
@@ -122,9 +122,15 @@ let k = 0;
 for await (const line of createInterface({ input: process.stdin })) process.stdout.write(++k === 1 ? "hello\\n" : "[1]\\n");`,
     );
     const e = commandEvaluator(`${node} ${JSON.stringify(liar)}`);
-    await expect(e.evaluate({ a: 1 })).rejects.toThrow(/answer 1 is not JSON: "hello"/);
-    await expect(e.evaluate({ a: 1 })).rejects.toThrow(/answer 2 must be a JSON object/);
+    await expect(e.evaluate({ a: 1 })).rejects.toThrow(/answer 1 \(for sample 0\) is not JSON: "hello"/);
+    await expect(e.evaluate({ a: 1 })).rejects.toThrow(/is not JSON/); // the program is stopped: no answer can be trusted
     await e.close();
+    const array = join(dir, "array.mjs");
+    writeFileSync(array, `import { createInterface } from "node:readline";
+for await (const line of createInterface({ input: process.stdin })) process.stdout.write("[1]\\n");`);
+    const f = commandEvaluator(`${node} ${JSON.stringify(array)}`);
+    await expect(f.evaluate({ a: 1 }, { sample: 7 })).rejects.toThrow(/answer 1 \(for sample 7\) must be a JSON object/);
+    await f.close();
   });
   it("a command that cannot be found fails every evaluation; bad arguments are refused", async () => {
     const e = commandEvaluator("floorcast-no-such-program-xyz");

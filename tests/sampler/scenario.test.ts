@@ -90,6 +90,10 @@ describe("parseScenario errors name the file, the path and the problem", () => {
     ["bad corner", (s) => (s.fixed.corner = "north"), /fixed\.corner: must be one of "none", "left", "right"/],
     ["rear given twice", (s) => Object.assign(s.fixed, { rearWidth: 8, rearRatio: 0.8 }), /fixed\.rearRatio: give the rear lot line as rearWidth or as rearRatio/],
     ["half a sky plane", (s) => (s.fixed.skyPlaneStart = 10), /skyPlaneStart and skyPlaneRatio go together/],
+    // Units are checked, never converted: a frontage in feet or a FAR in per cent is refused, naming the field.
+    ["a length in feet", (s) => (s.parameters[0].unit = "ft"), /parameters\[0\]\.unit: frontage is in "m", got unit "ft": values are not converted; give the range in metres \(1 ft = 0\.3048 m exactly\)/],
+    ["a ratio in per cent", (s) => s.parameters.push({ kind: "continuous", name: "maxFar", min: 100, max: 300, unit: "%", description: "FAR" }), /parameters\[3\]\.unit: maxFar is in "1", got unit "%".*not 250 %/],
+    ["a length in another unit", (s) => (s.parameters[0].unit = "m²"), /parameters\[0\]\.unit: frontage is in "m", got unit "m²"/],
     ["a line break in a level", (s) => (s.parameters[2] = { ...s.parameters[2], name: "corner", levels: ["none", "le\nft"] }), /parameters\[2\]\.levels\[1\]: must not contain a line break/],
   ];
   for (const [what, change, message] of cases) {

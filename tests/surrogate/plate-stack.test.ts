@@ -3,7 +3,8 @@ import { PLATE_STACK_OUTPUTS, fitPlateStack, loadSurrogate, qmcNormalDraws, type
 import { loadPredictor } from "@floorcast/surrogate/predict";
 import { plateData, scenarioOf } from "./plate-stack-data.js";
 
-const cont = (name: string, min: number, max: number) => ({ kind: "continuous", name, min, max, unit: "m", description: name });
+// each slot's own unit (a scenario's units are checked): metres, except the floor area ratio, a plain ratio
+const cont = (name: string, min: number, max: number) => ({ kind: "continuous", name, min, max, unit: name === "maxFar" ? "1" : "m", description: name });
 const gfaCol = PLATE_STACK_OUTPUTS.indexOf("gfa");
 const floorsCol = PLATE_STACK_OUTPUTS.indexOf("floors");
 

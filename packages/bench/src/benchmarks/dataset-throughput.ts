@@ -62,7 +62,7 @@ try {
     `import { createInterface } from "node:readline";
 for await (const line of createInterface({ input: process.stdin })) {
   const x = JSON.parse(line); let s = 0; for (let i = 0; i < 2000; i++) s += Math.sqrt(i + x.frontage);
-  process.stdout.write(JSON.stringify({ area: x.frontage * x.depth, s }) + "\\n");
+  process.stdout.write(JSON.stringify({ sample: x.sample, area: x.frontage * x.depth, s }) + "\\n");
 }`,
   );
   const s = await loadScenario(join(scenariosDir, "larkspur-terraces.json"));

@@ -1,5 +1,6 @@
 import { FLOORCAST_CAUTION } from "../floorcast-caution.js";
 import { Command, CommanderError } from "commander";
+import { claimOutput, type ClaimedOutput } from "@floorcast/sampler";
 import type { CommandContext } from "./command-context.js";
 import { EXIT_CODES } from "./exit-codes.js";
 import { UsageError } from "./usage-error.js";
@@ -16,12 +17,19 @@ import { requiredOptionsAfterUnknown } from "./required-options.js";
  */
 export async function main(argv: readonly string[], io?: Partial<CommandContext>): Promise<number> {
   let exitCode: number = EXIT_CODES.success;
+  const claims: ClaimedOutput[] = [];
   const ctx: CommandContext = {
     stdin: io?.stdin ?? process.stdin,
     stdout: io?.stdout ?? process.stdout,
     stderr: io?.stderr ?? process.stderr,
     setExitCode(code: number) {
       exitCode = Math.max(exitCode, code);
+    },
+    async claimOutput(command, paths, options) {
+      const inputs = (options.inputs ?? []).filter((p): p is string => p !== undefined && p !== "-"); // "-" is stdin, not a file
+      const claim = await claimOutput(paths, { fn: command, force: options.force === true, inputs });
+      claims.push(claim);
+      return claim;
     },
   };
   const program = new Command("floorcast")
@@ -39,6 +47,7 @@ export async function main(argv: readonly string[], io?: Partial<CommandContext>
   try {
     await program.parseAsync(argv as string[]);
   } catch (error) {
+    if ((error as { code?: unknown } | null)?.code === "EPIPE") return exitCode; // the reader closed the pipe: end quietly
     if (error instanceof CommanderError) {
       if (error.exitCode === 0) return EXIT_CODES.success;
       return EXIT_CODES.usage;
@@ -49,6 +58,8 @@ export async function main(argv: readonly string[], io?: Partial<CommandContext>
     }
     ctx.stderr.write(`floorcast: ${error instanceof Error ? error.message : String(error)}\n`);
     return EXIT_CODES.someFailed;
+  } finally {
+    await Promise.all(claims.map((c) => c.release()));
   }
   return exitCode;
 }

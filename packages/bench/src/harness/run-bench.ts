@@ -1,11 +1,13 @@
 import { FLOORCAST_CAUTION } from "../floorcast-caution.js";
 import { createHash } from "node:crypto";
-import { mkdir, readFile, rename, writeFile } from "node:fs/promises";
+import { mkdir, readFile } from "node:fs/promises";
+import { writeFileAtomically } from "@floorcast/sampler";
 import { join } from "node:path";
 import { cpus } from "node:os";
 import type { BenchProblem } from "../problem/bench-problem.js";
 import type { BenchReport, ProblemReport } from "./bench-report-types.js";
 import { runProblem, type RunProblemOptions } from "./run-problem.js";
+import { benchFingerprint } from "./bench-fingerprint.js";
 
 /** What a bench run needs. */
 export interface RunBenchOptions {
@@ -22,21 +24,16 @@ export interface RunBenchOptions {
   readonly onProblem?: (problem: BenchProblem, state: "start" | "skip" | "done", index: number, total: number) => void;
 }
 
-async function fingerprint(problem: BenchProblem, settings: Readonly<Record<string, unknown>>): Promise<string> {
-  let text = "";
-  try {
-    text = await readFile(problem.file, "utf8");
-  } catch {
-    text = JSON.stringify({ name: problem.name, optimisation: problem.optimisation });
-  }
-  return createHash("sha256").update(JSON.stringify(settings)).update("\n").update(text).digest("hex");
-}
+/** SHA-256 of a saved problem report's JSON: an edited or damaged cache file is measured again, never trusted. */
+const reportHash = (report: unknown): string => createHash("sha256").update(JSON.stringify(report)).digest("hex");
 
 /**
  * Runs a suite problem by problem, writing each finished problem to `<out>/problems/<name>.json`
  * at once (atomically: a temporary file, then a rename). Re-run with the same settings into the
  * same directory, it reuses the problems already finished there and measures only the rest, so
- * an interrupted run resumes where it stopped. Returns the assembled report (report.json's content).
+ * an interrupted run resumes where it stopped. A saved problem is reused only when its fingerprint
+ * (benchFingerprint: options, problem file, its scenario file, floorcast versions) matches and its
+ * report is unedited (a SHA-256 of it is saved beside it). Returns the assembled report (report.json's content).
  * @param options - suite, problems, output directory, settings, plan and progress callback.
  */
 export async function runBench(options: RunBenchOptions): Promise<BenchReport> {
@@ -47,11 +44,11 @@ export async function runBench(options: RunBenchOptions): Promise<BenchReport> {
   const total = options.problems.length;
   for (const [i, problem] of options.problems.entries()) {
     const file = join(dir, `${problem.name}.json`);
-    const key = await fingerprint(problem, options.settings);
+    const key = await benchFingerprint(problem, options.settings);
     let finished: ProblemReport | null = null;
     try {
-      const saved = JSON.parse(await readFile(file, "utf8")) as { fingerprint?: string; report?: ProblemReport };
-      if (saved.fingerprint === key && saved.report) finished = saved.report;
+      const saved = JSON.parse(await readFile(file, "utf8")) as { fingerprint?: string; sha256?: string; report?: ProblemReport };
+      if (saved.fingerprint === key && saved.report && saved.sha256 === reportHash(saved.report)) finished = saved.report;
     } catch {
       finished = null;
     }
@@ -67,9 +64,7 @@ export async function runBench(options: RunBenchOptions): Promise<BenchReport> {
     } finally {
       await problem.close?.(); // an external evaluator command's processes
     }
-    const tmp = `${file}.partial`;
-    await writeFile(tmp, JSON.stringify({ fingerprint: key, report }));
-    await rename(tmp, file);
+    await writeFileAtomically(file, JSON.stringify({ fingerprint: key, sha256: reportHash(report), report }));
     reports.push(report);
     options.onProblem?.(problem, "done", i, total);
   }

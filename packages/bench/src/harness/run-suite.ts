@@ -1,4 +1,6 @@
+import { mkdir } from "node:fs/promises";
 import type { Writable } from "node:stream";
+import { claimOutput } from "@floorcast/sampler";
 import type { BenchProblem } from "../problem/bench-problem.js";
 import { DEFAULT_PROBLEMS_DIR, loadSuite } from "../problem/load-suite.js";
 import type { BenchReport } from "./bench-report-types.js";
@@ -7,7 +9,7 @@ import { benchProgress } from "./bench-progress.js";
 import { benchSettings } from "./bench-settings.js";
 import { PEER_PYTHON, PeerProcess } from "./peer-process.js";
 import { runBench } from "./run-bench.js";
-import { writeBenchReport } from "./write-bench-report.js";
+import { benchReportPaths, writeBenchReport } from "./write-bench-report.js";
 
 /** Options of {@link runSuite} (what `floorcast bench` and `floorcast demo` take). */
 export interface RunSuiteOptions {
@@ -17,6 +19,8 @@ export interface RunSuiteOptions {
   readonly seeds?: number;
   readonly quick: boolean;
   readonly out: string;
+  /** Replace report files already in `out` (without it they are refused before any work). */
+  readonly force?: boolean;
   /** Run the scikit-learn / scipy peers when present (default true). */
   readonly peers?: boolean;
   /** Problems directory (default {@link DEFAULT_PROBLEMS_DIR}, the problems shipped with floorcast). */
@@ -42,6 +46,13 @@ export async function runSuite(options: RunSuiteOptions): Promise<{ report: Benc
     problems = problems.filter((p) => p.name === options.problem);
     if (problems.length === 0) throw new RangeError(`bench: no problem "${options.problem}" in suite ${options.suite}; problems: ${names.join(", ")}`);
   }
+  await mkdir(options.out, { recursive: true });
+  const reportPaths = benchReportPaths(options.out);
+  const claim = await claimOutput([reportPaths.json, reportPaths.markdown, reportPaths.html], {
+    fn: options.suite === "demo" ? "demo" : "bench",
+    force: options.force === true,
+    inputs: problems.map((p) => p.file).filter((f) => f !== ""),
+  });
   const { surrogates, gridPoints, ...over } = options.overrides ?? {};
   const settings = { ...benchSettings(options.quick, options.seeds), ...over };
   const peer = options.peers === false ? null : PeerProcess.start();
@@ -71,9 +82,10 @@ export async function runSuite(options: RunSuiteOptions): Promise<{ report: Benc
       ...(progress ? { onProblem: (p: BenchProblem, state: "start" | "skip" | "done", i: number, n: number) => progress.problem(p.name, state, i, n) } : {}),
     });
     progress?.stop();
-    const paths = await writeBenchReport(report, options.out);
+    const paths = await writeBenchReport(report, options.out, claim);
     return { report, paths };
   } finally {
+    await claim.release();
     progress?.stop();
     peer?.close();
   }

@@ -3,6 +3,7 @@ import { createUnitRowMapper } from "../space/unit-row-mapper.js";
 import type { Scenario } from "../scenario/scenario.js";
 import type { Evaluator, EvaluatorFunction, EvaluatorInput, EvaluatorOutput } from "../evaluator/evaluator.js";
 import { resolveEvaluator } from "../evaluator/resolve-evaluator.js";
+import { EvaluatorProtocolError } from "../evaluator/evaluator-protocol-error.js";
 import type { DatasetRow } from "./dataset-row.js";
 import type { Shard } from "./shard.js";
 import { shardRange } from "./shard-range.js";
@@ -26,23 +27,26 @@ export interface GenerateDatasetOptions {
 function checkOutput(out: unknown, sample: number, reserved: ReadonlySet<string>, columns: string[] | undefined): string[] {
   const fn = "generateDataset";
   if (typeof out !== "object" || out === null || Array.isArray(out)) {
-    throw new TypeError(`${fn}: sample ${sample}: the evaluator must return an object, got ${JSON.stringify(out)}`);
+    throw new EvaluatorProtocolError(`${fn}: sample ${sample}: the evaluator must return an object, got ${JSON.stringify(out)}`, sample);
   }
   const keys = Object.keys(out);
   if (columns === undefined) {
-    if (keys.length === 0) throw new RangeError(`${fn}: sample ${sample}: the evaluator returned no outputs`);
+    if (keys.length === 0) throw new EvaluatorProtocolError(`${fn}: sample ${sample}: the evaluator returned no outputs`, sample);
     for (const k of keys) {
-      if (reserved.has(k)) throw new RangeError(`${fn}: sample ${sample}: output ${JSON.stringify(k)} clashes with an input column`);
+      if (reserved.has(k)) throw new EvaluatorProtocolError(`${fn}: sample ${sample}: output ${JSON.stringify(k)} clashes with an input column`, sample);
+      // a record key that JavaScript objects treat as their prototype: it would vanish from the row
+      if (k === "__proto__") throw new EvaluatorProtocolError(`${fn}: sample ${sample}: output name "__proto__" is not allowed`, sample);
     }
   } else if (keys.length !== columns.length || keys.some((k, j) => k !== columns[j])) {
-    throw new RangeError(
+    throw new EvaluatorProtocolError(
       `${fn}: sample ${sample}: outputs ${JSON.stringify(keys)} differ from the first sample's ${JSON.stringify(columns)}`,
+      sample,
     );
   }
   for (const k of keys) {
     const v = (out as Record<string, unknown>)[k];
     const ok = typeof v === "string" || typeof v === "boolean" || (typeof v === "number" && Number.isFinite(v));
-    if (!ok) throw new RangeError(`${fn}: sample ${sample}: output ${k} must be a finite number, string or boolean, got ${String(v)}`);
+    if (!ok) throw new EvaluatorProtocolError(`${fn}: sample ${sample}: output ${k} must be a finite number, string or boolean, got ${String(v)}`, sample);
   }
   return keys;
 }
@@ -60,7 +64,8 @@ const RELEASED: number[] = [];
  * @param scenario - a validated scenario.
  * @param options - n, design, seed, optional shard, skip and evaluator.
  * @returns an async iterable of rows.
- * @throws TypeError/RangeError (when iteration starts) for bad options or a bad evaluator answer.
+ * @throws TypeError/RangeError (when iteration starts) for bad options; EvaluatorProtocolError naming the sample
+ *   for a bad evaluator answer (not an object, no outputs, a reserved or changed name, a non-finite value).
  */
 export async function* generateDataset(scenario: Scenario, options: GenerateDatasetOptions): AsyncGenerator<DatasetRow> {
   const fn = "generateDataset";
@@ -86,7 +91,7 @@ export async function* generateDataset(scenario: Scenario, options: GenerateData
   // Object.assign, not {...a, ...b}: V8 spreads two objects into one far more slowly (measured ~20×)
   const inputOf = (i: number): EvaluatorInput => Object.assign({}, scenario.fixed, recordOf(i));
   const launch = (i: number): void => {
-    const p = Promise.resolve().then(() => evaluator.evaluate(inputOf(i)));
+    const p = Promise.resolve().then(() => evaluator.evaluate(inputOf(i), { sample: i }));
     p.catch(() => {});
     inFlight.push(p);
   };
@@ -94,7 +99,7 @@ export async function* generateDataset(scenario: Scenario, options: GenerateData
     let out: EvaluatorOutput;
     if (concurrency === 1) {
       // in-process evaluators: no promise per row unless the evaluator returns one
-      const answer = evaluator.evaluate(inputOf(i));
+      const answer = evaluator.evaluate(inputOf(i), { sample: i });
       out = typeof (answer as { then?: unknown }).then === "function" ? await answer : (answer as EvaluatorOutput);
     } else {
       while (next < end && inFlight.length < concurrency) launch(next++);

@@ -1,5 +1,5 @@
-import { createReadStream, createWriteStream, existsSync } from "node:fs";
-import { open, rename, stat, writeFile } from "node:fs/promises";
+import { createReadStream, createWriteStream } from "node:fs";
+import { open, stat } from "node:fs/promises";
 import { basename } from "node:path";
 import { pipeline } from "node:stream/promises";
 import type { DatasetManifest } from "./dataset-manifest.js";
@@ -7,6 +7,7 @@ import { formatManifest } from "./format-manifest.js";
 import { manifestPathFor } from "./manifest-path-for.js";
 import { readManifest } from "./read-manifest.js";
 import { sha256File } from "./sha256-file.js";
+import { claimOutput, type ClaimedOutput } from "../output/claim-output.js";
 
 async function headerLength(path: string): Promise<number> {
   const fh = await open(path, "r");
@@ -27,7 +28,8 @@ const SAME = ["design", "seed", "n", "evaluator", "packageVersion"] as const;
  * Joins the shards of one dataset (written with `shard: k/N`) into one CSV, byte-identical to the file an
  * unsharded run writes, with its manifest. Each shard's manifest is checked first: same scenario (name and
  * SHA-256), design, seed, n, evaluator, package version and columns; every shard 1…N present exactly once;
- * each CSV's size and SHA-256 as its manifest records.
+ * each CSV's size and SHA-256 as its manifest records. The outputs are claimed before any work (claimOutput:
+ * not a shard, an existing file only with `force`, exclusive lock) and renamed into place only when complete.
  * @param shardPaths - the shard CSVs, in any order.
  * @param out - the merged CSV (its manifest goes beside it).
  * @param options - `force` replaces an existing `out`.
@@ -45,9 +47,17 @@ export async function mergeShards(
   }
   if (typeof out !== "string" || out === "") throw new TypeError(`${fn}: out must be a non-empty path`);
   if (shardPaths.length === 0) throw new RangeError(`${fn}: no shards given`);
-  if (existsSync(out) && options.force !== true) {
-    throw new RangeError(`${fn}: ${out} already exists; use --force (force: true) to replace it`);
+  const inputs = shardPaths.flatMap((p) => [p, manifestPathFor(p)]);
+  const claim = await claimOutput([out, manifestPathFor(out)], { fn, force: options.force, inputs });
+  try {
+    return await mergeClaimed(shardPaths, out, claim);
+  } finally {
+    await claim.release();
   }
+}
+
+async function mergeClaimed(shardPaths: readonly string[], out: string, claim: ClaimedOutput): Promise<DatasetManifest> {
+  const fn = "mergeShards";
   const manifests = await Promise.all(shardPaths.map((p) => readManifest(p, fn)));
   const first = manifests[0]!;
   const count = first.shard.count;
@@ -65,6 +75,7 @@ export async function mergeShards(
       }
     }
     if (JSON.stringify(m.columns) !== JSON.stringify(first.columns)) throw new RangeError(`${fn}: ${name} has other columns`);
+    if (m.rows !== m.shard.end - m.shard.start) throw new RangeError(`${fn}: ${name}: its manifest says ${m.rows} rows but shard ${m.shard.index}/${m.shard.count} covers ${m.shard.end - m.shard.start}`);
     if (m.shard.count !== count) throw new RangeError(`${fn}: ${name} is shard ${m.shard.index}/${m.shard.count}, not of ${count}`);
     const twice = byIndex.get(m.shard.index);
     if (twice !== undefined) throw new RangeError(`${fn}: shard ${m.shard.index}/${count} is given twice (${basename(twice)}, ${name})`);
@@ -77,7 +88,7 @@ export async function mergeShards(
   const missing = Array.from({ length: count }, (_, k) => k + 1).filter((k) => !byIndex.has(k));
   if (missing.length > 0) throw new RangeError(`${fn}: shard${missing.length > 1 ? "s" : ""} ${missing.join(", ")} of ${count} missing`);
   const ordered = Array.from({ length: count }, (_, k) => byIndex.get(k + 1)!);
-  const temp = `${out}.partial`;
+  const temp = claim.temporary(out);
   const sink = createWriteStream(temp);
   for (let k = 0; k < count; k++) {
     const path = ordered[k]!;
@@ -88,11 +99,9 @@ export async function mergeShards(
     ...first,
     shard: { index: 1, count: 1, start: 0, end: first.n },
     rows: manifests.reduce((s, m) => s + m.rows, 0),
-    csv: { file: basename(out), bytes: (await stat(temp)).size, sha256: await sha256File(temp) },
+    csv: { file: basename(out), ...(await claim.seal(out)) },
   };
-  const manifestPath = manifestPathFor(out);
-  await writeFile(`${manifestPath}.partial`, formatManifest(manifest));
-  await rename(temp, out);
-  await rename(`${manifestPath}.partial`, manifestPath);
+  await claim.put(manifestPathFor(out), formatManifest(manifest));
+  await claim.commit();
   return manifest;
 }

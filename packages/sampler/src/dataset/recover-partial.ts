@@ -10,6 +10,10 @@ export interface RecoveredPartial {
   readonly rows: number;
   /** `sample` of the last kept row (undefined when none). */
   readonly lastSample: number | undefined;
+  /** `sample` of the first kept row (undefined when none). */
+  readonly firstSample: number | undefined;
+  /** Line number (1 = header) of the first kept row whose `sample` is not the previous row's + 1, if any. */
+  readonly brokenSequenceLine: number | undefined;
   /** Bytes dropped from the end (a torn last line). */
   readonly dropped: number;
 }
@@ -35,6 +39,8 @@ export async function recoverPartial(path: string): Promise<RecoveredPartial | u
   let good = 0;
   let rows = 0;
   let lastSample: number | undefined;
+  let firstSample: number | undefined;
+  let brokenSequenceLine: number | undefined;
   try {
     for await (const { record, info } of parser as AsyncIterable<{ record: string[]; info: { bytes: number } }>) {
       const complete = info.bytes < size || endsWithNewline;
@@ -52,7 +58,10 @@ export async function recoverPartial(path: string): Promise<RecoveredPartial | u
       }
       good = info.bytes;
       rows += 1;
-      lastSample = Number(record[0]);
+      const id = Number(record[0]);
+      if (rows === 1) firstSample = id;
+      else if (brokenSequenceLine === undefined && !(id === lastSample! + 1)) brokenSequenceLine = rows + 1;
+      lastSample = id;
     }
   } catch (error) {
     if (error instanceof RangeError) throw error;
@@ -62,5 +71,5 @@ export async function recoverPartial(path: string): Promise<RecoveredPartial | u
   }
   if (header === undefined) return undefined;
   if (good < size) await truncate(path, good);
-  return { header, rows, lastSample, dropped: size - good };
+  return { header, rows, lastSample, firstSample, brokenSequenceLine, dropped: size - good };
 }

@@ -1,6 +1,6 @@
 import { existsSync } from "node:fs";
-import { readFile, rename, rm, stat, writeFile } from "node:fs/promises";
-import { basename, dirname } from "node:path";
+import { readFile, rm, writeFile } from "node:fs/promises";
+import { basename } from "node:path";
 import { createCsvWriter, type CsvWriter } from "../csv/create-csv-writer.js";
 import type { DesignKind } from "../design/create-design.js";
 import type { Evaluator, EvaluatorFunction } from "../evaluator/evaluator.js";
@@ -16,7 +16,8 @@ import { PACKAGE_VERSION } from "./package-version.js";
 import { recoverPartial } from "./recover-partial.js";
 import type { Shard } from "./shard.js";
 import { shardRange } from "./shard-range.js";
-import { sha256File } from "./sha256-file.js";
+import { claimOutput, type ClaimedOutput } from "../output/claim-output.js";
+import { EvaluatorProtocolError } from "../evaluator/evaluator-protocol-error.js";
 
 /** Options of {@link writeDataset}. */
 export interface WriteDatasetOptions {
@@ -30,27 +31,27 @@ export interface WriteDatasetOptions {
   readonly resume?: boolean;
   /** Replace an existing output file. */
   readonly force?: boolean;
+  /** Files the run reads (e.g. the scenario file): an `out` that is one of them is refused. */
+  readonly inputs?: readonly string[];
   /** Evaluator (default: the scenario's exact massing evaluator). Not closed here. */
   readonly evaluator?: Evaluator | EvaluatorFunction;
   /** Called after each row with rows done and rows in this file. */
   readonly onProgress?: (done: number, total: number) => void;
 }
 
-/** The in-progress file of `out` and the settings file that lets `resume` check it belongs to the same run. */
-function partialPaths(out: string): { csv: string; settings: string } {
-  return { csv: `${out}.partial`, settings: `${out}.partial.json` };
-}
 
 /**
- * Writes a dataset CSV and its manifest (streamed: rows are never held). The CSV is written under
- * `<out>.partial` and renamed when complete; an existing `out` is never replaced unless `force` is set. With
+ * Writes a dataset CSV and its manifest (streamed: rows are never held). The outputs are claimed first
+ * (claimOutput: folder writable, not an input, an existing `out` or manifest only replaced with `force`, and an
+ * exclusive lock, so a second run writing the same `out` is refused). The CSV is written under `<out>.partial`,
+ * fsynced, hashed from the bytes on disk and renamed when complete. With
  * `resume`, an interrupted run (same scenario, design, seed, n, shard and evaluator, checked against the
  * settings saved beside the partial file) continues after its last complete row: a torn last line is dropped,
  * no row is lost or repeated, and the result is byte-identical to an uninterrupted run.
  * @param scenario - a validated scenario.
  * @param options - output path, n, design, seed, shard, resume, force, evaluator, progress callback.
  * @returns the manifest written.
- * @throws RangeError when `out` exists without `force`, or a partial file does not match this run.
+ * @throws RangeError when `out` exists without `force`, another run writes it, or a partial file does not match this run.
  */
 export async function writeDataset(scenario: Scenario, options: WriteDatasetOptions): Promise<DatasetManifest> {
   const fn = "writeDataset";
@@ -58,10 +59,18 @@ export async function writeDataset(scenario: Scenario, options: WriteDatasetOpti
     throw new TypeError(`${fn}: options.out must be a non-empty path`);
   }
   const { out } = options;
-  if (existsSync(out) && options.force !== true) {
-    throw new RangeError(`${fn}: ${out} already exists; use --force (force: true) to replace it`);
+  const manifestPath = manifestPathFor(out);
+  const claim = await claimOutput([out, manifestPath], { fn, force: options.force, inputs: options.inputs, keepTemporary: true });
+  try {
+    return await writeClaimed(scenario, options, claim);
+  } finally {
+    await claim.release();
   }
-  if (!existsSync(dirname(out))) throw new RangeError(`${fn}: the folder of ${out} does not exist`);
+}
+
+async function writeClaimed(scenario: Scenario, options: WriteDatasetOptions, claim: ClaimedOutput): Promise<DatasetManifest> {
+  const fn = "writeDataset";
+  const { out } = options;
   const shard = options.shard ?? { index: 1, count: 1 };
   const { start, end } = shardRange(options.n, shard);
   const evaluator = resolveEvaluator(scenario, options.evaluator);
@@ -75,7 +84,8 @@ export async function writeDataset(scenario: Scenario, options: WriteDatasetOpti
     packageVersion: PACKAGE_VERSION,
   };
   const settingsText = `${JSON.stringify(settings, null, 2)}\n`;
-  const partial = partialPaths(out);
+  // The in-progress file (the claim's temporary name) and the settings that let `resume` check it is the same run.
+  const partial = { csv: claim.temporary(out), settings: `${out}.partial.json` };
   let done = 0;
   let header: string[] | undefined;
   if (options.resume === true && existsSync(partial.csv)) {
@@ -89,7 +99,13 @@ export async function writeDataset(scenario: Scenario, options: WriteDatasetOpti
     const recovered = await recoverPartial(partial.csv);
     if (recovered !== undefined) {
       const expectedLast = recovered.rows === 0 ? undefined : start + recovered.rows - 1;
-      if (recovered.header[0] !== "sample" || recovered.lastSample !== expectedLast) {
+      const expectedFirst = recovered.rows === 0 ? undefined : start;
+      if (recovered.brokenSequenceLine !== undefined) {
+        throw new RangeError(
+          `${fn}: ${partial.csv} line ${recovered.brokenSequenceLine}: the sample ids are not consecutive (a row missing, repeated or out of order); run without --resume`,
+        );
+      }
+      if (recovered.header[0] !== "sample" || recovered.lastSample !== expectedLast || recovered.firstSample !== expectedFirst) {
         throw new RangeError(`${fn}: ${partial.csv} does not hold rows ${start}… of this run; run without --resume`);
       }
       done = recovered.rows;
@@ -116,6 +132,16 @@ export async function writeDataset(scenario: Scenario, options: WriteDatasetOpti
       done += 1;
       options.onProgress?.(done, total);
     }
+    await evaluator.finish?.();
+  } catch (error) {
+    await writer?.close().catch(() => undefined);
+    writer = undefined;
+    if (error instanceof EvaluatorProtocolError && error.misaligned) {
+      // answers of a program without ids may belong to other samples: keep no row of this run for --resume
+      await rm(partial.csv, { force: true });
+      await rm(partial.settings, { force: true });
+    }
+    throw error;
   } finally {
     await writer?.close();
   }
@@ -130,12 +156,10 @@ export async function writeDataset(scenario: Scenario, options: WriteDatasetOpti
     inputSchema: inputSchemaOf(scenario.parameters),
     ...(plateProfile === undefined ? {} : { plateProfile }),
     rows: total,
-    csv: { file: basename(out), bytes: (await stat(partial.csv)).size, sha256: await sha256File(partial.csv) },
+    csv: { file: basename(out), ...(await claim.seal(out)) },
   };
-  const manifestPath = manifestPathFor(out);
-  await writeFile(`${manifestPath}.partial`, formatManifest(manifest));
-  await rename(partial.csv, out);
-  await rename(`${manifestPath}.partial`, manifestPath);
+  await claim.put(manifestPathFor(out), formatManifest(manifest));
+  await claim.commit();
   await rm(partial.settings, { force: true });
   return manifest;
 }

@@ -1,4 +1,4 @@
-import type { Evaluator, EvaluatorInput } from "./evaluator.js";
+import type { EvaluationContext, Evaluator, EvaluatorInput } from "./evaluator.js";
 import { openCommandChannel } from "./command-channel.js";
 
 const MAX_TIMER_MS = 2_147_483_647;
@@ -22,11 +22,19 @@ export interface CommandEvaluatorOptions {
    * (default: the smaller of 5 000 and timeoutMs, 5 000 when timeoutMs is 0).
    */
   readonly graceMs?: number;
+  /**
+   * "ids" (default): each request line carries `"sample": <id>`, and the program must answer in the order asked,
+   * each answer echoing its `sample`. "ordered": compatibility mode for programs that answer strictly in order
+   * without ids; the number of answers is checked when the program closes (finish).
+   */
+  readonly protocol?: "ids" | "ordered";
 }
 
 /**
- * Runs an external program and streams samples to it as JSON Lines (one JSON object per line on its stdin); it
- * must answer each line, in order, with one JSON object of outputs per line on its stdout. So a user's own,
+ * Runs an external program and streams samples to it as JSON Lines (one JSON object per line on its stdin, with
+ * the sample's id as `"sample"`); it must answer each line, in order, with one JSON object of outputs per line on
+ * its stdout that echoes the same `"sample"` (README "Evaluator protocol"). A missing, extra, duplicate or
+ * out-of-order answer fails the evaluation with an EvaluatorProtocolError naming the sample. So a user's own,
  * slower procedural model can be sampled like the built-in rule. With `processes: N`, N copies run side by side
  * and each sample goes to the copy with the fewest unanswered lines; the dataset generator still writes the
  * answers in design order, so the output does not depend on N.
@@ -60,6 +68,8 @@ export function commandEvaluator(command: string, options: CommandEvaluatorOptio
   if (!(graceMs > 0 && graceMs <= MAX_TIMER_MS)) {
     throw new RangeError(`${fn}: graceMs must be in (0, ${MAX_TIMER_MS}] ms, got ${graceMs}`);
   }
+  const protocol = options.protocol ?? "ids";
+  if (protocol !== "ids" && protocol !== "ordered") throw new RangeError(`${fn}: protocol must be "ids" or "ordered", got ${JSON.stringify(protocol)}`);
   const stopOthers = (e: Error): void => {
     for (const c of channels) void c.stop(e);
   };
@@ -69,16 +79,23 @@ export function commandEvaluator(command: string, options: CommandEvaluatorOptio
       timeoutMs,
       graceMs,
       label: `process ${k + 1} of ${processes}`,
+      protocol,
       onTimeout: stopOthers,
     }),
   );
+  let unnamed = 0; // ids for evaluations called without a context (direct library use)
   return {
-    name: `command: ${command}`,
+    name: protocol === "ids" ? `command: ${command}` : `command (ordered): ${command}`,
     concurrency: window * processes,
-    evaluate(input: EvaluatorInput) {
+    evaluate(input: EvaluatorInput, context?: EvaluationContext) {
       let best = channels[0]!;
       for (const c of channels) if (c.pending < best.pending) best = c;
-      return best.send(input);
+      return best.send(input, context?.sample ?? unnamed++);
+    },
+    async finish() {
+      const results = await Promise.allSettled(channels.map((c) => c.finish()));
+      const bad = results.find((r): r is PromiseRejectedResult => r.status === "rejected");
+      if (bad) throw bad.reason;
     },
     async close() {
       await Promise.all(channels.map((c) => c.close()));

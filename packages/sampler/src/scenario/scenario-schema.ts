@@ -47,6 +47,26 @@ function outside(value: unknown, slot: SlotDomain): string | undefined {
   return undefined;
 }
 
+/** Dimensionless units: a ratio may be written "1" or left empty. */
+const DIMENSIONLESS = new Set(["1", ""]);
+
+/** Whether a parameter's unit is its slot's (values are never converted, so they must already be in it). */
+function sameUnit(given: string, slotUnit: string): boolean {
+  return given === slotUnit || (DIMENSIONLESS.has(given) && DIMENSIONLESS.has(slotUnit));
+}
+
+/** The message for a parameter in another unit, with the exact conversion when it is a length in feet. */
+function unitMismatch(name: string, given: string, slotUnit: string): string {
+  const shown = slotUnit === "" ? '"1" (dimensionless)' : JSON.stringify(slotUnit);
+  const hint =
+    slotUnit === "m" && /^(ft|foot|feet)$/i.test(given)
+      ? "; give the range in metres (1 ft = 0.3048 m exactly)"
+      : slotUnit === "1" && given === "%"
+        ? "; give the ratio itself (e.g. 2.5, not 250 %)"
+        : "";
+  return `${name} is in ${shown}, got unit ${JSON.stringify(given)}: values are not converted${hint}`;
+}
+
 /** The zod schema of a scenario file (format version 1); see README "Scenario files". */
 export const scenarioSchema = z
   .strictObject({
@@ -70,6 +90,7 @@ export const scenarioSchema = z
         issue([...at, "name"], `${JSON.stringify(p.name)} is not a massing slot; use one of ${Object.keys(SCENARIO_SLOTS).join(", ")}`);
       }
       if (given.has(p.name)) issue([...at, "name"], `parameter ${JSON.stringify(p.name)} is defined twice`);
+      if (slot !== undefined && !sameUnit(p.unit, slot.unit)) issue([...at, "unit"], unitMismatch(p.name, p.unit, slot.unit));
       given.set(p.name, at);
       if (p.kind === "categorical") {
         const seen = new Set<string | number>();

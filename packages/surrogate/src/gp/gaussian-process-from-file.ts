@@ -1,6 +1,7 @@
 import type { GpModelFile } from "../model-file/gp-model-file-schema.js";
 import { GaussianProcess } from "./gaussian-process.js";
 import { GpComponent } from "./gp-component.js";
+import { checkGpLoadMemory } from "../predict/gp-memory-budget.js";
 import type { GpTargetDiagnostics } from "./gp-diagnostics.js";
 
 /**
@@ -15,6 +16,7 @@ export function gaussianProcessFromFile(file: GpModelFile, fileName = "model fil
   const d = file.inputs.length;
   const p = file.payload;
   const n = p.trainingInputs.length;
+  checkGpLoadMemory(fn, fileName, n, d, file.targets.length);
   if (p.components.length !== file.targets.length) {
     throw new RangeError(`${fn}: ${fileName}: payload.components must have ${file.targets.length} entries, got ${p.components.length}`);
   }

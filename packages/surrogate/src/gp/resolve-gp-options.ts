@@ -38,6 +38,13 @@ const range = (fn: string, field: string, v: readonly [number, number] | undefin
 };
 
 /**
+ * Largest fixed noise variance (standardised target units: the target's own variance is 1). Far beyond any
+ * meaningful noise; above it the kernel matrix's products overflow double precision (derived: its entries
+ * reach the noise variance, and their squares must stay below Number.MAX_VALUE ≈ 1.8·10^308).
+ */
+const MAX_NOISE_VARIANCE = 1e100;
+
+/**
  * Fills in and validates fitGaussianProcess options.
  * @param fn - caller name for messages.
  * @param o - user options.
@@ -51,6 +58,11 @@ export function resolveGpOptions(fn: string, o: GaussianProcessOptions, d: numbe
   if (!KERNEL_NAMES.includes(kernel)) throw new RangeError(`${fn}: options.kernel must be one of ${KERNEL_NAMES.join(", ")}, got ${String(kernel)}`);
   const ard = o.ard ?? true;
   const noiseVariance = o.noiseVariance === undefined ? undefined : positiveNumber(fn, "options.noiseVariance", o.noiseVariance, true);
+  if (noiseVariance !== undefined && noiseVariance > MAX_NOISE_VARIANCE) {
+    throw new RangeError(
+      `${fn}: options.noiseVariance must be ≤ ${MAX_NOISE_VARIANCE} (standardised target units, where the target's variance is 1), got ${noiseVariance}`,
+    );
+  }
   const floor = positiveNumber(fn, "options.noiseFloor", o.noiseFloor ?? 1e-6);
   const ceiling = positiveNumber(fn, "options.noiseCeiling", o.noiseCeiling ?? 1);
   if (ceiling < floor) throw new RangeError(`${fn}: options.noiseCeiling must be ≥ options.noiseFloor`);

@@ -1,6 +1,7 @@
 import type { ModelFileShape } from "./model-file-shape.js";
 import type { Predictor, PredictorOutput } from "./predictor.js";
 import { finiteVector, objectField, packRows } from "./predictor-checks.js";
+import { checkGpLoadMemory } from "./gp-memory-budget.js";
 
 const FN = "loadPredictor";
 const SQRT3 = Math.sqrt(3);
@@ -61,6 +62,7 @@ export function createGpPredictor(file: ModelFileShape): Predictor {
   const rows = p.trainingInputs;
   if (!Array.isArray(rows) || rows.length === 0) throw new RangeError(`${FN}: payload.trainingInputs must be a non-empty array`);
   const n = rows.length;
+  checkGpLoadMemory(FN, "model file", n, d, t);
   const x = new Float64Array(n * d);
   rows.forEach((r, i) => x.set(finiteVector(FN, `payload.trainingInputs[${i}]`, r, d), i * d));
   const comps = p.components;

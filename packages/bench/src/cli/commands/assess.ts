@@ -1,5 +1,5 @@
 import type { Command } from "commander";
-import { mkdir, readFile, writeFile } from "node:fs/promises";
+import { mkdir, readFile } from "node:fs/promises";
 import { basename, join } from "node:path";
 import { centredL2Discrepancy, checkSchemaRows, minPairwiseDistance, readTable } from "@floorcast/sampler";
 import {
@@ -37,6 +37,7 @@ interface AssessOptions {
   seed: string;
   strict?: boolean;
   out: string;
+  force?: boolean;
 }
 
 const int = (flag: string, v: string, min: number): number => {
@@ -67,6 +68,7 @@ export function registerAssessCommand(program: Command, ctx: CommandContext): vo
     .option("--seed <n>", "seed of folds, subsets and refits", "0")
     .option("--strict", "refuse (exit 2) when test rows lie outside the model's domain of validity")
     .requiredOption("--out <dir>", "directory for report.json, report.md and report.html")
+    .option("--force", "replace existing report files")
     .action(async (opts: AssessOptions) => {
       await runAssess(opts, ctx);
     });
@@ -78,6 +80,9 @@ async function runAssess(opts: AssessOptions, ctx: CommandContext): Promise<void
   if ((folds !== undefined || opts.learningCurve) && !opts.train) {
     throw new UsageError("assess: --folds and --learning-curve need the training data (--train FILE.csv)");
   }
+  await mkdir(opts.out, { recursive: true });
+  const reports = ["report.json", "report.md", "report.html"].map((f) => join(opts.out, f));
+  const claim = await ctx.claimOutput("assess", reports, { force: opts.force, inputs: [opts.model, opts.data, opts.train] });
   let text: string;
   try {
     text = await readFile(opts.model, "utf8");
@@ -139,12 +144,12 @@ async function runAssess(opts: AssessOptions, ctx: CommandContext): Promise<void
     sources: { model: basename(opts.model), data: basename(opts.data) },
     notes,
   });
-  await mkdir(opts.out, { recursive: true });
-  await writeFile(join(opts.out, "report.json"), JSON.stringify(report, null, 2) + "\n");
+  await claim.put(join(opts.out, "report.json"), JSON.stringify(report, null, 2) + "\n");
   // the renderers (and the chart packages) load only when a report is written
   const [{ renderTrustMarkdown }, { renderTrustHtml }] = await Promise.all([import("../../report/trust-report-markdown.js"), import("../../report/trust-report-html.js")]);
-  await writeFile(join(opts.out, "report.md"), renderTrustMarkdown(report));
-  await writeFile(join(opts.out, "report.html"), await renderTrustHtml(report, figures));
+  await claim.put(join(opts.out, "report.md"), renderTrustMarkdown(report));
+  await claim.put(join(opts.out, "report.html"), await renderTrustHtml(report, figures));
+  await claim.commit();
   const m = report.metrics;
   ctx.stdout.write(
     `assessed ${report.target} on ${m.n} test rows: RMSE ${m.rmse.toPrecision(4)}, MAE ${m.mae.toPrecision(4)}, max |error| ${m.maxAbsError.toPrecision(4)}, R² ${Number.isNaN(m.r2) ? "undefined" : m.r2.toFixed(4)}` +

@@ -14,6 +14,7 @@ interface BenchOptions {
   peers: boolean;
   problems?: string;
   out: string;
+  force?: boolean;
 }
 
 /**
@@ -32,6 +33,7 @@ export function registerBenchCommand(program: Command, ctx: CommandContext): voi
     .option("--no-peers", "skip scikit-learn's GP/MLP and scipy's LHS even when present")
     .option("--problems <dir>", "problems directory (default: the demo and standard problems shipped with floorcast)")
     .requiredOption("--out <dir>", "output directory: report.json, report.md, report.html; finished problems under problems/ (re-run to resume)")
+    .option("--force", "replace the report files of an earlier run in --out (an interrupted run resumes without it)")
     .action(async (opts: BenchOptions) => {
       let seeds: number | undefined;
       if (opts.seeds !== undefined) {
@@ -46,6 +48,7 @@ export function registerBenchCommand(program: Command, ctx: CommandContext): voi
         ...(seeds === undefined ? {} : { seeds }),
         quick: opts.quick === true,
         out: opts.out,
+        force: opts.force === true,
         peers: opts.peers,
         ...(opts.problems === undefined ? {} : { problemsDir: opts.problems }),
         progress: ctx.stderr,

@@ -18,10 +18,11 @@ export function registerDemoCommand(program: Command, ctx: CommandContext): void
     .option("--out <dir>", "output directory", "floorcast-demo")
     .option("--no-peers", "skip scikit-learn's GP/MLP and scipy's LHS even when present")
     .option("--quick", "the quick sizes (training sizes 20, 40, 80; 2 seeds): the demo always uses them; accepted as in bench")
-    .action(async (opts: { out: string; peers: boolean }) => {
+    .option("--force", "replace the report files of an earlier demo in --out")
+    .action(async (opts: { out: string; peers: boolean; force?: boolean }) => {
       const t0 = performance.now();
       ctx.stderr.write(`floorcast demo: the Quillmere demo suite, quick sizes. ${FLOORCAST_CAUTION}\n`);
-      const { report, paths } = await runSuite({ suite: "demo", quick: true, out: opts.out, peers: opts.peers, progress: ctx.stderr });
+      const { report, paths } = await runSuite({ suite: "demo", quick: true, out: opts.out, force: opts.force === true, peers: opts.peers, progress: ctx.stderr });
       const seconds = (performance.now() - t0) / 1000;
       ctx.stdout.write(`\n${formatTextTable(headlineTable(report))}\n\n`);
       ctx.stdout.write(`${FLOORCAST_CAUTION}\n\n`);

@@ -1,5 +1,3 @@
-import { existsSync } from "node:fs";
-import { rename, rm } from "node:fs/promises";
 import type { Command } from "commander";
 import { createCsvWriter, createDesign, DESIGN_KINDS } from "@floorcast/sampler";
 import type { DesignKind } from "@floorcast/sampler";
@@ -17,7 +15,10 @@ interface DesignOptions {
 
 /** Parses a whole-number option, naming it in the error. */
 function wholeNumber(name: string, text: string): number {
-  if (!/^[+-]?\d+$/.test(text.trim())) throw new UsageError(`design: --${name} must be a whole number, got ${JSON.stringify(text)}`);
+  // digits only, as sample and optimize read them: no sign (a negative seed or count is refused), no blanks
+  if (!/^\d+$/.test(text) || !Number.isSafeInteger(Number(text))) {
+    throw new UsageError(`design: --${name} must be a whole number ≥ 0, got ${JSON.stringify(text)}`);
+  }
   return Number(text);
 }
 
@@ -45,21 +46,13 @@ export function registerDesignCommand(program: Command, ctx: CommandContext): vo
       if (!(DESIGN_KINDS as readonly string[]).includes(opts.design)) {
         throw new UsageError(`design: --design must be one of ${DESIGN_KINDS.join(", ")}, got ${JSON.stringify(opts.design)}`);
       }
-      if (existsSync(opts.out) && opts.force !== true) {
-        throw new UsageError(`design: ${opts.out} exists; pass --force to replace it`);
-      }
+      const claim = await ctx.claimOutput("design", opts.out, { force: opts.force });
       const points = createDesign({ n, dims, design: opts.design as DesignKind, seed: opts.seed });
       const columns = Array.from({ length: dims }, (_, k) => `x${k + 1}`);
-      const partial = `${opts.out}.partial-${process.pid}`;
-      try {
-        const writer = createCsvWriter(partial, columns);
-        for (const row of points) await writer.write(row);
-        await writer.close();
-        await rename(partial, opts.out);
-      } catch (error) {
-        await rm(partial, { force: true });
-        throw error;
-      }
+      const writer = createCsvWriter(claim.temporary(opts.out), columns);
+      for (const row of points) await writer.write(row);
+      await writer.close();
+      await claim.commit();
       ctx.stderr.write(`design: wrote ${n} ${opts.design} points in ${dims} dimensions to ${opts.out}\n`);
     });
 }

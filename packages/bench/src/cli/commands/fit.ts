@@ -1,5 +1,4 @@
 import type { Command } from "commander";
-import { writeFile } from "node:fs/promises";
 import { basename } from "node:path";
 import type { CommandContext } from "../command-context.js";
 import { STDIO_PATH, withTableFile } from "../stdio-table.js";
@@ -18,6 +17,7 @@ type FitCommandOptions = Record<string, string | boolean | undefined> & {
   model: string;
   seed: string;
   out: string;
+  force?: boolean;
 };
 
 const names = (flag: string, v: string): string[] => {
@@ -43,7 +43,8 @@ export function registerFitCommand(program: Command, ctx: CommandContext): void 
     .requiredOption("--target <col[,col2]>", "target column(s), comma-separated")
     .option("--model <family>", `model family (${families})`, "gp")
     .option("--seed <n>", "seed of every random choice", "0")
-    .requiredOption("--out <model.json>", "model file to write");
+    .requiredOption("--out <model.json>", "model file to write")
+    .option("--force", "replace an existing output file");
   for (const o of [...MODEL_FAMILIES.flatMap((f) => f.options), ...UNCERTAINTY_OPTIONS]) {
     if (o.default === undefined) cmd.option(o.flags, o.description);
     else cmd.option(o.flags, o.description, o.default);
@@ -60,14 +61,12 @@ async function runFit(opts: FitCommandOptions, ctx: CommandContext): Promise<voi
   const clash = targets.find((t) => inputs.includes(t));
   if (clash) throw new UsageError(`fit: column ${clash} is both an input and a target`);
   const seed = parseWhole("fit", "--seed", opts.seed, 0);
+  const claim = await ctx.claimOutput("fit", opts.out, { force: opts.force, inputs: opts.data === STDIO_PATH ? [] : [opts.data] });
   // `-` is stdin, kept in a temporary file while the family reads it (plate-stack reads it twice).
   const { text, rows } = await withTableFile(ctx, opts.data, (file) =>
     fitModelFile({ data: file, inputs, targets, model: opts.model, seed, options: opts, say: (line) => ctx.stderr.write(`${line}\n`) }),
   );
-  try {
-    await writeFile(opts.out, text);
-  } catch (e) {
-    throw new UsageError(`fit: cannot write ${opts.out} (${(e as Error).message})`);
-  }
+  await claim.put(opts.out, text);
+  await claim.commit();
   ctx.stdout.write(`fit: ${opts.model} on ${rows} rows of ${opts.data === STDIO_PATH ? "stdin" : basename(opts.data)} → ${opts.out}\n${FLOORCAST_CAUTION}\n`);
 }

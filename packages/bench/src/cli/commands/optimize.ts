@@ -1,4 +1,4 @@
-import { mkdir, readFile, writeFile } from "node:fs/promises";
+import { mkdir, readFile } from "node:fs/promises";
 import { join } from "node:path";
 import type { Command } from "commander";
 import cliProgress from "cli-progress";
@@ -28,7 +28,14 @@ interface OptimizeOptions {
   seed: string;
   budget: string;
   out: string;
+  force?: boolean;
 }
+
+/**
+ * Most evaluations one `optimize` run may ask for: the optimisers keep every evaluation (a few hundred bytes
+ * each), so this bounds the run's memory to a few hundred MB, checked before anything is allocated.
+ */
+const MAX_OPTIMIZE_BUDGET = 1_000_000;
 
 const whole = (flag: string, v: string, min: number): number => {
   if (!/^\d+$/.test(v) || Number(v) < min) throw new UsageError(`optimize: ${flag} must be a whole number ≥ ${min}, got ${JSON.stringify(v)}`);
@@ -52,10 +59,17 @@ export function registerOptimizeCommand(program: Command, ctx: CommandContext): 
     .option("--seed <s>", "seed of every random draw", "1")
     .option("--budget <n>", "evaluations allowed (grid: its own count)", "2000")
     .requiredOption("--out <dir>", "output directory (optimum.json)")
+    .option("--force", "replace an existing optimum.json")
     .action(async (opts: OptimizeOptions) => {
       if ((opts.surrogate === undefined) === (opts.exact !== true)) throw new UsageError("optimize: give exactly one of --surrogate FILE or --exact");
       const seed = whole("--seed", opts.seed, 0);
       const budget = whole("--budget", opts.budget, 1);
+      if (budget > MAX_OPTIMIZE_BUDGET) {
+        throw new UsageError(`optimize: --budget must be at most ${MAX_OPTIMIZE_BUDGET} evaluations (every evaluation is kept for the report), got ${opts.budget}`);
+      }
+      await mkdir(opts.out, { recursive: true });
+      const file = join(opts.out, "optimum.json");
+      const claim = await ctx.claimOutput("optimize", file, { force: opts.force, inputs: [opts.problem, opts.surrogate] });
       const problem = await loadProblem(opts.problem);
       try {
         if (problem.kind === "site-selection") throw new UsageError(`optimize: ${problem.name} is a site-selection problem; rank its sites with floorcast bench`);
@@ -132,8 +146,6 @@ export function registerOptimizeCommand(program: Command, ctx: CommandContext): 
             surrogate: surrogateAtOptimum(model, variables, d.design, d.result as Record<string, number>, problem.outputs),
           }));
         }
-        await mkdir(opts.out, { recursive: true });
-        const file = join(opts.out, "optimum.json");
         const summary = {
           kind: "floorcast.optimum",
           formatVersion: 1,
@@ -148,7 +160,8 @@ export function registerOptimizeCommand(program: Command, ctx: CommandContext): 
           seconds,
           optima: designs,
         };
-        await writeFile(file, `${JSON.stringify(summary, null, 1)}\n`);
+        await claim.put(file, `${JSON.stringify(summary, null, 1)}\n`);
+        await claim.commit();
         if (designs.length === 0) {
           ctx.stderr.write(`optimize: no exactly feasible design found for ${problem.name}\n`);
           ctx.setExitCode(1);

@@ -10,6 +10,7 @@ import { noteUnsealedModel } from "../note-unsealed-model.js";
 import { modelInputSchema } from "../model-input-schema.js";
 import { FLOORCAST_CAUTION } from "../../floorcast-caution.js";
 import { STDIO_PATH, readTableArg, stdoutSink, withTableFile } from "../stdio-table.js";
+import { predictRows } from "../predict-rows.js";
 
 interface PredictOptions {
   model: string;
@@ -18,6 +19,7 @@ interface PredictOptions {
   train?: string;
   strict?: boolean;
   keep?: string;
+  force?: boolean;
 }
 
 /**
@@ -38,6 +40,7 @@ export function registerPredictCommand(program: Command, ctx: CommandContext): v
     .requiredOption("--data <file.csv>", "rows to predict, with the model's input columns (- reads stdin)")
     .requiredOption("--out <predictions.csv>", "CSV to write (- writes stdout)")
     .option("--keep <columns>", "data columns to copy before the predictions, comma-separated (default all; \"\" for none)")
+    .option("--force", "replace an existing output file")
     .option("--train <train.csv>", "the model's training data, for the in_domain flag of models that do not store their inputs")
     .option("--strict", "refuse (exit 2, nothing written) when rows lie outside the model's domain of validity")
     .action(async (opts: PredictOptions) => {
@@ -46,6 +49,7 @@ export function registerPredictCommand(program: Command, ctx: CommandContext): v
 }
 
 async function runPredict(opts: PredictOptions, ctx: CommandContext): Promise<void> {
+  const claim = opts.out === STDIO_PATH ? null : await ctx.claimOutput("predict", opts.out, { force: opts.force, inputs: [opts.model, opts.data, opts.train] });
   let text: string;
   try {
     text = await readFile(opts.model, "utf8");
@@ -74,11 +78,12 @@ async function runPredict(opts: PredictOptions, ctx: CommandContext): Promise<vo
     ctx.stderr.write("predict: the model stores no training inputs, so in_domain is left empty (give --train to fill it)\n");
   }
   const flags = domain ? refuseOutsideDomain("predict", domain, table.x, opts.data, opts.strict === true) : null;
-  const p = model.predict(table.x);
-  const iv = p.interval;
+  const rows = predictRows(model, table.x, domain);
+  const iv = model.kind === "conformal" || rows.some((r) => r.lower !== undefined);
   const predicted = [
     ...model.targets.flatMap((t) => [`${t}_mean`, `${t}_sd`, ...(iv ? [`${t}_lower`, `${t}_upper`] : [])]),
     "in_domain",
+    "error",
   ];
   const clash = keep.filter((c) => predicted.includes(c));
   if (clash.length > 0) throw new UsageError(`predict: kept column ${clash.join(", ")} has the name of a prediction column; choose others with --keep`);
@@ -90,19 +95,31 @@ async function runPredict(opts: PredictOptions, ctx: CommandContext): Promise<vo
   });
   const columns = [...keep, ...predicted];
   const toStdout = opts.out === STDIO_PATH;
-  const writer = createCsvWriter(toStdout ? stdoutSink(ctx.stdout) : opts.out, columns);
+  const writer = createCsvWriter(toStdout ? stdoutSink(ctx.stdout) : claim!.temporary(opts.out), columns);
+  let failed = 0;
   for (let i = 0; i < table.x.length; i++) {
+    const r = rows[i]!;
+    if (r.error) {
+      failed += 1;
+      if (failed === 1) ctx.stderr.write(`predict: data row ${i + 1} of ${opts.data === STDIO_PATH ? "stdin" : basename(opts.data)}: ${r.error}\n`);
+    }
     await writer.write([
       ...kept.map((value) => value(i)),
       ...model.targets.flatMap((_, j) => [
-        p.mean[i]![j]!,
-        p.sd ? p.sd[i]![j]! : "",
-        ...(iv ? [iv.lower[i]![j]!, iv.upper[i]![j]!] : []),
+        r.mean ? r.mean[j]! : "",
+        r.sd ? r.sd[j]! : "",
+        ...(iv ? [r.lower ? r.lower[j]! : "", r.upper ? r.upper[j]! : ""] : []),
       ]),
       flags ? (flags[i] ? 1 : 0) : "",
+      r.error ?? "",
     ]);
   }
   await writer.close();
+  if (claim) await claim.commit();
+  if (failed > 0) {
+    ctx.stderr.write(`predict: ${failed} of ${table.x.length} rows could not be predicted (their error column says why)\n`);
+    ctx.setExitCode(1);
+  }
   (toStdout ? ctx.stderr : ctx.stdout).write(
     `predict: ${table.x.length} rows of ${opts.data === STDIO_PATH ? "stdin" : basename(opts.data)} → ${toStdout ? "stdout" : opts.out}` +
       (flags ? `; ${flags.filter((f) => !f).length} outside the domain of validity (in_domain = 0)\n` : "\n") +

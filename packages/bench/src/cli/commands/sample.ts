@@ -26,6 +26,7 @@ interface SampleOptions {
   processes?: string;
   evaluatorTimeout?: string;
   plateProfile?: boolean;
+  evaluatorProtocol?: string;
   out: string;
 }
 
@@ -36,13 +37,16 @@ function wholeNumber(flag: string, text: string, min: number): number {
   return Number(text);
 }
 
-/** Parses `--evaluator-timeout SECONDS` (decimals allowed, 0 = no limit) into milliseconds. */
+/** Parses `--evaluator-timeout SECONDS` (decimals allowed, 0 = no limit, else whole milliseconds ≥ 0.001 s) into milliseconds. */
 function timeoutSeconds(text: string): number {
   const s = Number(text);
-  if (!/^\s*\d+(\.\d+)?\s*$/.test(text) || !(s * 1000 <= 2_147_483_647)) {
-    throw new UsageError(`sample: --evaluator-timeout must be a number of seconds in [0, 2147483] (0 = no limit), got ${JSON.stringify(text)}`);
+  const ms = Math.round(s * 1000);
+  if (!/^\s*\d+(\.\d+)?\s*$/.test(text) || !(ms <= 2_147_483_647) || Math.abs(ms - s * 1000) > 1e-6 * Math.max(1, ms)) {
+    throw new UsageError(
+      `sample: --evaluator-timeout must be 0 (no limit) or whole milliseconds in [0.001, 2147483.647] seconds, got ${JSON.stringify(text)}`,
+    );
   }
-  return Math.ceil(s * 1000);
+  return ms;
 }
 
 /**
@@ -73,6 +77,11 @@ export function registerSampleCommand(program: Command, ctx: CommandContext): vo
       "--plate-profile",
       "also write the plate profile (rule_*, plateArea_k, plateWidth_k columns) that the plate-stack surrogate learns from",
     )
+    .option(
+      "--evaluator-protocol <ids|ordered>",
+      "with --evaluator-command: ids (each line carries \"sample\", echoed by its answer) or ordered (compatibility: answers in order, no ids)",
+      "ids",
+    )
     .requiredOption("--out <file.csv>", "output CSV (manifest written beside it)")
     .action(async (opts: SampleOptions) => {
       const n = wholeNumber("--n", opts.n, 1);
@@ -92,9 +101,13 @@ export function registerSampleCommand(program: Command, ctx: CommandContext): vo
           "sample: --plate-profile is for the built-in massing rule; an external evaluator writes the plate-profile columns itself",
         );
       }
+      const protocol = opts.evaluatorProtocol ?? "ids";
+      if (protocol !== "ids" && protocol !== "ordered") {
+        throw new UsageError(`sample: --evaluator-protocol must be ids or ordered, got ${JSON.stringify(protocol)}`);
+      }
       const evaluator: Evaluator | undefined =
         opts.evaluatorCommand !== undefined
-          ? commandEvaluator(opts.evaluatorCommand, { processes, timeoutMs })
+          ? commandEvaluator(opts.evaluatorCommand, { processes, timeoutMs, protocol })
           : opts.plateProfile === true
             ? massingEvaluator(scenario, { plateProfile: true })
             : undefined;
@@ -108,6 +121,7 @@ export function registerSampleCommand(program: Command, ctx: CommandContext): vo
           ...(shard === undefined ? {} : { shard }),
           resume: opts.resume === true,
           force: opts.force === true,
+          inputs: [opts.scenario],
           ...(evaluator === undefined ? {} : { evaluator }),
           onProgress: (done, total) => {
             bar ??= createProgressBar(ctx.stderr, total, `sample ${scenario.name}`);
