@@ -1,6 +1,5 @@
 import type { Command } from "commander";
 import {
-  DESIGN_KINDS,
   commandEvaluator,
   createProgressBar,
   loadScenario,
@@ -8,17 +7,17 @@ import {
   massingEvaluator,
   parseShard,
   writeDataset,
-  type DesignKind,
   type Evaluator,
 } from "@floorcast/sampler";
 import type { CommandContext } from "../command-context.js";
+import { DESIGN_OPTION_HELP, resolveDesignOption } from "../resolve-design-option.js";
 import { UsageError } from "../usage-error.js";
 
 interface SampleOptions {
   scenario: string;
   n: string;
   seed: string;
-  design: string;
+  design?: string;
   shard?: string;
   resume?: boolean;
   force?: boolean;
@@ -58,7 +57,7 @@ export function registerSampleCommand(program: Command, ctx: CommandContext): vo
     .requiredOption("--scenario <file>", "scenario file (JSON, see README \"Scenario files\")")
     .requiredOption("--n <n>", "design size (all shards together)")
     .requiredOption("--seed <s>", "seed of the design (whole number)")
-    .option("--design <kind>", `design: ${DESIGN_KINDS.join(", ")}`, "lhs-maximin")
+    .option("--design <kind>", DESIGN_OPTION_HELP)
     .option("--shard <k/N>", "write only the k-th of N contiguous slices of the same design")
     .option("--resume", "continue an interrupted run from its last complete row")
     .option("--force", "replace an existing output file")
@@ -77,11 +76,9 @@ export function registerSampleCommand(program: Command, ctx: CommandContext): vo
     .action(async (opts: SampleOptions) => {
       const n = wholeNumber("--n", opts.n, 1);
       const seed = wholeNumber("--seed", opts.seed, 0);
-      if (!(DESIGN_KINDS as readonly string[]).includes(opts.design)) {
-        throw new UsageError(`sample: --design must be one of ${DESIGN_KINDS.join(", ")}, got ${JSON.stringify(opts.design)}`);
-      }
       const shard = opts.shard === undefined ? undefined : parseShard(opts.shard);
       const scenario = await loadScenario(opts.scenario);
+      const { design, announce } = resolveDesignOption("sample", opts.design, n, scenario.parameters.length, ctx.stderr);
       const processes = wholeNumber("--processes", opts.processes ?? "1", 1);
       if (processes > 1 && opts.evaluatorCommand === undefined) {
         throw new UsageError("sample: --processes needs --evaluator-command");
@@ -99,17 +96,27 @@ export function registerSampleCommand(program: Command, ctx: CommandContext): vo
             ? massingEvaluator(scenario, { plateProfile: true })
             : undefined;
       let bar: ReturnType<typeof createProgressBar> | undefined;
+      let designBar: ReturnType<typeof createProgressBar> | undefined;
       try {
         const manifest = await writeDataset(scenario, {
           out: opts.out,
           n,
           seed,
-          design: opts.design as DesignKind,
+          design,
           ...(shard === undefined ? {} : { shard }),
           resume: opts.resume === true,
           force: opts.force === true,
           ...(evaluator === undefined ? {} : { evaluator }),
+          onDesignProgress: (done, total) => {
+            announce();
+            designBar ??= createProgressBar(ctx.stderr, total, `design ${design}`, "steps");
+            designBar.update(done);
+          },
           onProgress: (done, total) => {
+            if (bar === undefined) {
+              designBar?.stop();
+              announce();
+            }
             bar ??= createProgressBar(ctx.stderr, total, `sample ${scenario.name}`);
             bar.update(done);
           },
@@ -121,6 +128,7 @@ export function registerSampleCommand(program: Command, ctx: CommandContext): vo
             `sha256 ${manifest.csv.sha256}\nmanifest ${manifestPathFor(opts.out)}\n${manifest.caution}\n`,
         );
       } finally {
+        designBar?.stop();
         bar?.stop();
         await evaluator?.close();
       }
