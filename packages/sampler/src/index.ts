@@ -51,6 +51,8 @@ export type { GenerateDatasetOptions } from "./dataset/generate-dataset.js";
 export { parseShard } from "./dataset/shard.js";
 export type { Shard } from "./dataset/shard.js";
 export { shardRange } from "./dataset/shard-range.js";
+export { shardFromEnvironment } from "./dataset/shard-from-environment.js";
+export type { EnvironmentShard } from "./dataset/shard-from-environment.js";
 export { writeDataset } from "./dataset/write-dataset.js";
 export type { WriteDatasetOptions } from "./dataset/write-dataset.js";
 export { mergeShards } from "./dataset/merge-shards.js";
