@@ -3,7 +3,9 @@ import { mkdtempSync, readFileSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { loadProblem } from "../../packages/bench/src/problem/load-problem.js";
-import { DEFAULT_PROBLEMS_DIR } from "../../packages/bench/src/problem/load-suite.js";
+import { fileURLToPath } from "node:url";
+// the repository's problem files (the package finds its shipped copies relative to its built dist/)
+const DEFAULT_PROBLEMS_DIR = fileURLToPath(new URL("../../datasets/problems/", import.meta.url));
 import { floorcastTrainer } from "../../packages/bench/src/harness/floorcast-trainer.js";
 import { sampleTrainingSet } from "../../packages/bench/src/harness/sample-training-set.js";
 import { runCli } from "./run-cli.js";

@@ -32,6 +32,20 @@ describe("floorcast sample", async () => {
     const m = JSON.parse(readFileSync(join(dir, "a.manifest.json"), "utf8"));
     expect(m).toMatchObject({ design: "lhs", seed: 5, n: 40, rows: 40 });
   });
+  it("without --design, uses the default for the size, says so in one stderr line and records it in the manifest", async () => {
+    const base0 = ["sample", "--scenario", scenario, "--seed", "5"];
+    for (const [n, design] of [["30", "lhs-maximin-cd"], ["1025", "sobol"]] as const) {
+      const r = await floorcast(...base0, "--n", n, "--out", `default-${n}.csv`);
+      expect(r.status).toBe(0);
+      const lines = r.stderr.trim().split("\n");
+      expect(lines).toHaveLength(1);
+      expect(lines[0]).toMatch(new RegExp(`^sample: design ${design} \\(O\\(n`));
+      expect(JSON.parse(readFileSync(join(dir, `default-${n}.manifest.json`), "utf8"))).toMatchObject({ design, n: Number(n) });
+    }
+    const given = await floorcast(...base0, "--n", "1025", "--design", "sobol", "--out", "given.csv");
+    expect(given.stderr).toBe(""); // a chosen design is not announced
+    expect(same("given.csv", "default-1025.csv")).toBe(true);
+  });
   it("refuses to overwrite without --force (exit 2, one line, no stack); --force gives the identical file", async () => {
     const r = await floorcast(...base, "--out", "a.csv");
     expect(r.status).toBe(2);

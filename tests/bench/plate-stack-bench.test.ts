@@ -1,7 +1,9 @@
 import { describe, expect, it } from "vitest";
 import { join } from "node:path";
 import { loadProblem } from "../../packages/bench/src/problem/load-problem.js";
-import { DEFAULT_PROBLEMS_DIR } from "../../packages/bench/src/problem/load-suite.js";
+import { fileURLToPath } from "node:url";
+// the repository's problem files (the package finds its shipped copies relative to its built dist/)
+const DEFAULT_PROBLEMS_DIR = fileURLToPath(new URL("../../datasets/problems/", import.meta.url));
 import { benchPlans } from "../../packages/bench/src/harness/bench-plans.js";
 import { benchSettings } from "../../packages/bench/src/harness/bench-settings.js";
 import { floorcastTrainer } from "../../packages/bench/src/harness/floorcast-trainer.js";

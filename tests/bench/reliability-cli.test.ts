@@ -71,11 +71,11 @@ describe("every floorcast command under hostile input (in-process)", () => {
     const r = await run(["--help"]);
     expect(r.code).toBe(0);
     const listed = [...r.out.matchAll(/^ {2}([a-z]+) /gm)].map((m) => m[1]).filter((c) => c !== "help").sort();
-    expect(listed).toEqual(["assess", "bench", "demo", "design", "fit", "massing", "merge", "optimize", "predict", "sample"]);
+    expect(listed).toEqual(["assess", "bench", "demo", "design", "fit", "massing", "merge", "optimize", "parcels", "predict", "sample"]);
   });
 
   it("exit status 2 with a one-line message for an unknown option, on every command", async () => {
-    for (const c of ["assess", "bench", "demo", "design", "fit", "massing", "merge", "optimize", "predict", "sample"]) {
+    for (const c of ["assess", "bench", "demo", "design", "fit", "massing", "merge", "optimize", "parcels", "predict", "sample"]) {
       const r = await run([c, "--no-such-option"]);
       expectCleanOutcome(r, [2], c);
       // commander names the first problem it meets: the unknown option, or a required option left out.
@@ -88,6 +88,7 @@ describe("every floorcast command under hostile input (in-process)", () => {
     const missing = join(dir, "does-not-exist.json");
     const cases: string[][] = [
       ["massing", "--input", missing],
+      ["parcels", "--input", missing, "--out", outPath("geojson")],
       ["sample", "--scenario", missing, "--n", "4", "--seed", "1", "--out", outPath()],
       ["merge", missing, "--out", outPath()],
       ["fit", "--data", missing, "--inputs", "a", "--target", "y", "--out", outPath("json")],

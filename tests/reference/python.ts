@@ -23,7 +23,7 @@ export function referenceAvailable(modules: readonly string[]): boolean {
   if (!ok) {
     const msg =
       `\n!!! REFERENCE LIBRARIES MISSING: ${modules.join(", ")} not importable by ${PYTHON}.\n` +
-      `!!! Reference checks are SKIPPED. Install: apt-get update && apt-get install -y python3-scipy python3-sklearn python3-shapely\n`;
+      `!!! Reference checks are SKIPPED. Install: apt-get update && apt-get install -y python3-scipy python3-sklearn python3-shapely python3-pyproj\n`;
     if (process.env.FLOORCAST_REQUIRE_REFERENCE === "1") throw new Error(msg);
     console.warn(msg);
   }

@@ -45,6 +45,8 @@ export type { KernelHyperparameters } from "./gp/kernels/kernel-hyperparameters.
 export { minimizeBounded } from "./gp/fit/minimize-bounded.js";
 export type { BoundedMinimum, MinimizeBoundedOptions, ValueAndGradient } from "./gp/fit/minimize-bounded.js";
 export { fitGaussianProcess } from "./gp/fit-gaussian-process.js";
+export { fitGaussianProcessParallel } from "./gp/fit-gaussian-process-parallel.js";
+export type { ParallelGaussianProcessOptions } from "./gp/fit-gaussian-process-parallel.js";
 export type { GaussianProcessOptions, GivenHyperparameters } from "./gp/gaussian-process-options.js";
 export { GaussianProcess } from "./gp/gaussian-process.js";
 export type { GaussianProcessParts, GpPrediction } from "./gp/gaussian-process.js";

@@ -1,16 +1,17 @@
 /**
  * Quality and cost of space-filling designs for n = 500 points in d = 12 dimensions, side by side in one
- * run: floorcast's lhs-maximin (ESE on φp) and lhs-maximin-cd (then discrepancy-lowering exchanges under a
+ * run: the default design (defaultDesign: lhs-maximin-cd at this size), floorcast's lhs-maximin (ESE on φp) and lhs-maximin-cd (then discrepancy-lowering exchanges under a
  * distance floor) against a plain random LHS and, when Debian's python3-scipy is
  * on /usr/bin/python3, scipy.stats.qmc.LatinHypercube(d, optimization="random-cd", seed) (timed inside
  * Python by tests/reference/scipy_lhs_bench.py; its points are scored here with the same metrics).
- * Then times ESE for n = 2,000, d = 12 (aim: under 30 s). Prints medians over seeds and ratios.
+ * Prints the default's three ratios against random-cd (aims: minimum distance ≥ 1.0 ×, centred discrepancy ≤ 1.05 ×,
+ * CPU time ≤ 1.0 ×). Then times ESE for n = 2,000, d = 12 (aim: under 30 s). Prints medians over seeds and ratios.
  * A script, not a test: `npm run build && npm run bench:design`.
  */
 import { spawnSync } from "node:child_process";
 import { existsSync } from "node:fs";
 import { fileURLToPath } from "node:url";
-import { centredL2Discrepancy, createDesign, minPairwiseDistance, phiP } from "@floorcast/sampler";
+import { centredL2Discrepancy, createDesign, defaultDesign, minPairwiseDistance, phiP } from "@floorcast/sampler";
 import type { DesignKind } from "@floorcast/sampler";
 import { FLOORCAST_CAUTION } from "../floorcast-caution.js";
 
@@ -68,6 +69,8 @@ function summarise(name: string, scores: Score[]): Record<string, number | strin
 }
 
 const rows: Record<string, number | string>[] = [];
+const DEFAULT = defaultDesign(N, D);
+rows.push(summarise(`default (${DEFAULT})`, SEEDS.map((s) => ours(DEFAULT, N, s))));
 rows.push(summarise("lhs-maximin (default)", SEEDS.map((s) => ours("lhs-maximin", N, s))));
 rows.push(summarise("lhs-maximin (100 iter.)", SEEDS.map((s) => ours("lhs-maximin", N, s, 100))));
 rows.push(summarise("lhs-maximin-cd", SEEDS.map((s) => ours("lhs-maximin-cd", N, s))));
@@ -81,7 +84,7 @@ console.log(`(wall times depend on machine load; CPU seconds are this process's 
 console.log(`Design quality, n = ${N}, d = ${D}, medians over seeds ${SEEDS.join(", ")} (cd2 = squared centred L2 discrepancy, as scipy reports it)`);
 console.log(["design", "phiP", "minDist", "cd2", "seconds", "cpuSeconds"].map((h) => h.padEnd(26)).join(""));
 for (const r of rows) console.log(Object.values(r).map((v) => fmt(v).padEnd(26)).join(""));
-const OURS = 3; // the first three rows are floorcast's optimised designs
+const OURS = 4; // the first four rows are floorcast's default and optimised designs
 for (const mine of rows.slice(0, OURS)) {
   const m = mine as Record<string, number>;
   for (const other of rows.slice(OURS)) {
@@ -92,6 +95,16 @@ for (const mine of rows.slice(0, OURS)) {
         `wall time ×${(m.seconds / o.seconds).toFixed(3)}, CPU time ×${(m.cpuSeconds / o.cpuSeconds).toFixed(3)}`,
     );
   }
+}
+if (haveScipy) {
+  const m = rows[0] as Record<string, number>;
+  const o = rows.at(-1) as Record<string, number>;
+  const ratios = { minDist: m.minDist / o.minDist, cd2: m.cd2 / o.cd2, cpu: m.cpuSeconds / o.cpuSeconds };
+  const ok = ratios.minDist >= 1 && ratios.cd2 <= 1.05 && ratios.cpu <= 1;
+  console.log(
+    `\nDefault design (${DEFAULT}) / scipy random-cd at n = ${N}, d = ${D}: minimum distance ×${ratios.minDist.toFixed(3)} (aim ≥ 1.0), ` +
+      `centred discrepancy ×${ratios.cd2.toFixed(3)} (aim ≤ 1.05), CPU time ×${ratios.cpu.toFixed(3)} (aim ≤ 1.0): ${ok ? "all met" : "NOT MET"}`,
+  );
 }
 if (!haveScipy) console.log("scipy not found on /usr/bin/python3: the random-cd column is missing (apt-get install python3-scipy).");
 

@@ -2,24 +2,25 @@
  * Long runs in bounded memory, measured side by side in one run (a script, not a test: `npm run bench:long` after
  * a build). Each phase runs in its own child process, so its peak resident memory (process.resourceUsage().maxRSS,
  * plus process.memoryUsage().rss sampled every 20 ms) is its own:
- * - design: the part of writing held whole, the 1,000,000-row unit design (createDesign; maximin designs are a
- *   global optimisation and integer and categorical levels are balanced over whole columns, so it is computed whole);
- * - write: writeDataset streams a 1,000,000-row Ferrow Corner dataset (design "lhs") to CSV;
- * - read: openTableStream reads it back one row at a time;
+ * - write: writeDataset streams a Ferrow Corner dataset with the default design of its size (defaultDesign: Sobol'
+ *   above 1,000 rows, generated row by row) to CSV, at 10^5, 10^6 and 10^7 rows: peak RSS against n;
+ * - read: openTableStream reads the files up to 10^6 rows back one row at a time;
  * - gp: a GP fitted on 1,000 rows predicts the mean and sd of 10,000 new points.
  * Reported: rows per second, the RSS at the phase's start and its peak, and the growth beside the size of the data
  * (CSV bytes; for the GP, 10,000 × 1,000 doubles: the query × training cross-kernel if it were held whole).
- * `FLOORCAST_LONG_ROWS` overrides the row count.
+ * `FLOORCAST_LONG_ROWS` overrides the row counts (comma-separated).
  */
 import { execFileSync } from "node:child_process";
 import { mkdtempSync, rmSync, statSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
-import { createDesign, loadScenario, openTableStream, writeDataset } from "@floorcast/sampler";
+import { createDesign, defaultDesign, loadScenario, openTableStream, writeDataset } from "@floorcast/sampler";
 import { fitGaussianProcess } from "@floorcast/surrogate";
 
-const ROWS = Number(process.env.FLOORCAST_LONG_ROWS ?? "1000000");
+const SIZES = (process.env.FLOORCAST_LONG_ROWS ?? "100000,1000000,10000000").split(",").map(Number);
+/** Files up to this many rows are also read back. */
+const READ_MAX = 1_000_000;
 const scenarioPath = fileURLToPath(new URL("../../../../datasets/scenarios/ferrow-corner.json", import.meta.url));
 
 interface PhaseResult {
@@ -35,20 +36,19 @@ interface PhaseResult {
 const mb = (bytes: number) => bytes / 2 ** 20;
 
 /** Runs one phase in this process, sampling RSS, and prints its result as JSON on stdout. */
-async function runPhase(phase: string, csv: string): Promise<void> {
+async function runPhase(phase: string, csv: string, rows: number): Promise<void> {
   const startRss = process.memoryUsage().rss;
   let sampled = startRss;
   const timer = setInterval(() => (sampled = Math.max(sampled, process.memoryUsage().rss)), 20);
   const t0 = performance.now();
   let items = 0;
   let dataBytes = 0;
-  if (phase === "design") {
-    const s = await loadScenario(scenarioPath);
-    items = createDesign({ n: ROWS, dims: s.parameters.length, design: "lhs", seed: 11 }).length;
-    dataBytes = statSync(csv).size;
-  } else if (phase === "write") {
-    await writeDataset(await loadScenario(scenarioPath), { out: csv, n: ROWS, design: "lhs", seed: 11, force: true });
-    items = ROWS;
+  if (phase === "write") {
+    const scenario = await loadScenario(scenarioPath);
+    const design = defaultDesign(rows, scenario.parameters.length);
+    await writeDataset(scenario, { out: csv, n: rows, design, seed: 11, force: true });
+    phase = `write (${design})`;
+    items = rows;
     dataBytes = statSync(csv).size;
   } else if (phase === "read") {
     for await (const row of await openTableStream(csv, { categorical: ["limitedBy"] })) {
@@ -87,17 +87,25 @@ async function runPhase(phase: string, csv: string): Promise<void> {
 }
 
 if (process.argv[2] === "--phase") {
-  await runPhase(process.argv[3]!, process.argv[4]!);
+  await runPhase(process.argv[3]!, process.argv[4]!, Number(process.argv[5]));
 } else {
   const dir = mkdtempSync(join(tmpdir(), "floorcast-long-"));
-  const csv = join(dir, "long.csv");
   const self = fileURLToPath(import.meta.url);
   try {
     console.log(`Long runs (each phase in its own process; peak RSS = process.resourceUsage().maxRSS)\n`);
     console.log("phase | items | items/s | seconds | start RSS (MB) | peak RSS (MB) | sampled peak (MB) | growth (MB) | data (MB) | growth ÷ data");
-    for (const phase of ["write", "design", "read", "gp"]) {
-      const out = execFileSync(process.execPath, [self, "--phase", phase, csv], { encoding: "utf8", maxBuffer: 1 << 20 });
+    const phases: [string, number][] = [];
+    for (const n of SIZES) {
+      phases.push(["write", n]);
+      if (n <= READ_MAX) phases.push(["read", n]);
+    }
+    phases.push(["gp", 0]);
+    for (const [phase, n] of phases) {
+      const csv = join(dir, `long-${n}.csv`);
+      const out = execFileSync(process.execPath, [self, "--phase", phase, csv, String(n)], { encoding: "utf8", maxBuffer: 1 << 20 });
       const r = JSON.parse(out.trim().split("\n").at(-1)!) as PhaseResult;
+      if (phase === "read") rmSync(csv, { force: true });
+      if (phase === "write" && n > READ_MAX) rmSync(csv, { force: true });
       console.log(
         [
           r.phase,

@@ -19,6 +19,7 @@ const COMMANDS: readonly { readonly name: string; readonly summary: string; read
   { name: "fit", summary: "fit a surrogate to a CSV and write the model file", load: async () => (await import("./commands/fit.js")).registerFitCommand },
   { name: "predict", summary: "predict with a saved surrogate for every row of a CSV", load: async () => (await import("./commands/predict.js")).registerPredictCommand },
   { name: "design", summary: "write a space-filling design in the unit cube to CSV", load: async () => (await import("./commands/design.js")).registerDesignCommand },
+  { name: "parcels", summary: "evaluate the exact rule on the parcels of a GeoJSON file, results as properties", load: async () => (await import("./commands/parcels.js")).registerParcelsCommand },
 ];
 
 /**

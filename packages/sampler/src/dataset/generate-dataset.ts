@@ -1,4 +1,7 @@
 import { createDesign, type DesignKind } from "../design/create-design.js";
+import { designRows } from "../design/design-rows.js";
+import { isStreamedDesign } from "../design/is-streamed-design.js";
+import { createPointMapper } from "../space/point-mapper.js";
 import { createUnitRowMapper } from "../space/unit-row-mapper.js";
 import type { Scenario } from "../scenario/scenario.js";
 import type { Evaluator, EvaluatorFunction, EvaluatorInput, EvaluatorOutput } from "../evaluator/evaluator.js";
@@ -22,6 +25,8 @@ export interface GenerateDatasetOptions {
   readonly skip?: number;
   /** Evaluator (default: the exact massing evaluator of the scenario). */
   readonly evaluator?: Evaluator | EvaluatorFunction;
+  /** Progress of an optimised design's search (createDesign's onProgress), before the first row. */
+  readonly onDesignProgress?: (done: number, total: number) => void;
 }
 
 function checkOutput(out: unknown, sample: number, reserved: ReadonlySet<string>, columns: string[] | undefined): string[] {
@@ -51,15 +56,14 @@ function checkOutput(out: unknown, sample: number, reserved: ReadonlySet<string>
   return keys;
 }
 
-/** Stands in for a unit row once its dataset row has been yielded. */
-const RELEASED: number[] = [];
-
 /**
  * Generates a dataset: the design (createDesign over the scenario's parameters, mapped by mapUnitToSpace), each
  * sample evaluated — by default with the exact massing rule — and yielded as a row in design order: `sample`,
  * every parameter, then every output (for the massing rule: every scalar of MassingResult, `limitedBy` as a
- * string, `coverageCapped` as 0/1). The whole design is computed first (lhs-maximin is global), then only the
- * shard's slice is evaluated; up to `evaluator.concurrency` evaluations run at once, answers kept in order.
+ * string, `coverageCapped` as 0/1). Streamed designs ("random", "sobol"; isStreamedDesign) are generated row by row
+ * from the shard's first row, in memory that does not grow with n, their integer and categorical levels taken per
+ * point (createPointMapper); the other designs (Latin or optimised over all n rows) are computed whole first, then
+ * only the shard's slice is evaluated. Up to `evaluator.concurrency` evaluations run at once, answers kept in order.
  * Rows are produced one at a time and never held.
  * @param scenario - a validated scenario.
  * @param options - n, design, seed, optional shard, skip and evaluator.
@@ -79,38 +83,65 @@ export async function* generateDataset(scenario: Scenario, options: GenerateData
     throw new RangeError(`${fn}: skip must be an integer in [0, ${end - start}], got ${skip}`);
   }
   const evaluator = resolveEvaluator(scenario, options.evaluator);
-  const unit = createDesign({ n: options.n, dims: scenario.parameters.length, design: options.design, seed: options.seed });
-  // Records are mapped row by row when needed (the rule of mapUnitToSpace): only the unit rows are held whole.
-  const recordOf = createUnitRowMapper({ parameters: scenario.parameters }, unit, "mapUnitToSpace");
+  const dims = scenario.parameters.length;
+  const design = {
+    n: options.n,
+    dims,
+    design: options.design,
+    seed: options.seed,
+    ...(options.onDesignProgress === undefined ? {} : { onProgress: options.onDesignProgress }),
+  };
+  let recordAt: (i: number) => Record<string, number | string>;
+  if (isStreamedDesign(options.design)) {
+    // Rows come in order, one per call, never held.
+    const rows = designRows({ ...design, start: start + skip, end });
+    const map = createPointMapper({ parameters: scenario.parameters }, "mapUnitToSpace");
+    recordAt = () => map(rows.next().value as number[]);
+  } else {
+    const unit = createDesign(design);
+    // Records are mapped row by row when needed (the rule of mapUnitToSpace): only the unit rows are held whole.
+    const recordOf = createUnitRowMapper({ parameters: scenario.parameters }, unit, "mapUnitToSpace");
+    recordAt = (i) => {
+      const record = recordOf(i);
+      unit[i] = RELEASED; // row i is never read again: free its coordinates as the run goes
+      return record;
+    };
+  }
   const names = scenario.parameters.map((p) => p.name);
   const reserved = new Set(["sample", ...names]);
-  const inFlight: Promise<EvaluatorOutput>[] = [];
+  const inFlight: { record: Record<string, number | string>; answer: Promise<EvaluatorOutput> }[] = [];
   const concurrency = Math.max(1, evaluator.concurrency);
   let next = start + skip;
   let columns: string[] | undefined;
   // Object.assign, not {...a, ...b}: V8 spreads two objects into one far more slowly (measured ~20×)
-  const inputOf = (i: number): EvaluatorInput => Object.assign({}, scenario.fixed, recordOf(i));
+  const inputOf = (record: Record<string, number | string>): EvaluatorInput => Object.assign({}, scenario.fixed, record);
   const launch = (i: number): void => {
-    const p = Promise.resolve().then(() => evaluator.evaluate(inputOf(i), { sample: i }));
-    p.catch(() => {});
-    inFlight.push(p);
+    const record = recordAt(i);
+    const answer = Promise.resolve().then(() => evaluator.evaluate(inputOf(record), { sample: i }));
+    answer.catch(() => {});
+    inFlight.push({ record, answer });
   };
   for (let i = next; i < end; i++) {
     let out: EvaluatorOutput;
+    let record: Record<string, number | string>;
     if (concurrency === 1) {
       // in-process evaluators: no promise per row unless the evaluator returns one
-      const answer = evaluator.evaluate(inputOf(i), { sample: i });
+      record = recordAt(i);
+      const answer = evaluator.evaluate(inputOf(record), { sample: i });
       out = typeof (answer as { then?: unknown }).then === "function" ? await answer : (answer as EvaluatorOutput);
     } else {
       while (next < end && inFlight.length < concurrency) launch(next++);
-      out = await inFlight.shift()!;
+      const first = inFlight.shift()!;
+      record = first.record;
+      out = await first.answer;
     }
     columns = checkOutput(out, i, reserved, columns);
     const row: Record<string, number | string | boolean> = { sample: i };
-    const record = recordOf(i);
-    unit[i] = RELEASED; // row i is never read again: free its coordinates as the run goes
     for (const name of names) row[name] = record[name]!;
     for (const k of columns) row[k] = out[k]!;
     yield row;
   }
 }
+
+/** Stands in for a unit row once its dataset row has been yielded. */
+const RELEASED: number[] = [];

@@ -8,6 +8,7 @@ import { manifestPathFor } from "./manifest-path-for.js";
 import { readManifest } from "./read-manifest.js";
 import { sha256File } from "./sha256-file.js";
 import { claimOutput, type ClaimedOutput } from "../output/claim-output.js";
+import { shardRange } from "./shard-range.js";
 
 async function headerLength(path: string): Promise<number> {
   const fh = await open(path, "r");
@@ -27,9 +28,10 @@ const SAME = ["design", "seed", "n", "evaluator", "packageVersion"] as const;
 /**
  * Joins the shards of one dataset (written with `shard: k/N`) into one CSV, byte-identical to the file an
  * unsharded run writes, with its manifest. Each shard's manifest is checked first: same scenario (name and
- * SHA-256), design, seed, n, evaluator, package version and columns; every shard 1…N present exactly once;
- * each CSV's size and SHA-256 as its manifest records. The outputs are claimed before any work (claimOutput:
- * not a shard, an existing file only with `force`, exclusive lock) and renamed into place only when complete.
+ * SHA-256), design, seed, n, evaluator, package version and columns; every shard 1…N present exactly once and
+ * complete (its rows are the whole slice shardRange gives); each CSV's size and SHA-256 as its manifest records.
+ * The outputs are claimed before any work (claimOutput: not a shard, an existing file only with `force`,
+ * exclusive lock) and renamed into place only when complete.
  * @param shardPaths - the shard CSVs, in any order.
  * @param out - the merged CSV (its manifest goes beside it).
  * @param options - `force` replaces an existing `out`.
@@ -75,8 +77,17 @@ async function mergeClaimed(shardPaths: readonly string[], out: string, claim: C
       }
     }
     if (JSON.stringify(m.columns) !== JSON.stringify(first.columns)) throw new RangeError(`${fn}: ${name} has other columns`);
-    if (m.rows !== m.shard.end - m.shard.start) throw new RangeError(`${fn}: ${name}: its manifest says ${m.rows} rows but shard ${m.shard.index}/${m.shard.count} covers ${m.shard.end - m.shard.start}`);
+    if (m.rows !== m.shard.end - m.shard.start) {
+      throw new RangeError(`${fn}: ${name}: its manifest says ${m.rows} rows but shard ${m.shard.index}/${m.shard.count} covers ${m.shard.end - m.shard.start} (${name} is incomplete or altered)`);
+    }
     if (m.shard.count !== count) throw new RangeError(`${fn}: ${name} is shard ${m.shard.index}/${m.shard.count}, not of ${count}`);
+    const expected = shardRange(m.n, { index: m.shard.index, count });
+    if (m.shard.start !== expected.start || m.shard.end !== expected.end || m.rows !== expected.end - expected.start) {
+      throw new RangeError(
+        `${fn}: ${name} is incomplete or not shard ${m.shard.index}/${count} of ${m.n} rows: it holds ${m.rows} rows of ${m.shard.start}…${m.shard.end - 1}, ` +
+          `the shard is ${expected.start}…${expected.end - 1}`,
+      );
+    }
     const twice = byIndex.get(m.shard.index);
     if (twice !== undefined) throw new RangeError(`${fn}: shard ${m.shard.index}/${count} is given twice (${basename(twice)}, ${name})`);
     byIndex.set(m.shard.index, p);

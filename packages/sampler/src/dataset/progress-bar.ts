@@ -16,13 +16,14 @@ export interface ProgressBar {
  * @param stream - where the bar is drawn (usually stderr).
  * @param total - the number of steps.
  * @param label - shown before the bar.
+ * @param unit - what is counted (default "rows").
  * @returns the progress display.
  */
-export function createProgressBar(stream: Writable, total: number, label: string): ProgressBar {
+export function createProgressBar(stream: Writable, total: number, label: string, unit = "rows"): ProgressBar {
   if ((stream as Writable & { isTTY?: boolean }).isTTY !== true) return { update() {}, stop() {} };
   const cliProgress = createRequire(import.meta.url)("cli-progress") as typeof cliProgressModule;
   const bar = new cliProgress.SingleBar(
-    { stream: stream as NodeJS.WriteStream, format: `${label} [{bar}] {value}/{total} rows, eta {eta}s`, fps: 5 },
+    { stream: stream as NodeJS.WriteStream, format: `${label} [{bar}] {value}/{total} ${unit}, eta {eta}s`, fps: 5 },
     cliProgress.Presets.shades_classic,
   );
   bar.start(total, 0);

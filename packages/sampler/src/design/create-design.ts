@@ -26,6 +26,12 @@ export interface CreateDesignOptions {
    * iteration tries 5,000 exchanges at O(n) each); 20 for "lhs-maximin-cd". More iterations give a better design, slowly.
    */
   readonly eseIterations?: number;
+  /**
+   * Progress of the optimised designs ("lhs-maximin", "lhs-maximin-cd"): called after each ESE outer iteration and
+   * after the discrepancy polish with steps done and steps planned (the search may stop early; the last call has
+   * done = total).
+   */
+  readonly onProgress?: (done: number, total: number) => void;
 }
 
 /**
@@ -49,6 +55,9 @@ export function createDesign(options: CreateDesignOptions): number[][] {
   if (typeof options !== "object" || options === null) throw new TypeError(`${fn}: options must be an object`);
   const n = checkCount(fn, "n", options.n);
   const dims = checkCount(fn, "dims", options.dims);
+  if (options.onProgress !== undefined && typeof options.onProgress !== "function") {
+    throw new TypeError(`${fn}: onProgress must be a function`);
+  }
   if (n * dims > MAX_DESIGN_VALUES) {
     // A design is held whole (about 8 bytes per value plus per-row overhead): refuse before running out of memory.
     throw new RangeError(`${fn}: n × dims = ${n * dims} values is more than a design held in memory may have (${MAX_DESIGN_VALUES})`);
@@ -70,8 +79,15 @@ export function createDesign(options: CreateDesignOptions): number[][] {
             ? defaultEseIterations(n)
             : CD_ESE_ITERATIONS
           : checkCount(fn, "eseIterations", options.eseIterations, 0);
-      const maximin = eseOptimise(latinHypercube(n, dims, rng, true), rng, { outerIterations: iterations }).points;
-      return options.design === "lhs-maximin" ? maximin : polishCentredDiscrepancy(maximin, rng).points;
+      const polish = options.design === "lhs-maximin" ? 0 : 1;
+      const report = options.onProgress;
+      const maximin = eseOptimise(latinHypercube(n, dims, rng, true), rng, {
+        outerIterations: iterations,
+        ...(report === undefined ? {} : { onProgress: (done: number, total: number) => report(done, total + polish) }),
+      });
+      const points = polish === 0 ? maximin.points : polishCentredDiscrepancy(maximin.points, rng).points;
+      report?.(maximin.outerIterations + polish, maximin.outerIterations + polish);
+      return points;
     }
     case "sobol":
       if (dims > SOBOL_MAX_DIMS) {

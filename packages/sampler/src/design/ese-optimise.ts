@@ -9,6 +9,8 @@ export interface EseOptions {
   readonly patience?: number;
   /** Morris–Mitchell exponent p (default 50). */
   readonly p?: number;
+  /** Called after each outer iteration with iterations done and the most there may be. */
+  readonly onProgress?: (done: number, total: number) => void;
 }
 
 /** What the search did. */
@@ -100,6 +102,7 @@ export function eseOptimise(start: readonly (readonly number[])[], rng: SeededRa
       } else if (ratio > 0.1) threshold *= 0.9;
       else warming = true;
     }
+    options.onProgress?.(outer + 1, maxOuter);
   }
   return { points: state.points(best), phiStart, phiBest, outerIterations: outer };
 }

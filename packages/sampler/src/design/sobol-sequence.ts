@@ -20,6 +20,21 @@ export const SOBOL_MAX_DIMS = SOBOL_DIRECTION_NUMBERS.length + 1;
  * @returns n rows of d coordinates in [0, 1).
  */
 export function sobolSequence(n: number, d: number, rng?: SeededRandom): number[][] {
+  const next = sobolRowsFrom(0, d, rng);
+  const rows: number[][] = [];
+  for (let i = 0; i < n; i++) rows.push(next());
+  return rows;
+}
+
+/**
+ * The points of sobolSequence(·, d, rng) from index `start` on, one per call, in O(d) memory: the scramble is drawn
+ * first (as sobolSequence draws it), point `start` is built directly from the bits of its Gray code
+ * g = start XOR (start >> 1) (x = shift XOR the direction integers of g's set bits; Antonov & Saleev 1979), and each
+ * later point flips the direction integer of the lowest zero bit of its predecessor's index.
+ * @param start - index of the first point (0 … 2^30 − 1). @param d - dimensions. @param rng - as for sobolSequence.
+ * @returns a function giving point start, start + 1, … on successive calls.
+ */
+export function sobolRowsFrom(start: number, d: number, rng?: SeededRandom): () => number[] {
   const v = directionIntegers(d);
   const shift = new Uint32Array(d);
   if (rng !== undefined) {
@@ -28,15 +43,19 @@ export function sobolSequence(n: number, d: number, rng?: SeededRandom): number[
   }
   const scale = 1 / 2 ** BITS;
   const quasi = Uint32Array.from(shift);
-  const rows: number[][] = [];
-  for (let i = 0; i < n; i++) {
-    if (i > 0) {
+  const gray = (start ^ (start >>> 1)) >>> 0;
+  for (let j = 0; j < BITS; j++) {
+    if ((gray >>> j) & 1) for (let k = 0; k < d; k++) quasi[k] = ((quasi[k] as number) ^ ((v[k] as Uint32Array)[j] as number)) >>> 0;
+  }
+  let i = start;
+  return () => {
+    if (i > start) {
       const c = trailingZeros(i);
       for (let k = 0; k < d; k++) quasi[k] = ((quasi[k] as number) ^ ((v[k] as Uint32Array)[c] as number)) >>> 0;
     }
-    rows.push(Array.from(quasi, (q) => q * scale));
-  }
-  return rows;
+    i++;
+    return Array.from(quasi, (q) => q * scale);
+  };
 }
 
 /** v[k][j]: direction integer of bit j + 1 for dimension k, m_{j+1} · 2^(BITS − j − 1). */

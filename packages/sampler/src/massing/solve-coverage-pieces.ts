@@ -1,22 +1,59 @@
-import { hullWidth } from "../geometry/hull-width.js";
 import { mitreInset } from "../geometry/mitre-inset.js";
 import { ringArea, ringIsConvex, ringPerimeter } from "../geometry/ring-metrics.js";
 
-const MAX_ITERATIONS = 200;
+const MAX_STEPS = 60;
 
-function insetAll(pieces: readonly Float64Array[], convex: readonly boolean[], delta: number, extent: number): Float64Array[] {
-  const result: Float64Array[] = [];
-  for (let p = 0; p < pieces.length; p++) mitreInset(pieces[p]!, convex[p]!, delta, extent, result);
-  return result;
+interface Stage {
+  readonly pieces: Float64Array[];
+  readonly convex: boolean[];
+  readonly area: number;
+  readonly perimeter: number;
+  /** Σ tan(φ/2) over every corner (φ the signed turn). */
+  readonly turn: number;
+}
+
+function stage(pieces: Float64Array[]): Stage {
+  let area = 0;
+  let perimeter = 0;
+  let turn = 0;
+  for (const ring of pieces) {
+    const m = ring.length >> 1;
+    area += ringArea(ring);
+    perimeter += ringPerimeter(ring);
+    for (let j = 0; j < m; j++) {
+      const i = j === 0 ? m - 1 : j - 1;
+      const k = j + 1 === m ? 0 : j + 1;
+      const ex = ring[2 * j]! - ring[2 * i]!;
+      const ey = ring[2 * j + 1]! - ring[2 * i + 1]!;
+      const fx = ring[2 * k]! - ring[2 * j]!;
+      const fy = ring[2 * k + 1]! - ring[2 * j + 1]!;
+      // tan(φ/2) = sin φ / (1 + cos φ) for the turn φ between unit edge directions.
+      turn += (ex * fy - ey * fx) / (Math.hypot(ex, ey) * Math.hypot(fx, fy) + ex * fx + ey * fy);
+    }
+  }
+  return { pieces, convex: pieces.map(ringIsConvex), area, perimeter, turn };
+}
+
+function inset(s: Stage, h: number, extent: number): Stage {
+  const out: Float64Array[] = [];
+  for (let p = 0; p < s.pieces.length; p++) mitreInset(s.pieces[p]!, s.convex[p]!, h, extent, out);
+  return stage(out.filter((r) => ringArea(r) > 0));
 }
 
 /**
  * The coverage cap on a buildable area of one or more pieces: one uniform inward offset δ of every
  * edge of every piece, with mitred corners (see mitreInset), solved so that the total area equals
- * `target` to within `tolerance`. Same solve as the convex rule (solveCoverageInset): the first guess
- * is the root of A(δ) = A − P·δ + δ²·Σ tan(φᵢ/2) over all corners (φ the signed turn; exact while no
- * edge vanishes; derived), then Newton steps with A′(δ) = −P(δ) (every edge moves at unit speed;
- * derived) kept inside a bisection bracket [0, max width / 2].
+ * `target` to within `tolerance`.
+ *
+ * While no edge vanishes, A(δ₀ + h) = A − P·h + h²·Σ tan(φᵢ/2) exactly (φ the signed turn at each
+ * corner of the offset at δ₀; derived: every edge moves at unit speed, each corner adds a kite of
+ * h²·tan(φ/2)). Each step takes that quadratic's smaller root h from the current offset and offsets
+ * the current offset by h: mitred offsets compose (the moved lines of a moved line are the lines moved
+ * by the sum; derived), so every step starts from an exact offset and a step with no vanishing edge
+ * lands on the root. A(δ) is decreasing and convex (A′ = −P, and P shrinks; derived), so when an edge
+ * vanishes within a step the quadratic (which keeps the vanished edge at negative length) stays at
+ * or below A and the step stops short of the root; the next step starts from there. A step that
+ * overshoots anyway (below the target) is bisected back from the last offset above it.
  * @param pieces - counter-clockwise simple rings of the buildable area, total area > target.
  * @param target - wanted area (> 0).
  * @param tolerance - allowed |area − target|.
@@ -29,51 +66,30 @@ export function solveCoveragePieces(
   tolerance: number,
   extent: number,
 ): Float64Array[] {
-  const convex = pieces.map(ringIsConvex);
-  let lo = 0;
-  let hi = 0;
-  let area = 0;
-  let perimeter = 0;
-  let s = 0;
-  for (const ring of pieces) {
-    const m = ring.length >> 1;
-    hi = Math.max(hi, hullWidth(ring, m) / 2);
-    area += ringArea(ring);
-    perimeter += ringPerimeter(ring);
-    for (let j = 0; j < m; j++) {
-      const i = j === 0 ? m - 1 : j - 1;
-      const k = j + 1 === m ? 0 : j + 1;
-      const ex = ring[2 * j]! - ring[2 * i]!;
-      const ey = ring[2 * j + 1]! - ring[2 * i + 1]!;
-      const fx = ring[2 * k]! - ring[2 * j]!;
-      const fy = ring[2 * k + 1]! - ring[2 * j + 1]!;
-      const le = Math.hypot(ex, ey);
-      const lf = Math.hypot(fx, fy);
-      // tan(φ/2) = sin φ / (1 + cos φ) for unit edge directions.
-      s += (ex * fy - ey * fx) / (le * lf + ex * fx + ey * fy);
+  let cur = stage(pieces.slice());
+  for (let stepNo = 0; stepNo < MAX_STEPS; stepNo++) {
+    const f = cur.area - target;
+    if (f <= tolerance * 1e-3) return cur.pieces;
+    const disc = cur.perimeter * cur.perimeter - 4 * cur.turn * f;
+    // Smaller root of turn·h² − P·h + f = 0, written to stay accurate for any sign of turn; a Newton
+    // step when the quadratic has no root (its minimum is above the target).
+    let h = disc >= 0 ? (2 * f) / (cur.perimeter + Math.sqrt(disc)) : f / cur.perimeter;
+    if (!(h > 0) || !Number.isFinite(h)) return cur.pieces;
+    let next = inset(cur, h, extent);
+    if (next.area < target - tolerance * 1e-3) {
+      // Overshoot: bisect h back between the current offset (above the target) and this one.
+      let lo = 0;
+      let hi = h;
+      for (let b = 0; b < 200; b++) {
+        const mid = (lo + hi) / 2;
+        next = inset(cur, mid, extent);
+        if (Math.abs(next.area - target) <= tolerance * 1e-3 || hi - lo <= 1e-15 * (1 + hi)) return next.pieces;
+        if (next.area > target) lo = mid;
+        else hi = mid;
+      }
+      return next.pieces;
     }
+    cur = next;
   }
-  let f = area - target;
-  const disc = perimeter * perimeter - 4 * s * f;
-  // Smaller root of s·δ² − P·δ + f = 0, written to stay accurate for any sign of s.
-  const guess = disc >= 0 ? (2 * f) / (perimeter + Math.sqrt(disc)) : NaN;
-  let delta = 0;
-  let result: Float64Array[] = [];
-  for (let iter = 0; iter < MAX_ITERATIONS; iter++) {
-    let next = iter === 0 && guess > lo && guess < hi ? guess : perimeter > 0 ? delta + f / perimeter : NaN;
-    if (!(next > lo && next < hi)) next = (lo + hi) / 2;
-    result = insetAll(pieces, convex, next, extent);
-    area = 0;
-    perimeter = 0;
-    for (const r of result) {
-      area += ringArea(r);
-      perimeter += ringPerimeter(r);
-    }
-    f = area - target;
-    delta = next;
-    if (Math.abs(f) <= tolerance * 1e-3 || (iter >= 8 && Math.abs(f) <= tolerance)) return result;
-    if (f > 0) lo = next;
-    else hi = next;
-  }
-  return result;
+  return cur.pieces;
 }

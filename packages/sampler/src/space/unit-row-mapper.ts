@@ -1,8 +1,6 @@
 import type { DesignSpace } from "./design-space.js";
-import type { Parameter } from "./parameter.js";
 import { validateDesignSpace } from "./validate-design-space.js";
-import { latinStrata, stratumIndex } from "../design/stratum-index.js";
-import { latticeCount } from "./lattice-count.js";
+import { levelMapper } from "./level-mapper.js";
 
 /**
  * Checks unit-cube rows against a design space and returns a function that maps row i to its parameter record on
@@ -43,40 +41,4 @@ export function createUnitRowMapper(
     for (let j = 0; j < d; j++) record[names[j] as string] = (mappers[j] as (x: number, i: number) => number | string)(row[j] as number, i);
     return record;
   };
-}
-
-function levelMapper(p: Parameter, column: () => readonly number[], n: number): (x: number, i: number) => number | string {
-  switch (p.kind) {
-    case "continuous": {
-      if (p.step !== undefined) {
-        const step = p.step;
-        const index = levelIndexer(column(), n, latticeCount(p.min, p.max, step));
-        return (x, i) => p.min + index(x, i) * step;
-      }
-      if (p.log === true) {
-        const a = Math.log(p.min);
-        const b = Math.log(p.max);
-        return (x) => (x === 0 ? p.min : x === 1 ? p.max : Math.min(p.max, Math.max(p.min, Math.exp(a + x * (b - a)))));
-      }
-      return (x) => (x === 1 ? p.max : p.min + x * (p.max - p.min));
-    }
-    case "integer": {
-      const index = levelIndexer(column(), n, p.max - p.min + 1);
-      return (x, i) => p.min + index(x, i);
-    }
-    case "categorical": {
-      const index = levelIndexer(column(), n, p.levels.length);
-      return (x, i) => p.levels[index(x, i)] as string | number;
-    }
-  }
-}
-
-function levelIndexer(column: readonly number[], n: number, levels: number): (x: number, i: number) => number {
-  const strata = latinStrata(column);
-  if (strata !== undefined) {
-    const first = strata.indexOf(0);
-    const c = Math.min(Math.max((column[first] as number) * n, 0), 1 - Number.EPSILON);
-    return (_x, i) => Math.min(levels - 1, Math.floor((((strata[i] as number) + c) * levels) / n));
-  }
-  return (x) => stratumIndex(x, levels);
 }

@@ -1,13 +1,13 @@
 import type { Command } from "commander";
-import { createCsvWriter, createDesign, DESIGN_KINDS } from "@floorcast/sampler";
-import type { DesignKind } from "@floorcast/sampler";
+import { createCsvWriter, createProgressBar, designRows } from "@floorcast/sampler";
 import type { CommandContext } from "../command-context.js";
+import { DESIGN_OPTION_HELP, resolveDesignOption } from "../resolve-design-option.js";
 import { UsageError } from "../usage-error.js";
 
 interface DesignOptions {
   n: string;
   dims: string;
-  design: string;
+  design?: string;
   seed: string;
   out: string;
   force?: boolean;
@@ -35,7 +35,7 @@ export function registerDesignCommand(program: Command, ctx: CommandContext): vo
     .description("Write a space-filling design in the unit cube [0, 1]^D to CSV (columns x1..xD), for your own evaluator.")
     .requiredOption("--n <count>", "number of points")
     .requiredOption("--dims <count>", "number of dimensions")
-    .option("--design <kind>", `one of ${DESIGN_KINDS.join(", ")}`, "lhs-maximin")
+    .option("--design <kind>", DESIGN_OPTION_HELP)
     .requiredOption("--seed <seed>", "seed of every random draw (the same seed gives the same file)")
     .requiredOption("--out <file>", "CSV file to write")
     .option("--force", "replace an existing output file")
@@ -43,16 +43,36 @@ export function registerDesignCommand(program: Command, ctx: CommandContext): vo
       const n = wholeNumber("n", opts.n);
       const dims = wholeNumber("dims", opts.dims);
       wholeNumber("seed", opts.seed); // a seed is a whole number, as for sample and optimize
-      if (!(DESIGN_KINDS as readonly string[]).includes(opts.design)) {
-        throw new UsageError(`design: --design must be one of ${DESIGN_KINDS.join(", ")}, got ${JSON.stringify(opts.design)}`);
-      }
+      const { design, announce } = resolveDesignOption("design", opts.design, n, dims, ctx.stderr);
       const claim = await ctx.claimOutput("design", opts.out, { force: opts.force });
-      const points = createDesign({ n, dims, design: opts.design as DesignKind, seed: opts.seed });
+      let bar: ReturnType<typeof createProgressBar> | undefined;
+      const rows = designRows({
+        n,
+        dims,
+        design,
+        seed: opts.seed,
+        onProgress: (done, total) => {
+          announce();
+          bar ??= createProgressBar(ctx.stderr, total, `design ${design}`, "steps");
+          bar.update(done);
+        },
+      });
       const columns = Array.from({ length: dims }, (_, k) => `x${k + 1}`);
       const writer = createCsvWriter(claim.temporary(opts.out), columns);
-      for (const row of points) await writer.write(row);
-      await writer.close();
+      try {
+        let first = true;
+        for (const row of rows) {
+          if (first) {
+            bar?.stop();
+            announce();
+          }
+          first = false;
+          await writer.write(row);
+        }
+      } finally {
+        await writer.close();
+      }
       await claim.commit();
-      ctx.stderr.write(`design: wrote ${n} ${opts.design} points in ${dims} dimensions to ${opts.out}\n`);
+      ctx.stderr.write(`design: wrote ${n} ${design} points in ${dims} dimensions to ${opts.out}\n`);
     });
 }

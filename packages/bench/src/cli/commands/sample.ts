@@ -1,25 +1,26 @@
 import type { Command } from "commander";
 import {
-  DESIGN_KINDS,
   commandEvaluator,
   createProgressBar,
   loadScenario,
   manifestPathFor,
   massingEvaluator,
   parseShard,
+  shardFromEnvironment,
   writeDataset,
-  type DesignKind,
   type Evaluator,
 } from "@floorcast/sampler";
 import type { CommandContext } from "../command-context.js";
+import { DESIGN_OPTION_HELP, resolveDesignOption } from "../resolve-design-option.js";
 import { UsageError } from "../usage-error.js";
 
 interface SampleOptions {
   scenario: string;
   n: string;
   seed: string;
-  design: string;
+  design?: string;
   shard?: string;
+  shardCount?: string;
   resume?: boolean;
   force?: boolean;
   evaluatorCommand?: string;
@@ -62,8 +63,13 @@ export function registerSampleCommand(program: Command, ctx: CommandContext): vo
     .requiredOption("--scenario <file>", "scenario file (JSON, see README \"Scenario files\")")
     .requiredOption("--n <n>", "design size (all shards together)")
     .requiredOption("--seed <s>", "seed of the design (whole number)")
-    .option("--design <kind>", `design: ${DESIGN_KINDS.join(", ")}`, "lhs-maximin")
-    .option("--shard <k/N>", "write only the k-th of N contiguous slices of the same design")
+    .option("--design <kind>", DESIGN_OPTION_HELP)
+    .option(
+      "--shard <k/N>",
+      "write only the k-th of N contiguous slices of the same design (default: from a Slurm array task's SLURM_ARRAY_TASK_ID " +
+        "and SLURM_ARRAY_TASK_COUNT, or a Kubernetes Indexed Job's JOB_COMPLETION_INDEX with --shard-count)",
+    )
+    .option("--shard-count <N>", "number of shards of a Kubernetes Indexed Job (its completions), used with JOB_COMPLETION_INDEX")
     .option("--resume", "continue an interrupted run from its last complete row")
     .option("--force", "replace an existing output file")
     .option("--evaluator-command <cmd>", "evaluate with an external program speaking JSON Lines on stdin/stdout")
@@ -86,11 +92,14 @@ export function registerSampleCommand(program: Command, ctx: CommandContext): vo
     .action(async (opts: SampleOptions) => {
       const n = wholeNumber("--n", opts.n, 1);
       const seed = wholeNumber("--seed", opts.seed, 0);
-      if (!(DESIGN_KINDS as readonly string[]).includes(opts.design)) {
-        throw new UsageError(`sample: --design must be one of ${DESIGN_KINDS.join(", ")}, got ${JSON.stringify(opts.design)}`);
+      const shardCount = opts.shardCount === undefined ? undefined : wholeNumber("--shard-count", opts.shardCount, 1);
+      const fromEnvironment = opts.shard === undefined ? shardFromEnvironment(process.env, shardCount) : undefined;
+      if (opts.shard === undefined && fromEnvironment === undefined && shardCount !== undefined) {
+        throw new UsageError("sample: --shard-count needs JOB_COMPLETION_INDEX (a Kubernetes Indexed Job); otherwise use --shard k/N");
       }
-      const shard = opts.shard === undefined ? undefined : parseShard(opts.shard);
+      const shard = opts.shard === undefined ? fromEnvironment?.shard : parseShard(opts.shard);
       const scenario = await loadScenario(opts.scenario);
+      const { design, announce } = resolveDesignOption("sample", opts.design, n, scenario.parameters.length, ctx.stderr);
       const processes = wholeNumber("--processes", opts.processes ?? "1", 1);
       if (processes > 1 && opts.evaluatorCommand === undefined) {
         throw new UsageError("sample: --processes needs --evaluator-command");
@@ -111,19 +120,39 @@ export function registerSampleCommand(program: Command, ctx: CommandContext): vo
           : opts.plateProfile === true
             ? massingEvaluator(scenario, { plateProfile: true })
             : undefined;
+      let started = false;
+      /** Once the run has started (so a mistake found before still prints one line): which shard and which design. */
+      const announceStart = (): void => {
+        if (started) return;
+        started = true;
+        if (fromEnvironment !== undefined) {
+          ctx.stderr.write(`sample: shard ${fromEnvironment.shard.index}/${fromEnvironment.shard.count} from ${fromEnvironment.source}\n`);
+        }
+        announce();
+      };
       let bar: ReturnType<typeof createProgressBar> | undefined;
+      let designBar: ReturnType<typeof createProgressBar> | undefined;
       try {
         const manifest = await writeDataset(scenario, {
           out: opts.out,
           n,
           seed,
-          design: opts.design as DesignKind,
+          design,
           ...(shard === undefined ? {} : { shard }),
           resume: opts.resume === true,
           force: opts.force === true,
           inputs: [opts.scenario],
           ...(evaluator === undefined ? {} : { evaluator }),
+          onDesignProgress: (done, total) => {
+            announceStart();
+            designBar ??= createProgressBar(ctx.stderr, total, `design ${design}`, "steps");
+            designBar.update(done);
+          },
           onProgress: (done, total) => {
+            if (bar === undefined) {
+              designBar?.stop();
+              announceStart();
+            }
             bar ??= createProgressBar(ctx.stderr, total, `sample ${scenario.name}`);
             bar.update(done);
           },
@@ -135,6 +164,7 @@ export function registerSampleCommand(program: Command, ctx: CommandContext): vo
             `sha256 ${manifest.csv.sha256}\nmanifest ${manifestPathFor(opts.out)}\n${manifest.caution}\n`,
         );
       } finally {
+        designBar?.stop();
         bar?.stop();
         await evaluator?.close();
       }

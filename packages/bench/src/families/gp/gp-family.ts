@@ -1,10 +1,11 @@
-import { KERNEL_NAMES, fitGaussianProcess, type KernelName } from "@floorcast/surrogate";
+import { KERNEL_NAMES, fitGaussianProcess, fitGaussianProcessParallel, type KernelName } from "@floorcast/surrogate";
 import { UsageError } from "../../cli/usage-error.js";
 import type { ModelFamily } from "../model-family.js";
 import { parseWhole } from "../parse-whole.js";
 
 /**
- * The Gaussian-process family (`--model gp`): fitGaussianProcess with a Matérn 5/2 ARD kernel by default,
+ * The Gaussian-process family (`--model gp`): fitGaussianProcessParallel (the restarts on worker threads; the same
+ * model as fitGaussianProcess) with a Matérn 5/2 ARD kernel by default,
  * hyperparameters by maximum marginal likelihood with seeded restarts (Rasmussen & Williams 2006, ch. 5).
  */
 export const gpFamily: ModelFamily = {
@@ -18,6 +19,7 @@ export const gpFamily: ModelFamily = {
     { flags: "--restarts <n>", description: "gp: optimiser starts per target", default: "3" },
     { flags: "--subset <m>", description: "gp: fit hyperparameters on a maximin subset of m rows, then condition on all (0 = all rows)", default: "600" },
     { flags: "--polish <k>", description: "gp: after a subset fit, at most k optimiser iterations on all rows (default 10 up to 2,000 rows, else 0)" },
+    { flags: "--threads <n>", description: "gp: worker threads for the optimiser starts (default: one per core; the model does not depend on it)" },
   ],
   async fit(data, opts, seed, say) {
     const kernel = String(opts.kernel);
@@ -25,7 +27,7 @@ export const gpFamily: ModelFamily = {
     const noise = opts.noise === undefined ? undefined : String(opts.noise).trim() === "" ? NaN : Number(opts.noise);
     if (noise !== undefined && !(Number.isFinite(noise) && noise >= 0)) throw new UsageError(`fit: --noise must be a number ≥ 0, got ${String(opts.noise)}`);
     const subset = parseWhole("fit", "--subset", String(opts.subset), 0);
-    const gp = fitGaussianProcess(data, {
+    const gp = await fitGaussianProcessParallel(data, {
       kernel: kernel as KernelName,
       ard: opts.sharedLengthscale !== true,
       noiseVariance: noise,
@@ -33,6 +35,7 @@ export const gpFamily: ModelFamily = {
       seed,
       hyperparameterSubset: subset === 0 ? false : subset,
       polishIterations: opts.polish === undefined ? undefined : parseWhole("fit", "--polish", String(opts.polish), 0),
+      ...(opts.threads === undefined ? {} : { workers: parseWhole("fit", "--threads", String(opts.threads), 1) }),
     });
     gp.diagnostics.targets.forEach((t, j) => {
       say(`fit: ${t.target}: log marginal likelihood ${gp.logMarginalLikelihood()[j]!.toFixed(3)} (standardised target)`);

@@ -1,0 +1,55 @@
+import { availableParallelism } from "node:os";
+import type { TrainingData } from "../surrogate-types.js";
+import { completeGpFit, type GpTargetSearchResult } from "./complete-gp-fit.js";
+import { bestOfRestarts, hyperparameterStarts, type HyperparameterSearch } from "./fit/fit-hyperparameters.js";
+import { runRestartsOnWorkers } from "./fit/run-restarts-on-workers.js";
+import type { GaussianProcess } from "./gaussian-process.js";
+import type { GaussianProcessOptions } from "./gaussian-process-options.js";
+import { planGpFit } from "./gp-fit-plan.js";
+import { polishSearch } from "./polish-search.js";
+
+const FN = "fitGaussianProcessParallel";
+
+/** Options of fitGaussianProcessParallel: those of fitGaussianProcess plus the number of threads. */
+export interface ParallelGaussianProcessOptions extends GaussianProcessOptions {
+  /** Most worker threads at once (an integer ≥ 1; default os.availableParallelism()). 1 runs on the calling thread. */
+  readonly workers?: number;
+}
+
+/**
+ * fitGaussianProcess with the hyperparameter restarts of every target (and, after a subset fit, each target's polish
+ * on all rows) run side by side on worker threads: the same plan, the same restarts from the same starts, the best
+ * chosen in start order, so the model is the one fitGaussianProcess returns, bit for bit (only `fitTimeMs` differs).
+ * Conditioning on all rows (one Cholesky factorisation per target) stays on the calling thread.
+ * @param data - training rows (finite numbers; at least one row).
+ * @param options - fitGaussianProcess's options and `workers`.
+ * @returns a promise of the fitted GaussianProcess.
+ * @throws TypeError / RangeError naming the field (before any thread starts).
+ */
+export async function fitGaussianProcessParallel(data: TrainingData, options: ParallelGaussianProcessOptions = {}): Promise<GaussianProcess> {
+  if (typeof options !== "object" || options === null) throw new TypeError(`${FN}: options must be an object`);
+  const { workers: given, ...gpOptions } = options;
+  let workers = availableParallelism();
+  if (given !== undefined) {
+    if (typeof given !== "number") throw new TypeError(`${FN}: options.workers must be a number, got ${typeof given}`);
+    if (!Number.isSafeInteger(given) || given < 1) throw new RangeError(`${FN}: options.workers must be an integer ≥ 1, got ${given}`);
+    workers = given;
+  }
+  const plan = planGpFit(FN, data, gpOptions);
+  const searched = plan.targets.flatMap((t, j) => (t.search === undefined ? [] : [{ j, target: t, search: t.search }]));
+  const tasks = searched.flatMap(({ j, target, search }) =>
+    hyperparameterStarts(search).map((start) => ({ j, x: plan.xFit, y: target.yFit, search, start })),
+  );
+  const outcomes = await runRestartsOnWorkers(tasks, workers);
+  const searches: (GpTargetSearchResult | undefined)[] = plan.targets.map(() => undefined);
+  const fits = searched.map(({ j, search }) => ({ j, search, fit: bestOfRestarts(search, outcomes.filter((_, i) => tasks[i]!.j === j)) }));
+  let polished: (ReturnType<typeof bestOfRestarts> | undefined)[] = fits.map(() => undefined);
+  if (plan.polish > 0) {
+    const polishes: HyperparameterSearch[] = fits.map(({ search, fit }) => polishSearch(search, fit, plan.polish));
+    const polishTasks = fits.map(({ j, fit }, k) => ({ x: plan.x, y: plan.targets[j]!.y, search: polishes[k]!, start: fit.theta }));
+    const polishOutcomes = await runRestartsOnWorkers(polishTasks, workers);
+    polished = polishes.map((search, k) => bestOfRestarts(search, [polishOutcomes[k]!]));
+  }
+  fits.forEach(({ j, fit }, k) => (searches[j] = { fit, polished: polished[k] }));
+  return completeGpFit(plan, searches);
+}
