@@ -22,7 +22,8 @@ describe("a fixed GP noise variance has a documented upper limit", () => {
       writeFileSync(join(dir, "t.csv"), `a,b,y\n${data.x.map((r, i) => `${r[0]},${r[1]},${data.y[i]![0]}`).join("\n")}\n`);
       const r = await runCli(["fit", "--data", join(dir, "t.csv"), "--inputs", "a,b", "--target", "y", "--noise", "1e300", "--out", join(dir, "m.json")]);
       expect(r.code).toBe(2);
-      expect(r.err.trim()).toMatch(/^floorcast: fitGaussianProcess: options\.noiseVariance must be ≤ 1e\+100 .*got 1e\+300$/);
+      // fit runs the restarts on worker threads, so its entry point fitGaussianProcessParallel names itself
+      expect(r.err.trim()).toMatch(/^floorcast: fitGaussianProcessParallel: options\.noiseVariance must be ≤ 1e\+100 .*got 1e\+300$/);
     } finally {
       rmSync(dir, { recursive: true, force: true });
     }
