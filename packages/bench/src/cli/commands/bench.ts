@@ -26,7 +26,7 @@ export function registerBenchCommand(program: Command, ctx: CommandContext): voi
   program
     .command("bench")
     .description("Measure how much an optimum found on a GP or NN surrogate loses against the exact optimum, and at how many exact evaluations")
-    .option("--suite <name>", "problem suite: demo or standard", "demo")
+    .option("--suite <name>", "problem suite: demo, quads or standard", "demo")
     .option("--problem <name>", "run only this problem of the suite")
     .option("--seeds <k>", "seeds per training size (default 2 with --quick, else 3)")
     .option("--quick", "the demo's smaller training sizes and budgets")
