@@ -8,6 +8,7 @@ import { polygonWidth } from "../geometry/polygon-width.js";
 import { evaluateSimpleLot } from "./evaluate-simple-lot.js";
 import type { LimitedBy, MassingInput, MassingResult, Point, StoreyPlate } from "./massing-types.js";
 import { MassingWorkspace } from "./massing-workspace.js";
+import { massingTotals } from "./massing-totals.js";
 import { skyPlaneCut } from "./sky-plane-cut.js";
 import { solveCoverageInset } from "./solve-coverage-inset.js";
 import { validateMassingInput } from "./validate-massing-input.js";
@@ -216,20 +217,7 @@ export function evaluateMassing(input: MassingInput, options?: EvaluateMassingOp
     if (plates !== undefined) plates.push(toPoints(plate, m, ox, oy));
     if (plateFloors !== undefined) plateFloors.push(k);
   }
-  const result: MassingResult = {
-    lotArea,
-    buildableArea,
-    footprintArea,
-    floors,
-    height: floors * floorHeight,
-    gfa,
-    far: gfa / lotArea,
-    coverage: footprintArea / lotArea,
-    openSpace: lotArea - footprintArea,
-    facadeLength,
-    limitedBy,
-    coverageCapped,
-  };
+  const result = massingTotals({ lotArea, buildableArea, footprintArea, floors, floorHeight, gfa, facadeLength, limitedBy, coverageCapped });
   const withPlates = plates === undefined ? result : { ...result, plates, plateFloors };
   if (!wantProfile) return withPlates;
   // The profile: storey k (top at z = k × floorHeight ≤ maxHeight) has the base plate, cut by the sky exposure

@@ -4,6 +4,7 @@ import { hullWidth } from "../geometry/hull-width.js";
 import { polygonWidth } from "../geometry/polygon-width.js";
 import { ringArea, ringIsConvex, ringPerimeter } from "../geometry/ring-metrics.js";
 import { lotFrame } from "./lot-frame.js";
+import { massingTotals } from "./massing-totals.js";
 import type { LimitedBy, MassingInput, MassingResult, Point, StoreyPlate } from "./massing-types.js";
 import { skyCutPieces } from "./sky-cut-pieces.js";
 import { solveCoveragePieces } from "./solve-coverage-pieces.js";
@@ -182,20 +183,7 @@ export function evaluateSimpleLot(
       }
     }
   }
-  const result: MassingResult = {
-    lotArea,
-    buildableArea,
-    footprintArea,
-    floors,
-    height: floors * floorHeight,
-    gfa,
-    far: gfa / lotArea,
-    coverage: footprintArea / lotArea,
-    openSpace: lotArea - footprintArea,
-    facadeLength,
-    limitedBy,
-    coverageCapped,
-  };
+  const result = massingTotals({ lotArea, buildableArea, footprintArea, floors, floorHeight, gfa, facadeLength, limitedBy, coverageCapped });
   const withPlates = plates === undefined ? result : { ...result, plates, plateFloors };
   if (!want.profile) return withPlates;
   // The profile: every storey the height limit allows, no plate or FAR test (every non-empty piece kept).
