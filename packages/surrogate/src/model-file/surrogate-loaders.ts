@@ -5,7 +5,7 @@ import { ensembleFromFile } from "../uncertainty/ensemble-from-file.js";
 import { conformalFromFile } from "../uncertainty/conformal-from-file.js";
 import type { ModelFile } from "./model-file-schema.js";
 import { plateStackFromFile } from "../plate-stack/plate-stack-from-file.js";
-import { compositeNeedsFunction } from "../composite/load-composite-surrogate.js";
+import { compositeNeedsFunction } from "../composite/composite-needs-function.js";
 
 /** A loader for each model type: builds the fitted surrogate from its validated file. */
 export type SurrogateLoaders = {
