@@ -103,9 +103,10 @@ async function interrupted(rows: number, cut: number): Promise<string> {
   let calls = 0;
   const evaluator = {
     ...exact,
-    evaluate: (x: Record<string, number | string | boolean>) => {
-      if (++calls > rows) throw new Error("killed");
-      return exact.evaluate(x);
+    evaluate: (batch: readonly Record<string, number | string | boolean>[]) => {
+      calls += batch.length;
+      if (calls > rows) throw new Error("killed");
+      return exact.evaluate(batch);
     },
   };
   await expect(writeDataset(scenario, { out, ...run, evaluator })).rejects.toThrow(/killed/);

@@ -2,7 +2,14 @@ import { afterAll, describe, expect, it } from "vitest";
 import { existsSync, mkdtempSync, readFileSync, readdirSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import { commandEvaluator } from "@floorcast/sampler";
+import { commandEvaluator, type Evaluator } from "@floorcast/sampler";
+
+/** Evaluates one input through the batch contract and returns its one answer (derived from the Evaluator contract). */
+async function evaluateOne(e: Evaluator, input: Record<string, number | string | boolean>, sample?: number) {
+  const answers = await e.evaluate([input], sample === undefined ? undefined : { samples: [sample] });
+  expect(answers).toHaveLength(1);
+  return answers[0]!;
+}
 
 // Tiny external programs stand in for a user's model. A program's start-up (a node child: about 0.2 s on a quiet
 // machine, several seconds on a loaded one) counts towards the answer limit of its first line, so every limit that
@@ -21,6 +28,7 @@ function program(name: string, body: string): string {
     file,
     `import { createInterface } from "node:readline";
 import { mkdirSync, writeFileSync } from "node:fs";
+
 mkdirSync(${JSON.stringify(join(dir, "pids", name))}, { recursive: true });
 writeFileSync(${JSON.stringify(join(dir, "pids", name))} + "/" + process.pid, "");
 ${body}
@@ -90,14 +98,14 @@ describe("commandEvaluator answer timeout", () => {
   it("a program that stops answering fails the sample, naming the line and the limit, and is killed", async () => {
     const cmd = program("silent.mjs", silentBody);
     const e = commandEvaluator(cmd, { timeoutMs: 3000, graceMs: 200 });
-    await expect(e.evaluate({ a: 1 })).resolves.toEqual({ twice: 2 });
+    await expect(evaluateOne(e, { a: 1 })).resolves.toEqual({ twice: 2 });
     const t0 = Date.now();
-    const second = e.evaluate({ a: 2 });
-    const third = e.evaluate({ a: 3 });
+    const second = evaluateOne(e, { a: 2 });
+    const third = evaluateOne(e, { a: 3 });
     await expect(second).rejects.toThrow(/commandEvaluator: no answer for sample \d+ \(line 2\) within 3 s from .*silent\.mjs.* \(process 1 of 1\); the program was stopped/);
     await expect(third).rejects.toThrow(/no answer for sample \d+ \(line 2\) within 3 s/);
     expect(Date.now() - t0).toBeGreaterThanOrEqual(2990); // not before the limit (timer granularity ~ms)
-    await expect(e.evaluate({ a: 4 })).rejects.toThrow(/no answer for sample \d+ \(line 2\)/); // later samples fail at once
+    await expect(evaluateOne(e, { a: 4 })).rejects.toThrow(/no answer for sample \d+ \(line 2\)/); // later samples fail at once
     await e.close();
     expect(Date.now() - t0).toBeLessThan(30_000); // it ends: 3 s + SIGTERM grace 200 ms + SIGKILL
     const pids = pidsOf("silent.mjs");
@@ -110,7 +118,7 @@ describe("commandEvaluator answer timeout", () => {
     const e = commandEvaluator(cmd, { timeoutMs: 3000, window: 4 });
     try {
       // the 4th answer arrives ~4.8 s after it was sent (beyond the 3 s limit), but only 1.2 s after the 3rd
-      const answers = await Promise.all(Array.from({ length: 4 }, (_, i) => e.evaluate({ a: i })));
+      const answers = await Promise.all(Array.from({ length: 4 }, (_, i) => evaluateOne(e, { a: i })));
       expect(answers.map((o) => o.twice)).toEqual([0, 2, 4, 6]);
     } finally {
       await e.close();
@@ -121,7 +129,7 @@ describe("commandEvaluator answer timeout", () => {
     const cmd = program("slow0.mjs", slowBody);
     const e = commandEvaluator(cmd, { timeoutMs: 0, graceMs: 500 });
     try {
-      const answers = await Promise.all([1, 2].map((a) => e.evaluate({ a })));
+      const answers = await Promise.all([1, 2].map((a) => evaluateOne(e, { a })));
       expect(answers.map((o) => o.twice)).toEqual([2, 4]);
     } finally {
       await e.close();
@@ -131,7 +139,7 @@ describe("commandEvaluator answer timeout", () => {
   it("with several processes, a stall in one stops every copy", async () => {
     const cmd = program("stall.mjs", stallBody);
     const e = commandEvaluator(cmd, { processes: 2, window: 4, timeoutMs: 3000, graceMs: 200 });
-    const results = await Promise.allSettled(Array.from({ length: 8 }, (_, i) => e.evaluate({ a: i })));
+    const results = await Promise.allSettled(Array.from({ length: 8 }, (_, i) => evaluateOne(e, { a: i })));
     // each copy answered its first 3 lines; the 4th line of one copy timed out and failed the rest
     expect(results.filter((r) => r.status === "fulfilled")).toHaveLength(6);
     const reasons = results.flatMap((r) => (r.status === "rejected" ? [String(r.reason)] : []));
@@ -146,8 +154,8 @@ describe("commandEvaluator answer timeout", () => {
   it("stops what the shell started too (a compound command line is not exec'd by the shell)", async () => {
     const cmd = `cd ${JSON.stringify(dir)} && ${program("nested.mjs", silentBody)}`;
     const e = commandEvaluator(cmd, { timeoutMs: 3000, graceMs: 200 });
-    await expect(e.evaluate({ a: 1 })).resolves.toEqual({ twice: 2 });
-    await expect(e.evaluate({ a: 2 })).rejects.toThrow(/no answer for sample \d+ \(line 2\) within 3 s/);
+    await expect(evaluateOne(e, { a: 1 })).resolves.toEqual({ twice: 2 });
+    await expect(evaluateOne(e, { a: 2 })).rejects.toThrow(/no answer for sample \d+ \(line 2\) within 3 s/);
     await e.close();
     const pids = pidsOf("nested.mjs");
     expect(pids).toHaveLength(1);
@@ -159,7 +167,7 @@ describe("commandEvaluator bounded close", () => {
   it("a program that answers, then ignores the end of its input and SIGTERM, is killed within the grace periods", async () => {
     const cmd = program("stubborn.mjs", stubbornBody);
     const e = commandEvaluator(cmd, { timeoutMs: 0, graceMs: 250 });
-    await expect(e.evaluate({ a: 21 })).resolves.toEqual({ twice: 42 });
+    await expect(evaluateOne(e, { a: 21 })).resolves.toEqual({ twice: 42 });
     const t0 = Date.now();
     await e.close();
     const took = Date.now() - t0;

@@ -13,7 +13,16 @@ import {
   massingEvaluator,
   workerPoolEvaluator,
   type DatasetRow,
+  type Evaluator,
 } from "@floorcast/sampler";
+
+/** Evaluates one input through the batch contract and returns its one answer (derived from the Evaluator contract). */
+async function evaluateOne(e: Evaluator, input: Record<string, number | string | boolean>, sample?: number) {
+  const answers = await e.evaluate([input], sample === undefined ? undefined : { samples: [sample] });
+  expect(answers).toHaveLength(1);
+  return answers[0]!;
+}
+
 
 const dir = mkdtempSync(join(tmpdir(), "floorcast-eval-"));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
@@ -42,24 +51,53 @@ async function collect(it: AsyncIterable<DatasetRow>): Promise<DatasetRow[]> {
 describe("functionEvaluator and massingEvaluator", () => {
   it("wraps sync and async functions", async () => {
     const e = functionEvaluator((x) => ({ y: (x.a as number) + 1 }), { name: "plus-one" });
-    expect(await e.evaluate({ a: 1 })).toEqual({ y: 2 });
+    expect(await evaluateOne(e, { a: 1 })).toEqual({ y: 2 });
     expect(e.name).toBe("plus-one");
     const a = functionEvaluator(async (x) => ({ y: (x.a as number) * 2 }), { concurrency: 4 });
-    expect(await a.evaluate({ a: 3 })).toEqual({ y: 6 });
+    expect(await evaluateOne(a, { a: 3 })).toEqual({ y: 6 });
     expect(a.concurrency).toBe(4);
     expect(() => functionEvaluator(3 as never)).toThrow(TypeError);
     expect(() => functionEvaluator(() => ({}), { concurrency: 0 })).toThrow(RangeError);
+  });
+  it("answers a batch in order: synchronously for sync functions and the massing rule, by a promise for async ones", async () => {
+    const e = functionEvaluator((x) => ({ y: (x.a as number) + 1 }));
+    const sync = e.evaluate([{ a: 1 }, { a: 5 }, { a: -2 }]);
+    expect(Array.isArray(sync)).toBe(true); // no promise per batch for in-process functions
+    expect(sync).toEqual([{ y: 2 }, { y: 6 }, { y: -1 }]);
+    expect(e.evaluate([])).toEqual([]);
+    const a = functionEvaluator(async (x) => ({ y: (x.a as number) * 2 }));
+    const later = a.evaluate([{ a: 1 }, { a: 2 }]);
+    expect(later).toBeInstanceOf(Promise);
+    expect(await later).toEqual([{ y: 2 }, { y: 4 }]);
+    const s = await loadScenario(scenarioPath);
+    const m = massingEvaluator(s);
+    const recs = [10, 14, 18].map((frontage) => ({ ...s.fixed, frontage, depth: 30, setbackFront: 3, setbackSide: 1, setbackRear: 5, maxHeight: 9, floorHeight: 3, maxFar: 1.2 }));
+    const batch = m.evaluate(recs) as readonly Record<string, unknown>[];
+    // (f − 2)(30 − 3 − 5) buildable per design, in the order asked (derived, as below)
+    expect(batch.map((o) => o["buildableArea"])).toEqual([176, 264, 352].map((v) => expect.closeTo(v, 9)));
+  });
+  it("commandEvaluator refuses sample ids that do not match the batch", async () => {
+    const e = commandEvaluator(`${node} ${JSON.stringify(program)}`);
+    try {
+      expect(() => e.evaluate([{ frontage: 1, depth: 2 }], { samples: [1, 2] })).toThrow(/context\.samples must give one id per input \(1\), got 2/);
+      expect(await e.evaluate([{ frontage: 2, depth: 3 }, { frontage: 4, depth: 5 }], { samples: [10, 11] })).toEqual([
+        { area: 6, perimeter: 10 },
+        { area: 20, perimeter: 18 },
+      ]);
+    } finally {
+      await e.close();
+    }
   });
   it("the massing evaluator ignores fixed values passed along and refuses booleans", async () => {
     const s = await loadScenario(scenarioPath);
     const e = massingEvaluator(s);
     const rec = { frontage: 10, depth: 30, setbackFront: 3, setbackSide: 1, setbackRear: 5, maxHeight: 9, floorHeight: 3, maxFar: 1.2 };
-    const out = await e.evaluate({ ...s.fixed, ...rec });
+    const out = await evaluateOne(e, { ...s.fixed, ...rec });
     // (10 − 2)(30 − 3 − 5) = 176 m² buildable (yards per Woodway WA 14.08.350, derived); 0.5 × 300 = 150 m² coverage cap
     expect(out.buildableArea).toBeCloseTo(176, 9);
     expect(out.footprintArea).toBeCloseTo(150, 6);
     expect(out.coverageCapped).toBe(1);
-    await expect(async () => e.evaluate({ ...rec, depth: true })).rejects.toThrow(TypeError);
+    await expect(async () => evaluateOne(e, { ...rec, depth: true })).rejects.toThrow(TypeError);
   });
 });
 
@@ -108,9 +146,9 @@ for await (const line of createInterface({ input: process.stdin })) {
   });
   it("reports a program that dies, quoting its status and stderr", async () => {
     const e = commandEvaluator(`${node} ${JSON.stringify(program)}`);
-    await expect(e.evaluate({ frontage: 2, depth: 3 })).resolves.toEqual({ area: 6, perimeter: 10 });
-    await expect(e.evaluate({ frontage: -1, depth: 3 })).rejects.toThrow(/exited \(status 3\) after 1 answers; sample \d+ unanswered: negative frontage/);
-    await expect(e.evaluate({ frontage: 1, depth: 1 })).rejects.toThrow(/exited/);
+    await expect(evaluateOne(e, { frontage: 2, depth: 3 })).resolves.toEqual({ area: 6, perimeter: 10 });
+    await expect(evaluateOne(e, { frontage: -1, depth: 3 })).rejects.toThrow(/exited \(status 3\) after 1 answers; sample \d+ unanswered: negative frontage/);
+    await expect(evaluateOne(e, { frontage: 1, depth: 1 })).rejects.toThrow(/exited/);
     await e.close();
   });
   it("an answer that is not a JSON object fails that sample", async () => {
@@ -122,19 +160,19 @@ let k = 0;
 for await (const line of createInterface({ input: process.stdin })) process.stdout.write(++k === 1 ? "hello\\n" : "[1]\\n");`,
     );
     const e = commandEvaluator(`${node} ${JSON.stringify(liar)}`);
-    await expect(e.evaluate({ a: 1 })).rejects.toThrow(/answer 1 \(for sample 0\) is not JSON: "hello"/);
-    await expect(e.evaluate({ a: 1 })).rejects.toThrow(/is not JSON/); // the program is stopped: no answer can be trusted
+    await expect(evaluateOne(e, { a: 1 })).rejects.toThrow(/answer 1 \(for sample 0\) is not JSON: "hello"/);
+    await expect(evaluateOne(e, { a: 1 })).rejects.toThrow(/is not JSON/); // the program is stopped: no answer can be trusted
     await e.close();
     const array = join(dir, "array.mjs");
     writeFileSync(array, `import { createInterface } from "node:readline";
 for await (const line of createInterface({ input: process.stdin })) process.stdout.write("[1]\\n");`);
     const f = commandEvaluator(`${node} ${JSON.stringify(array)}`);
-    await expect(f.evaluate({ a: 1 }, { sample: 7 })).rejects.toThrow(/answer 1 \(for sample 7\) must be a JSON object/);
+    await expect(evaluateOne(f, { a: 1 }, 7)).rejects.toThrow(/answer 1 \(for sample 7\) must be a JSON object/);
     await f.close();
   });
   it("a command that cannot be found fails every evaluation; bad arguments are refused", async () => {
     const e = commandEvaluator("floorcast-no-such-program-xyz");
-    await expect(e.evaluate({ a: 1 })).rejects.toThrow(/exited \(status 127\)/);
+    await expect(evaluateOne(e, { a: 1 })).rejects.toThrow(/exited \(status 127\)/);
     await e.close();
     expect(() => commandEvaluator("  ")).toThrow(TypeError);
     expect(() => commandEvaluator("cat", { window: 0 })).toThrow(RangeError);

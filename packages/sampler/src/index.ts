@@ -28,7 +28,7 @@ export { loadScenario } from "./scenario/load-scenario.js";
 export { scenarioToMassingInput } from "./scenario/scenario-to-massing-input.js";
 export { SCENARIO_SLOTS } from "./scenario/scenario-slots.js";
 export type { SlotDomain } from "./scenario/scenario-slots.js";
-export type { EvaluationContext, Evaluator, EvaluatorFunction, EvaluatorInput, EvaluatorOutput } from "./evaluator/evaluator.js";
+export type { BatchContext, Evaluator, EvaluatorFunction, EvaluatorInput, EvaluatorOutput, OutputGradient } from "./evaluator/evaluator.js";
 export { EvaluatorProtocolError } from "./evaluator/evaluator-protocol-error.js";
 export { functionEvaluator } from "./evaluator/function-evaluator.js";
 export { massingEvaluator } from "./evaluator/massing-evaluator.js";

@@ -7,9 +7,10 @@
  * Run: `npm run build && npm run bench:optimisers -- [seeds] [budget]`
  * (defaults 5 seeds, 3000 evaluations; Bayesian optimisation gets at most 60).
  */
+import { functionEvaluator, type Evaluator } from "@floorcast/sampler";
 import { spawnSync } from "node:child_process";
 import { fileURLToPath } from "node:url";
-import type { Design, Evaluator, OptimisationProblem, OptimisationResult, Outputs } from "../optimise/optimisation-problem.js";
+import type { OptimisationProblem, OptimisationResult } from "../optimise/optimisation-problem.js";
 import { bayesianOptimisation } from "../optimise/bayesian-optimisation.js";
 import { geneticAlgorithm } from "../optimise/genetic-algorithm.js";
 import { particleSwarm } from "../optimise/particle-swarm.js";
@@ -86,11 +87,7 @@ async function main(): Promise<void> {
       variables: c.bounds.map(([min, max], i) => ({ kind: "continuous" as const, name: names[i]!, min, max })),
       objectives: [{ output: "f", sense: "min" }],
     };
-    const evaluator: Evaluator = {
-      async evaluate(batch: readonly Design[]): Promise<Outputs[]> {
-        return batch.map((d) => ({ f: c.f(names.map((n) => d[n] as number)) }));
-      },
-    };
+    const evaluator = functionEvaluator((d) => ({ f: c.f(names.map((n) => d[n] as number)) }), { name: c.name });
     const target = c.optimum + 0.005 * Math.abs(c.optimum);
     const de = peer ? summary(peer.results.slice(ci * SEEDS, (ci + 1) * SEEDS).map((r) => r.hit)) : null;
     const row = (method: string, s: { med: number; reached: number }): void => {

@@ -1,8 +1,9 @@
-import type { Design, Evaluator, Outputs } from "../optimise/optimisation-problem.js";
+import type { Evaluator } from "@floorcast/sampler";
+import type { Design, Outputs } from "../optimise/optimisation-problem.js";
 import type { BenchProblem } from "../problem/bench-problem.js";
 
-/** An {@link Evaluator} backed by a problem's exact evaluator, counting every design it evaluates. */
-export interface CountingEvaluator extends Evaluator {
+/** An Evaluator (the sampler's contract) backed by a problem's exact evaluator, counting every design it evaluates. */
+export interface CountingEvaluator extends Evaluator<Outputs> {
   /** Designs evaluated so far. */
   readonly count: number;
 }
@@ -17,6 +18,9 @@ export interface CountingEvaluator extends Evaluator {
 export function exactEvaluator(problem: BenchProblem, site?: Design): CountingEvaluator {
   let count = 0;
   return {
+    name: `exact: ${problem.name}`,
+    concurrency: 1,
+    close: async () => {},
     get count() {
       return count;
     },

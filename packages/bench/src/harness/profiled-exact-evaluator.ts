@@ -1,4 +1,5 @@
-import type { Design, Evaluator, Outputs } from "../optimise/optimisation-problem.js";
+import type { Evaluator } from "@floorcast/sampler";
+import type { Design, Outputs } from "../optimise/optimisation-problem.js";
 import type { BenchProblem } from "../problem/bench-problem.js";
 
 /**
@@ -8,10 +9,13 @@ import type { BenchProblem } from "../problem/bench-problem.js";
  * @param problem - a massing problem (with plateProfile).
  * @returns the evaluator.
  */
-export function profiledExactEvaluator(problem: BenchProblem): Evaluator {
+export function profiledExactEvaluator(problem: BenchProblem): Evaluator<Outputs> {
   const profileOf = problem.plateProfile;
   if (profileOf === undefined) throw new RangeError(`profiledExactEvaluator: ${problem.name} reports no plate profile`);
   return {
+    name: `exact with plate profile: ${problem.name}`,
+    concurrency: 1,
+    close: async () => {},
     evaluate(batch: readonly Design[]): Promise<readonly Outputs[]> {
       return Promise.resolve(
         batch.map((d) => {

@@ -1,4 +1,5 @@
-import type { EvaluatedDesign, Evaluator, OptimisationProblem } from "../optimise/optimisation-problem.js";
+import type { Evaluator } from "@floorcast/sampler";
+import type { EvaluatedDesign, OptimisationProblem } from "../optimise/optimisation-problem.js";
 import { scoreOutputs } from "../optimise/evaluation-session.js";
 import { compareFeasibility } from "../optimise/feasibility-rules.js";
 

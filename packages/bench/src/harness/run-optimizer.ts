@@ -1,4 +1,5 @@
-import type { Evaluator, OptimisationProblem, OptimisationResult } from "../optimise/optimisation-problem.js";
+import type { Evaluator } from "@floorcast/sampler";
+import type { OptimisationProblem, OptimisationResult } from "../optimise/optimisation-problem.js";
 import { OPTIMIZERS, optimizerNamed } from "../optimise/optimizers.js";
 
 /** Optimiser names `floorcast optimize --optimizer` accepts: the registry's (optimise/optimizers.ts). */

@@ -1,4 +1,5 @@
-import type { EvaluatedDesign, Evaluator, OptimisationProblem } from "../optimise/optimisation-problem.js";
+import type { Evaluator } from "@floorcast/sampler";
+import type { EvaluatedDesign, OptimisationProblem } from "../optimise/optimisation-problem.js";
 import { randomSearch } from "../optimise/random-search.js";
 import { patternSearch } from "../optimise/pattern-search.js";
 

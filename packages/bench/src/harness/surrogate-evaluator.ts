@@ -1,6 +1,6 @@
-import type { Variable } from "@floorcast/sampler";
+import type { Evaluator, OutputGradient, Variable } from "@floorcast/sampler";
 import type { Surrogate } from "@floorcast/surrogate";
-import type { Design, Evaluator, OutputGradient, Outputs } from "../optimise/optimisation-problem.js";
+import type { Design, Outputs } from "../optimise/optimisation-problem.js";
 import { designRow } from "./design-row.js";
 
 /** Anything that predicts a batch of rows: a floorcast surrogate, or a peer model behind a pipe. */
@@ -25,9 +25,12 @@ export function surrogateEvaluator(
   model: Surrogate | BatchPredictor,
   variables: readonly Variable[],
   site?: Design,
-): Evaluator {
+): Evaluator<Outputs> {
   const rowOf = (d: Design): number[] => designRow(variables, site ? { ...site, ...d } : d);
-  const evaluator: Evaluator = {
+  const evaluator: Evaluator<Outputs> = {
+    name: "surrogate",
+    concurrency: 1,
+    close: async () => {},
     async evaluate(batch: readonly Design[]): Promise<readonly Outputs[]> {
       if (batch.length === 0) return [];
       const { mean } = await model.predict(batch.map(rowOf));

@@ -1,5 +1,6 @@
+import type { Evaluator } from "@floorcast/sampler";
 import { fitGaussianProcess, type GivenHyperparameters, type Prediction, type TrainingData } from "@floorcast/surrogate";
-import type { CommonOptions, EvaluatedDesign, Evaluator, OptimisationProblem, OptimisationResult } from "./optimisation-problem.js";
+import type { CommonOptions, EvaluatedDesign, OptimisationProblem, OptimisationResult } from "./optimisation-problem.js";
 import { createVariableCodec, type VariableCodec } from "@floorcast/sampler";
 import { EvaluationSession } from "./evaluation-session.js";
 import { expectedImprovement, probabilityOfFeasibility } from "./expected-improvement.js";

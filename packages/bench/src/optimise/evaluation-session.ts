@@ -1,13 +1,5 @@
-import type {
-  CommonOptions,
-  EvaluatedDesign,
-  Evaluator,
-  OptimisationProblem,
-  OptimisationResult,
-  Outputs,
-  OutputGradient,
-} from "./optimisation-problem.js";
-import { createVariableCodec, type VariableCodec } from "@floorcast/sampler";
+import { createVariableCodec, type Evaluator, type EvaluatorOutput, type OutputGradient, type VariableCodec } from "@floorcast/sampler";
+import type { CommonOptions, EvaluatedDesign, OptimisationProblem, OptimisationResult, Outputs } from "./optimisation-problem.js";
 import { compareFeasibility, objectiveLoss } from "./feasibility-rules.js";
 import { dominates } from "./pareto-dominance.js";
 
@@ -16,7 +8,8 @@ import { dominates } from "./pareto-dominance.js";
  * Σ max(0, gᵢ)/max(1, |valueᵢ|) (violations scaled so that constraints of different units
  * weigh alike; common practice), feasibility and validity (NaN/missing → invalid, infeasible).
  */
-export function scoreOutputs(problem: OptimisationProblem, design: EvaluatedDesign["design"], outputs: Outputs): EvaluatedDesign {
+export function scoreOutputs(problem: OptimisationProblem, design: EvaluatedDesign["design"], answer: EvaluatorOutput): EvaluatedDesign {
+  const outputs = numericOutputs(answer);
   const num = (name: string): number => {
     const v = outputs[name];
     return typeof v === "number" ? v : NaN;
@@ -32,6 +25,16 @@ export function scoreOutputs(problem: OptimisationProblem, design: EvaluatedDesi
   }
   if (!valid) violation = Infinity;
   return { design, outputs, objectives, violation, feasible: valid && violation === 0, valid };
+}
+
+/** The numeric outputs of an answer (an evaluator may also answer strings or booleans, which optimisers do not read). */
+function numericOutputs(answer: EvaluatorOutput): Outputs {
+  for (const k in answer) {
+    if (typeof answer[k] !== "number") {
+      return Object.fromEntries(Object.entries(answer).filter((e): e is [string, number] => typeof e[1] === "number"));
+    }
+  }
+  return answer as Outputs;
 }
 
 /**
@@ -90,7 +93,7 @@ export class EvaluationSession {
         `${this.method}: evaluator.evaluate returned ${Array.isArray(outputs) ? outputs.length : typeof outputs} outputs for ${designs.length} designs`,
       );
     }
-    const scored = designs.map((d, i) => scoreOutputs(this.problem, d, (outputs[i] ?? {}) as Outputs));
+    const scored = designs.map((d, i) => scoreOutputs(this.problem, d, outputs[i] ?? {}));
     for (const e of scored) this.record(e);
     this.options.onProgress?.(this.evaluations, Number.isFinite(this.planned) ? this.planned : this.budget);
     return scored;

@@ -4,12 +4,10 @@ export type {
   CommonOptions,
   Design,
   EvaluatedDesign,
-  Evaluator,
   Objective,
   OptimisationProblem,
   OptimisationResult,
   OutputConstraint,
-  OutputGradient,
   Outputs,
 } from "./optimisation-problem.js";
 export { scoreOutputs } from "./evaluation-session.js";

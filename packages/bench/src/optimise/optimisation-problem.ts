@@ -4,8 +4,9 @@ import type { Variable, VariableRecord } from "@floorcast/sampler";
  * The optimisation interface shared by every optimiser in `@floorcast/bench`.
  *
  * A problem is pure data ({@link OptimisationProblem}): variables, objectives and constraints on
- * outputs, its variables the sampler's one {@link Variable} contract. The function being optimised is a separate {@link Evaluator} (the exact massing
- * evaluator, a surrogate, or a published test function), so the same problem runs on either.
+ * outputs, its variables the sampler's one {@link Variable} contract. The function being optimised is the sampler's one
+ * `Evaluator` contract (the exact massing evaluator, a user's command, a surrogate, or a published test function), so the
+ * same problem runs on either; optimisers call only its `evaluate` (a batch of designs, in order) and optional `gradient`.
  * Every optimiser has the shape `optimiser(problem, evaluator, options) => Promise<OptimisationResult>`
  * and records how many designs it evaluated and how many times it called the evaluator.
  */
@@ -40,26 +41,6 @@ export interface OptimisationProblem {
   readonly objectives: readonly Objective[];
   /** Constraints on outputs; a design violating any is infeasible. */
   readonly constraints?: readonly OutputConstraint[];
-}
-
-/**
- * Partial derivatives of outputs with respect to numeric variables at one design:
- * `gradient[output][variable]`. Categorical variables are omitted.
- */
-export type OutputGradient = Readonly<Record<string, Readonly<Record<string, number>>>>;
-
-/**
- * The function being optimised. `evaluate` receives a batch of designs and resolves to their
- * outputs in the same order (it may be exact or a surrogate, synchronous work wrapped in a
- * promise or truly asynchronous, e.g. a worker pool). A design whose outputs contain NaN, or
- * lack an objective or constraint output, is treated as infeasible and counted in
- * {@link OptimisationResult.invalid}; it is never reported as an optimum.
- * `gradient` (optional, e.g. from a surrogate) returns d output / d variable per design; the
- * gradient optimiser falls back to central finite differences without it.
- */
-export interface Evaluator {
-  evaluate(batch: readonly Design[]): Promise<readonly Outputs[]>;
-  gradient?(batch: readonly Design[]): Promise<readonly OutputGradient[]>;
 }
 
 /** One evaluated design, as the optimisers record it. */

@@ -1,4 +1,5 @@
-import type { CommonOptions, Evaluator, OptimisationProblem, OptimisationResult } from "./optimisation-problem.js";
+import type { Evaluator } from "@floorcast/sampler";
+import type { CommonOptions, OptimisationProblem, OptimisationResult } from "./optimisation-problem.js";
 import { bayesianOptimisation, type BayesianOptimisationOptions } from "./bayesian-optimisation.js";
 import { geneticAlgorithm } from "./genetic-algorithm.js";
 import { gridSearch } from "./grid-search.js";

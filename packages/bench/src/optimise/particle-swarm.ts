@@ -1,4 +1,5 @@
-import type { CommonOptions, EvaluatedDesign, Evaluator, OptimisationProblem, OptimisationResult } from "./optimisation-problem.js";
+import type { Evaluator } from "@floorcast/sampler";
+import type { CommonOptions, EvaluatedDesign, OptimisationProblem, OptimisationResult } from "./optimisation-problem.js";
 import { EvaluationSession } from "./evaluation-session.js";
 import { compareFeasibility } from "./feasibility-rules.js";
 import { createRng, unitSamples, type Rng } from "./unit-samples.js";

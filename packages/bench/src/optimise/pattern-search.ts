@@ -1,5 +1,5 @@
-import type { CommonOptions, Design, EvaluatedDesign, Evaluator, OptimisationProblem, OptimisationResult } from "./optimisation-problem.js";
-import type { VariableCodec } from "@floorcast/sampler";
+import type { CommonOptions, Design, EvaluatedDesign, OptimisationProblem, OptimisationResult } from "./optimisation-problem.js";
+import type { Evaluator, VariableCodec } from "@floorcast/sampler";
 import { EvaluationSession } from "./evaluation-session.js";
 import { compareFeasibility } from "./feasibility-rules.js";
 import { numberOption, validateProblem } from "./validate-problem.js";

@@ -1,5 +1,6 @@
+import type { Evaluator } from "@floorcast/sampler";
 import { PLATE_STACK_OUTPUTS, fitPlateStack, plateStackColumns, type GaussianProcessOptions, type PlateStackSurrogate } from "@floorcast/surrogate";
-import type { CommonOptions, EvaluatedDesign, Evaluator, OptimisationProblem, OptimisationResult } from "./optimisation-problem.js";
+import type { CommonOptions, EvaluatedDesign, OptimisationProblem, OptimisationResult } from "./optimisation-problem.js";
 import { EvaluationSession } from "./evaluation-session.js";
 import { pollPoints } from "./pattern-search.js";
 import { createRng, unitSamples } from "./unit-samples.js";

@@ -1,4 +1,5 @@
-import type { CommonOptions, Evaluator, OptimisationProblem, OptimisationResult } from "./optimisation-problem.js";
+import type { Evaluator } from "@floorcast/sampler";
+import type { CommonOptions, OptimisationProblem, OptimisationResult } from "./optimisation-problem.js";
 import { EvaluationSession } from "./evaluation-session.js";
 import { createRng, unitSamples } from "./unit-samples.js";
 import { numberOption, validateProblem } from "./validate-problem.js";

@@ -1,4 +1,5 @@
-import type { CommonOptions, Evaluator, OptimisationProblem } from "./optimisation-problem.js";
+import type { Evaluator } from "@floorcast/sampler";
+import type { CommonOptions, OptimisationProblem } from "./optimisation-problem.js";
 
 function isRecord(v: unknown): v is Record<string, unknown> {
   return typeof v === "object" && v !== null && !Array.isArray(v);

@@ -35,7 +35,7 @@ export function commandProblem(command: string, fixed: Readonly<Record<string, n
     async evaluateBatch(batch) {
       running ??= commandEvaluator(command, options);
       const ev = running;
-      return Promise.all(batch.map(async (d) => numeric(await ev.evaluate({ ...fixed, ...d }))));
+      return (await ev.evaluate(batch.map((d) => ({ ...fixed, ...d })))).map(numeric);
     },
     async close() {
       const ev = running;

@@ -164,7 +164,7 @@ export function parseProblem(json: unknown, fileName: string, scenario?: Scenari
     ...base,
     dataset: problemDataset(about, trainingVariables, { scenario: sc, fixed: f.fixed }),
     massingInput,
-    plateProfile: (design) => profiled.evaluate(record(design)) as Readonly<Record<string, number | string>>,
+    plateProfile: (design) => (profiled.evaluate([record(design)]) as readonly Readonly<Record<string, number | string>>[])[0]!,
     massingResult: (design, plates = false) => evaluateMassing(massingInput(design), { plates }),
     evaluate(design) {
       try {

@@ -117,7 +117,9 @@ export async function* generateDataset(scenario: Scenario, options: GenerateData
   const inputOf = (record: Record<string, number | string>): EvaluatorInput => Object.assign({}, scenario.fixed, record);
   const launch = (i: number): void => {
     const record = recordAt(i);
-    const answer = Promise.resolve().then(() => evaluator.evaluate(inputOf(record), { sample: i }));
+    const answer = Promise.resolve()
+      .then(() => evaluator.evaluate([inputOf(record)], { samples: [i] }))
+      .then((a) => onlyAnswer(a, i));
     answer.catch(() => {});
     inFlight.push({ record, answer });
   };
@@ -127,8 +129,8 @@ export async function* generateDataset(scenario: Scenario, options: GenerateData
     if (concurrency === 1) {
       // in-process evaluators: no promise per row unless the evaluator returns one
       record = recordAt(i);
-      const answer = evaluator.evaluate(inputOf(record), { sample: i });
-      out = typeof (answer as { then?: unknown }).then === "function" ? await answer : (answer as EvaluatorOutput);
+      const answer = evaluator.evaluate([inputOf(record)], { samples: [i] });
+      out = onlyAnswer(typeof (answer as { then?: unknown }).then === "function" ? await answer : (answer as readonly EvaluatorOutput[]), i);
     } else {
       while (next < end && inFlight.length < concurrency) launch(next++);
       const first = inFlight.shift()!;
@@ -141,6 +143,15 @@ export async function* generateDataset(scenario: Scenario, options: GenerateData
     for (const k of columns) row[k] = out[k]!;
     yield row;
   }
+}
+
+/** The one answer of a one-design batch, or a RangeError naming the sample. */
+function onlyAnswer(answers: readonly EvaluatorOutput[], sample: number): EvaluatorOutput {
+  if (!Array.isArray(answers) || answers.length !== 1) {
+    const got = Array.isArray(answers) ? `${answers.length} answers` : typeof answers;
+    throw new RangeError(`generateDataset: evaluator.evaluate must answer a batch of 1 with 1 output record, got ${got} for sample ${sample}`);
+  }
+  return answers[0] as EvaluatorOutput;
 }
 
 /** Stands in for a unit row once its dataset row has been yielded. */

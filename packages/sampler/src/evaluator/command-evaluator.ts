@@ -1,4 +1,4 @@
-import type { EvaluationContext, Evaluator, EvaluatorInput } from "./evaluator.js";
+import type { BatchContext, Evaluator, EvaluatorInput } from "./evaluator.js";
 import { openCommandChannel } from "./command-channel.js";
 
 const MAX_TIMER_MS = 2_147_483_647;
@@ -87,10 +87,18 @@ export function commandEvaluator(command: string, options: CommandEvaluatorOptio
   return {
     name: protocol === "ids" ? `command: ${command}` : `command (ordered): ${command}`,
     concurrency: window * processes,
-    evaluate(input: EvaluatorInput, context?: EvaluationContext) {
-      let best = channels[0]!;
-      for (const c of channels) if (c.pending < best.pending) best = c;
-      return best.send(input, context?.sample ?? unnamed++);
+    evaluate(batch: readonly EvaluatorInput[], context?: BatchContext) {
+      const ids = context?.samples;
+      if (ids !== undefined && ids.length !== batch.length) {
+        throw new RangeError(`${fn}: context.samples must give one id per input (${batch.length}), got ${ids.length}`);
+      }
+      return Promise.all(
+        batch.map((input, i) => {
+          let best = channels[0]!;
+          for (const c of channels) if (c.pending < best.pending) best = c;
+          return best.send(input, ids?.[i] ?? unnamed++);
+        }),
+      );
     },
     async finish() {
       const results = await Promise.allSettled(channels.map((c) => c.finish()));

@@ -1,7 +1,8 @@
-import type { Evaluator, EvaluatorFunction } from "./evaluator.js";
+import type { Evaluator, EvaluatorFunction, EvaluatorOutput } from "./evaluator.js";
 
 /**
- * Wraps any function (sync or async) from an input record to an output record as an {@link Evaluator}.
+ * Wraps any function (sync or async) from one input record to its output record as an {@link Evaluator}: a batch
+ * is answered design by design, synchronously when the function is synchronous.
  * @param fn - the function.
  * @param options - `name` recorded in manifests (default "function"), `concurrency` (default 1; raise it for
  *   async functions that wait on I/O).
@@ -17,5 +18,14 @@ export function functionEvaluator(
   if (!Number.isInteger(concurrency) || concurrency < 1) {
     throw new RangeError(`functionEvaluator: concurrency must be an integer ≥ 1, got ${concurrency}`);
   }
-  return { name: options.name ?? "function", concurrency, evaluate: fn, close: async () => {} };
+  return {
+    name: options.name ?? "function",
+    concurrency,
+    evaluate(batch) {
+      const answers = batch.map((input) => fn(input));
+      if (answers.some((a) => typeof (a as { then?: unknown }).then === "function")) return Promise.all(answers);
+      return answers as EvaluatorOutput[];
+    },
+    close: async () => {},
+  };
 }

@@ -1,7 +1,7 @@
 import { evaluateMassing } from "../massing/evaluate-massing.js";
 import type { Scenario } from "../scenario/scenario.js";
 import { scenarioToMassingInput } from "../scenario/scenario-to-massing-input.js";
-import type { Evaluator } from "./evaluator.js";
+import type { Evaluator, EvaluatorInput, EvaluatorOutput } from "./evaluator.js";
 import { massingOutputs } from "./massing-outputs.js";
 import { plateProfileColumns, plateProfileLayout } from "./plate-profile-columns.js";
 
@@ -24,19 +24,23 @@ export function massingEvaluator(scenario: Scenario, options: MassingEvaluatorOp
   return {
     name: layout === undefined ? "massing-rule-v1" : "massing-rule-v1+plate-profile",
     concurrency: 1,
-    evaluate(input) {
-      const record: Record<string, number | string> = {};
-      for (const name of names) {
-        const v = input[name];
-        if (typeof v === "boolean") throw new TypeError(`massingEvaluator: ${name} must be a number or string`);
-        if (v !== undefined) record[name] = v;
-      }
-      const massing = scenarioToMassingInput(scenario, record);
-      if (layout === undefined) return massingOutputs(evaluateMassing(massing));
-      const r = evaluateMassing(massing, { profile: true });
-      const profile = { lotArea: r.lotArea, buildableArea: r.buildableArea, storeys: r.profile! };
-      return { ...massingOutputs(r), ...plateProfileColumns(massing, profile, layout) };
+    evaluate(batch) {
+      return batch.map(evaluateOne);
     },
     close: async () => {},
   };
+
+  function evaluateOne(input: EvaluatorInput): EvaluatorOutput {
+    const record: Record<string, number | string> = {};
+    for (const name of names) {
+      const v = input[name];
+      if (typeof v === "boolean") throw new TypeError(`massingEvaluator: ${name} must be a number or string`);
+      if (v !== undefined) record[name] = v;
+    }
+    const massing = scenarioToMassingInput(scenario, record);
+    if (layout === undefined) return massingOutputs(evaluateMassing(massing));
+    const r = evaluateMassing(massing, { profile: true });
+    const profile = { lotArea: r.lotArea, buildableArea: r.buildableArea, storeys: r.profile! };
+    return { ...massingOutputs(r), ...plateProfileColumns(massing, profile, layout) };
+  }
 }

@@ -16,8 +16,8 @@ export interface WorkerPoolEvaluatorOptions {
 
 /**
  * Spreads an expensive evaluator over a pool of worker threads (piscina). Each worker loads `filename` and
- * calls its export (sync or async) on one input record; answers come back in the order asked, because the
- * dataset generator awaits them in order.
+ * calls its export (sync or async) on one input record; a batch is spread over the workers and answered in the
+ * order asked.
  * @param options - module, export name and thread count.
  * @returns the evaluator; `close` stops the workers.
  * @throws TypeError/RangeError for a bad filename or thread count.
@@ -38,7 +38,7 @@ export function workerPoolEvaluator(options: WorkerPoolEvaluatorOptions): Evalua
   return {
     name: `worker pool: ${options.filename}${options.exportName ? `#${options.exportName}` : ""}`,
     concurrency: threads * 2,
-    evaluate: (input: EvaluatorInput) => pool.run(input) as Promise<EvaluatorOutput>,
+    evaluate: (batch: readonly EvaluatorInput[]) => Promise.all(batch.map((input) => pool.run(input) as Promise<EvaluatorOutput>)),
     async close() {
       await pool.destroy();
     },
