@@ -97,7 +97,7 @@ describe("floorcast assess", () => {
     const cases: [string[], RegExp][] = [
       [[...base, "--target", "floors"], /--target floors is not a target of the model \(gfa\)/],
       [[...base, "--target", "gfa", "--folds", "3"], /--folds and --learning-curve need the training data/],
-      [[...base, "--target", "gfa", "--folds", "1", "--train", join(dir, "train.csv")], /--folds must be an integer ≥ 2, got 1/],
+      [[...base, "--target", "gfa", "--folds", "1", "--train", join(dir, "train.csv")], /--folds must be a whole number ≥ 2, got "1"/],
       [["assess", "--model", join(dir, "missing.json"), "--data", join(dir, "test.csv"), "--target", "gfa", "--out", dir], /cannot read model file/],
       [["assess", "--model", join(dir, "test.csv"), "--data", join(dir, "test.csv"), "--target", "gfa", "--out", dir], /test\.csv is not JSON/],
       [["assess", "--model", join(dir, "model.json"), "--data", join(dir, "no-depth.csv"), "--target", "gfa", "--out", dir], /depth/],

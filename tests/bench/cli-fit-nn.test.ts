@@ -75,9 +75,9 @@ describe("floorcast fit --model nn / predict", () => {
 
   it("user mistakes exit 2 with one line on stderr", async () => {
     for (const [flag, value, msg] of [
-      ["--layers", "8,x", /--layers must be an integer ≥ 1/],
+      ["--layers", "8,x", /--layers must be a whole number ≥ 1, got "x"/],
       ["--backend", "gpu", /--backend must be wasm, cpu or auto/],
-      ["--ensemble", "1", /--ensemble must be an integer ≥ 2/],
+      ["--ensemble", "1", /--ensemble must be a whole number ≥ 2, got "1"/],
       ["--conformal", "1.5", /--conformal must be a coverage in \(0, 1\)/],
       // 80 rows × 0.25 = 20 calibration rows; coverage 0.99 needs ⌈(n + 1)·0.99⌉ ≤ n, n ≥ 99 (Lei et al. 2018, §2.2; derived)
       ["--conformal", "0.99", /fitConformal: 20 calibration rows .* too few for coverage 0\.99: it needs at least 99/],

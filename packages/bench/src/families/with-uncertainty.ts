@@ -1,4 +1,5 @@
 import { fitConformal, fitEnsemble, type Surrogate, type SurrogateTrainer, type TrainingData } from "@floorcast/surrogate";
+import { parseWhole } from "../cli/parse-whole.js";
 import { UsageError } from "../cli/usage-error.js";
 import type { FamilyOption, FitOptions, ModelFamily } from "./model-family.js";
 
@@ -21,8 +22,7 @@ export const UNCERTAINTY_OPTIONS: readonly FamilyOption[] = [
  * @throws UsageError for a bad option value.
  */
 export async function fitWithUncertainty(family: ModelFamily, data: TrainingData, opts: FitOptions, seed: number, say: (line: string) => void): Promise<Surrogate> {
-  const k = opts.ensemble === undefined ? 1 : Number(opts.ensemble);
-  if (opts.ensemble !== undefined && (!Number.isInteger(k) || k < 2)) throw new UsageError(`fit: --ensemble must be an integer ≥ 2, got ${String(opts.ensemble)}`);
+  const k = opts.ensemble === undefined ? 1 : parseWhole("fit", "--ensemble", String(opts.ensemble), 2);
   const fit = family.fit?.bind(family);
   if (!fit) throw new UsageError(`fit: --model ${family.name} fits from the CSV itself`);
   const base: SurrogateTrainer = (d, s) => fit(d, opts, s, say);

@@ -19,6 +19,7 @@ import {
   type ValidityDomain,
 } from "@floorcast/surrogate";
 import type { CommandContext } from "../command-context.js";
+import { parseWhole } from "../parse-whole.js";
 import { UsageError } from "../usage-error.js";
 import { refitTrainer } from "../assess/refit-trainer.js";
 import { refuseOutsideDomain } from "../refuse-outside-domain.js";
@@ -40,11 +41,7 @@ interface AssessOptions {
   force?: boolean;
 }
 
-const int = (flag: string, v: string, min: number): number => {
-  const n = v.trim() === "" ? NaN : Number(v); // Number("") is 0: a blank value is not zero
-  if (!Number.isInteger(n) || n < min) throw new UsageError(`assess: ${flag} must be an integer ≥ ${min}, got ${v}`);
-  return n;
-};
+const int = (flag: string, v: string, min: number): number => parseWhole("assess", flag, v, min);
 
 /**
  * `floorcast assess`: the trust report of a surrogate on an independent test CSV (report.json, report.md,

@@ -1,5 +1,6 @@
 import type { Command } from "commander";
 import type { CommandContext } from "../command-context.js";
+import { parseWhole } from "../parse-whole.js";
 import { UsageError } from "../usage-error.js";
 import { runSuite } from "../../harness/run-suite.js";
 import { headlineTable } from "../../harness/headline-table.js";
@@ -37,10 +38,7 @@ export function registerBenchCommand(program: Command, ctx: CommandContext): voi
     .action(async (opts: BenchOptions) => {
       let seeds: number | undefined;
       if (opts.seeds !== undefined) {
-        if (!/^\d+$/.test(opts.seeds) || Number(opts.seeds) < 1 || Number(opts.seeds) > 100) {
-          throw new UsageError(`bench: --seeds must be a whole number in [1, 100], got ${JSON.stringify(opts.seeds)}`);
-        }
-        seeds = Number(opts.seeds);
+        seeds = parseWhole("bench", "--seeds", opts.seeds, 1, 100);
       }
       const { report, paths } = await runSuite({
         suite: opts.suite,

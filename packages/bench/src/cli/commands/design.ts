@@ -2,6 +2,7 @@ import type { Command } from "commander";
 import { createCsvWriter, createProgressBar, designRows } from "@floorcast/sampler";
 import type { CommandContext } from "../command-context.js";
 import { DESIGN_OPTION_HELP, resolveDesignOption } from "../resolve-design-option.js";
+import { parseWhole } from "../parse-whole.js";
 import { UsageError } from "../usage-error.js";
 
 interface DesignOptions {
@@ -13,14 +14,8 @@ interface DesignOptions {
   force?: boolean;
 }
 
-/** Parses a whole-number option, naming it in the error. */
-function wholeNumber(name: string, text: string): number {
-  // digits only, as sample and optimize read them: no sign (a negative seed or count is refused), no blanks
-  if (!/^\d+$/.test(text) || !Number.isSafeInteger(Number(text))) {
-    throw new UsageError(`design: --${name} must be a whole number ≥ 0, got ${JSON.stringify(text)}`);
-  }
-  return Number(text);
-}
+/** Parses a whole-number option (the CLI's one parser), naming it in the error. */
+const wholeNumber = (name: string, text: string): number => parseWhole("design", `--${name}`, text, 0);
 
 /**
  * `floorcast design`: writes a space-filling design in the unit cube to a CSV file (columns x1 … xD, one row

@@ -7,7 +7,7 @@ import { FLOORCAST_CAUTION } from "../../floorcast-caution.js";
 import { MODEL_FAMILIES } from "../../families/model-families.js";
 import { UNCERTAINTY_OPTIONS } from "../../families/with-uncertainty.js";
 import { fitModelFile } from "../../families/fit-model-file.js";
-import { parseWhole } from "../../families/parse-whole.js";
+import { parseWhole } from "../parse-whole.js";
 
 /** Options every model family shares, plus each family's own (see families/). */
 type FitCommandOptions = Record<string, string | boolean | undefined> & {

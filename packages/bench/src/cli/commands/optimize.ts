@@ -5,6 +5,7 @@ import cliProgress from "cli-progress";
 import { loadSurrogate, type Surrogate } from "@floorcast/surrogate";
 import { checkSchemaMatch } from "@floorcast/sampler";
 import type { CommandContext } from "../command-context.js";
+import { parseWhole } from "../parse-whole.js";
 import { UsageError } from "../usage-error.js";
 import { loadProblem } from "../../problem/load-problem.js";
 import { exactEvaluator } from "../../harness/exact-evaluator.js";
@@ -37,10 +38,7 @@ interface OptimizeOptions {
  */
 const MAX_OPTIMIZE_BUDGET = 1_000_000;
 
-const whole = (flag: string, v: string, min: number): number => {
-  if (!/^\d+$/.test(v) || Number(v) < min) throw new UsageError(`optimize: ${flag} must be a whole number ≥ ${min}, got ${JSON.stringify(v)}`);
-  return Number(v);
-};
+const whole = (flag: string, v: string, min: number): number => parseWhole("optimize", flag, v, min);
 
 /**
  * `floorcast optimize`: optimises one problem on the exact evaluator or on a surrogate model file;

@@ -12,6 +12,7 @@ import {
 } from "@floorcast/sampler";
 import type { CommandContext } from "../command-context.js";
 import { DESIGN_OPTION_HELP, resolveDesignOption } from "../resolve-design-option.js";
+import { parseWhole } from "../parse-whole.js";
 import { UsageError } from "../usage-error.js";
 
 interface SampleOptions {
@@ -31,12 +32,7 @@ interface SampleOptions {
   out: string;
 }
 
-function wholeNumber(flag: string, text: string, min: number): number {
-  if (!/^\d+$/.test(text.trim()) || !(Number(text) >= min) || !Number.isSafeInteger(Number(text))) {
-    throw new UsageError(`sample: ${flag} must be a whole number ≥ ${min}, got ${JSON.stringify(text)}`);
-  }
-  return Number(text);
-}
+const wholeNumber = (flag: string, text: string, min: number): number => parseWhole("sample", flag, text, min);
 
 /** Parses `--evaluator-timeout SECONDS` (decimals allowed, 0 = no limit, else whole milliseconds ≥ 0.001 s) into milliseconds. */
 function timeoutSeconds(text: string): number {

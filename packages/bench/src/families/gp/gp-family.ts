@@ -1,7 +1,7 @@
 import { KERNEL_NAMES, fitGaussianProcess, fitGaussianProcessParallel, type KernelName } from "@floorcast/surrogate";
 import { UsageError } from "../../cli/usage-error.js";
 import type { ModelFamily } from "../model-family.js";
-import { parseWhole } from "../parse-whole.js";
+import { parseWhole } from "../../cli/parse-whole.js";
 
 /**
  * The Gaussian-process family (`--model gp`): fitGaussianProcessParallel (the restarts on worker threads; the same

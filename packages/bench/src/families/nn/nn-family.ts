@@ -1,6 +1,6 @@
 import { UsageError } from "../../cli/usage-error.js";
 import type { ModelFamily } from "../model-family.js";
-import { parseWhole } from "../parse-whole.js";
+import { parseWhole } from "../../cli/parse-whole.js";
 
 const ACTIVATIONS = ["relu", "tanh", "elu"] as const;
 const BACKENDS = ["wasm", "cpu", "auto"] as const;
