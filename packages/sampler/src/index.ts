@@ -92,6 +92,7 @@ export { inputSchemaEntrySchema, inputSchemaOf, variablesOfSchema } from "./spac
 export type { InputSchemaEntry } from "./space/input-schema.js";
 export { checkSchemaMatch } from "./space/check-schema-match.js";
 export { checkSchemaRows } from "./space/check-schema-rows.js";
+export { schemaLevels } from "./space/schema-levels.js";
 export { latticeCount } from "./space/lattice-count.js";
 export type { DesignSpace } from "./space/design-space.js";
 export { validateDesignSpace } from "./space/validate-design-space.js";

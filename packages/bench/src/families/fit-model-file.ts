@@ -1,4 +1,4 @@
-import { readTable } from "@floorcast/sampler";
+import { readTable, schemaLevels } from "@floorcast/sampler";
 import { withInputSchema, type TrainingData } from "@floorcast/surrogate";
 import { UsageError } from "../cli/usage-error.js";
 import { datasetInputSchema } from "./dataset-input-schema.js";
@@ -36,12 +36,13 @@ export async function fitModelFile(request: FitModelRequest): Promise<{ readonly
   const opts: FitOptions = { ...optionDefaults(family.options), ...optionDefaults(UNCERTAINTY_OPTIONS), ...stripUndefined(request.options ?? {}) };
   const inputs = [...request.inputs];
   const targets = [...request.targets];
-  const table = await readTable(request.data, { inputs, targets });
+  const schema = await datasetInputSchema(request.data, inputs, say);
+  // categorical inputs with string levels are coded as the codec codes model rows (a string level's position)
+  const table = await readTable(request.data, { inputs, targets, levels: schemaLevels(schema) });
   const data: TrainingData = { inputs, targets, x: table.x, y: table.y };
   const model = family.fitCsv
     ? await family.fitCsv(request.data, inputs, targets, opts, request.seed, say)
     : await fitWithUncertainty(family, data, opts, request.seed, say);
-  const schema = await datasetInputSchema(request.data, inputs, say);
   const file = schema === undefined ? model.toJSON() : withInputSchema(model.toJSON() as object, schema);
   return { text: `${JSON.stringify(file)}\n`, rows: data.x.length };
 }

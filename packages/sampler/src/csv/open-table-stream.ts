@@ -41,6 +41,11 @@ export async function openTableStreamAs(
   if (options === null || typeof options !== "object") throw new TypeError(`${caller}: options must be an object`);
   for (const f of ["columns", "inputs", "targets"] as const) checkNames(caller, f, options[f]);
   const categorical = [...(checkNames(caller, "categorical", options.categorical) ?? [])];
+  if (options.levels !== undefined) {
+    const ok = typeof options.levels === "object" && options.levels !== null &&
+      Object.values(options.levels).every((l) => Array.isArray(l) && l.every((v) => typeof v === "string" || typeof v === "number"));
+    if (!ok) throw new TypeError(`${caller}: options.levels must map column names to arrays of string or number levels`);
+  }
   const file = basename(path);
   try {
     const s = await stat(path);
@@ -99,6 +104,7 @@ export async function openTableStreamAs(
     throw new RangeError(`${caller}: column ${quoteList(both)} is asked for both as numeric and as categorical`);
   }
   const numericIndex = columns.map((c) => header.indexOf(c));
+  const coders = columns.map((c) => levelCoder(options.levels?.[c]));
   const labelIndex = categorical.map((c) => header.indexOf(c));
   let linesBefore = 1 + newlines(header);
   let row = 0;
@@ -119,9 +125,10 @@ export async function openTableStreamAs(
         }
         const values = new Array<number>(numericIndex.length);
         for (let j = 0; j < numericIndex.length; j++) {
-          const parsed = parseNumericCell(record[numericIndex[j]!]!);
+          const coder = coders[j];
+          const parsed = coder === undefined ? parseNumericCell(record[numericIndex[j]!]!) : coder(record[numericIndex[j]!]!);
           if (typeof parsed === "string") {
-            const hint = categorical.length === 0 && options.columns === undefined ? " (name text columns in options.categorical)" : "";
+            const hint = coder === undefined && categorical.length === 0 && options.columns === undefined ? " (name text columns in options.categorical)" : "";
             throw new RangeError(`${caller}: ${where}, column ${JSON.stringify(columns[j])}: ${parsed}${hint}`);
           }
           values[j] = parsed;
@@ -139,6 +146,27 @@ export async function openTableStreamAs(
     categorical,
     close,
     [Symbol.asyncIterator]: () => generator,
+  };
+}
+
+/**
+ * The cell reader of a categorical column with at least one string level: a string level's cell → its position, a
+ * number level's cell → the number; anything else → an error message (a string). Undefined for all-number levels.
+ */
+function levelCoder(levels: readonly (string | number)[] | undefined): ((cell: string) => number | string) | undefined {
+  if (levels === undefined || levels.every((l) => typeof l === "number")) return undefined;
+  const byText = new Map<string, number>();
+  levels.forEach((l, k) => {
+    if (typeof l === "string") byText.set(l, k);
+  });
+  const numbers = new Set(levels.filter((l): l is number => typeof l === "number"));
+  const list = levels.map((l) => JSON.stringify(l)).join(", ");
+  return (cell) => {
+    const k = byText.get(cell);
+    if (k !== undefined) return k;
+    const v = parseNumericCell(cell);
+    if (typeof v === "number" && numbers.has(v)) return v;
+    return `${JSON.stringify(cell)} is not one of the levels ${list}`;
   };
 }
 

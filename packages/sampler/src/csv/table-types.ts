@@ -11,6 +11,13 @@ export interface ReadTableOptions {
   readonly inputs?: readonly string[];
   /** Target columns; numeric. */
   readonly targets?: readonly string[];
+  /**
+   * Levels of categorical numeric columns (name → levels, e.g. from an input schema). A column whose levels
+   * include a string is read as text and coded as the codec codes model rows: a string level as its position in
+   * the list, a number level as itself; any other cell is refused, naming row and column. Columns whose levels are
+   * all numbers are read as numbers, as without this option.
+   */
+  readonly levels?: Readonly<Record<string, readonly (string | number)[]>>;
 }
 
 /** One data row as read by {@link openTableStream}. */

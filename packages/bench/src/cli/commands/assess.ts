@@ -1,7 +1,7 @@
 import type { Command } from "commander";
 import { mkdir, readFile } from "node:fs/promises";
 import { basename, join } from "node:path";
-import { centredL2Discrepancy, checkSchemaRows, minPairwiseDistance, readTable } from "@floorcast/sampler";
+import { centredL2Discrepancy, checkSchemaRows, minPairwiseDistance, readTable, schemaLevels } from "@floorcast/sampler";
 import {
   buildTrustReport,
   buildValidityDomain,
@@ -98,10 +98,11 @@ async function runAssess(opts: AssessOptions, ctx: CommandContext): Promise<void
     throw new UsageError(`assess: --target ${opts.target} is not a target of the model (${model.targets.join(", ")})`);
   }
   const inputs = [...model.inputs];
-  const test = await readTable(opts.data, { inputs, targets: [opts.target], categorical: opts.by ? [opts.by] : [] });
   const schema = modelInputSchema("assess", basename(opts.model), json);
+  const levels = schemaLevels(schema); // string levels are read as their positions, as the model's rows code them
+  const test = await readTable(opts.data, { inputs, targets: [opts.target], categorical: opts.by ? [opts.by] : [], levels });
   if (schema) checkSchemaRows(schema, test.x, "assess", basename(opts.data));
-  const train = opts.train ? await readTable(opts.train, { inputs, targets: [...model.targets] }) : null;
+  const train = opts.train ? await readTable(opts.train, { inputs, targets: [...model.targets], levels }) : null;
   if (schema && train) checkSchemaRows(schema, train.x, "assess", basename(opts.train!));
   const trainData: TrainingData | null = train ? { inputs, targets: [...model.targets], x: train.x, y: train.y } : null;
 

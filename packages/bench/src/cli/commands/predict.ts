@@ -1,7 +1,7 @@
 import type { Command } from "commander";
 import { readFile } from "node:fs/promises";
 import { basename } from "node:path";
-import { checkSchemaRows, createCsvWriter, openTableStream, readTable, type CsvValue } from "@floorcast/sampler";
+import { checkSchemaRows, createCsvWriter, openTableStream, readTable, schemaLevels, type CsvValue } from "@floorcast/sampler";
 import { buildValidityDomain, domainOfModel, loadSurrogate } from "@floorcast/surrogate";
 import type { CommandContext } from "../command-context.js";
 import { UsageError } from "../usage-error.js";
@@ -61,15 +61,16 @@ async function runPredict(opts: PredictOptions, ctx: CommandContext): Promise<vo
   if (opts.data === STDIO_PATH && opts.train === STDIO_PATH) throw new UsageError("predict: only one of --data and --train can read stdin (-)");
   const inputs = [...model.inputs];
   const keepList = opts.keep?.split(",").map((c) => c.trim()).filter((c) => c !== "");
-  // Kept columns other than the inputs are read as text and copied verbatim.
+  const schema = modelInputSchema("predict", basename(opts.model), text);
+  const levels = schemaLevels(schema);
+  // Kept columns other than the inputs are read as text and copied verbatim; string levels are read as positions.
   const table = await withTableFile(ctx, opts.data, async (file) => {
     const head = await openTableStream(file, { columns: [] });
     head.close();
     const keep = keepList ?? head.header;
-    return readTable(file, { inputs, targets: [], categorical: keep.filter((c) => !inputs.includes(c)) });
+    return readTable(file, { inputs, targets: [], categorical: keep.filter((c) => !inputs.includes(c)), levels });
   });
   const keep = keepList ?? table.header;
-  const schema = modelInputSchema("predict", basename(opts.model), text);
   if (schema) checkSchemaRows(schema, table.x, "predict", opts.data === STDIO_PATH ? "stdin" : basename(opts.data));
   const trainX = opts.train ? (await readTableArg(ctx, opts.train, { inputs, targets: [] })).x : null;
   const domain = trainX ? buildValidityDomain(model.inputs, trainX) : domainOfModel(model);
@@ -89,6 +90,9 @@ async function runPredict(opts: PredictOptions, ctx: CommandContext): Promise<vo
   if (clash.length > 0) throw new UsageError(`predict: kept column ${clash.join(", ")} has the name of a prediction column; choose others with --keep`);
   const kept: ((i: number) => CsvValue)[] = keep.map((c) => {
     const j = inputs.indexOf(c);
+    const named = levels[c];
+    // a kept categorical input is written as its level, as the input CSV has it (a string level, not its position)
+    if (j >= 0 && named?.some((l) => typeof l === "string")) return (i) => (typeof named[table.x[i]![j]!] === "string" ? named[table.x[i]![j]!]! : table.x[i]![j]!);
     if (j >= 0) return (i) => table.x[i]![j]!;
     const text = table.categorical[c]!;
     return (i) => text[i]!;
