@@ -54,14 +54,18 @@ describe("generateDataset", () => {
     const slow = {
       name: "slow",
       concurrency: 6,
-      evaluate: async (x: Record<string, unknown>) => {
-        inFlight++;
-        most = Math.max(most, inFlight);
-        // later samples answer sooner, so order is only kept if the generator restores it
-        await new Promise((r) => setTimeout(r, 20 - ((x.frontage as number) % 10)));
-        inFlight--;
-        return { f: x.frontage as number };
-      },
+      // the one Evaluator contract: a batch in, one answer per input out (the generator sends batches of one)
+      evaluate: (batch: readonly Record<string, unknown>[]) =>
+        Promise.all(
+          batch.map(async (x) => {
+            inFlight++;
+            most = Math.max(most, inFlight);
+            // later samples answer sooner, so order is only kept if the generator restores it
+            await new Promise((r) => setTimeout(r, 20 - ((x.frontage as number) % 10)));
+            inFlight--;
+            return { f: x.frontage as number };
+          }),
+        ),
       close: async () => {},
     };
     const rows = await collect(generateDataset(s, { n: 24, design: "random", seed: 1, evaluator: slow }));
