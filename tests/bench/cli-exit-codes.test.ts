@@ -13,6 +13,7 @@ const root = fileURLToPath(new URL("../../", import.meta.url));
 const BIN = join(root, "packages/bench/bin/floorcast.js");
 const scenario = join(root, "datasets/scenarios/larkspur-terraces.json");
 const branin = join(root, "datasets/problems/standard-branin.json");
+const parcels = join(root, "datasets/parcels/");
 const dir = mkdtempSync(join(tmpdir(), "floorcast-exit-"));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 const p = (name: string) => join(dir, name);
@@ -37,6 +38,13 @@ beforeAll(async () => {
     const r = await runCli(["sample", "--scenario", scenario, "--n", "6", "--seed", "1", "--design", "lhs", "--shard", `${s}/2`, "--out", p(`s${s}.csv`)]);
     expect(r.code, r.err).toBe(0);
   }
+  // one good 20 × 30 m lot and one with no controls (fc_error in place)
+  const lot = { type: "Polygon", coordinates: [[[0, 0], [20, 0], [20, 30], [0, 30], [0, 0]]] };
+  const lotLines = ["front", "side", "rear", "side"];
+  writeFileSync(p("bad.geojson"), JSON.stringify({ type: "FeatureCollection", features: [
+    { type: "Feature", properties: { setbacks: { front: 3, side: 1, rear: 4 }, floorHeight: 3, maxHeight: 9, lotLines }, geometry: lot },
+    { type: "Feature", properties: { lotLines }, geometry: lot },
+  ] }));
   mkdirSync(p("reports"));
   writeFileSync(p("reports/report.json"), "{}\n");
 });
@@ -72,6 +80,11 @@ const table: Record<string, Partial<Record<0 | 1 | 2, () => string[]>>> = {
   bench: {
     0: () => ["bench", "--suite", "standard", "--problem", "standard-forrester", "--quick", "--no-peers", "--seeds", "1", "--out", fresh("d")],
     2: () => ["bench", "--suite", "nope", "--out", fresh("d")],
+  },
+  parcels: {
+    0: () => ["parcels", "--input", `${parcels}quillmere-parcels.geojson`, "--zoning", `${parcels}quillmere-zoning.json`, "--streets", `${parcels}quillmere-streets.geojson`, "--street-distance", "8", "--out", fresh("geojson")],
+    1: () => ["parcels", "--input", p("bad.geojson"), "--coordinates", "metres", "--out", fresh("geojson")],
+    2: () => ["parcels", "--input", p("bad.geojson"), "--coordinates", "metres", "--out", p("reports/report.json")],
   },
   demo: { 2: () => ["demo", "--out", p("reports"), "--no-such-option"] },
 };
