@@ -2,7 +2,6 @@ import type { Command } from "commander";
 import {
   commandEvaluator,
   createProgressBar,
-  loadScenario,
   manifestPathFor,
   massingEvaluator,
   parseShard,
@@ -12,10 +11,12 @@ import {
 } from "@floorcast/sampler";
 import type { CommandContext } from "../command-context.js";
 import { DESIGN_OPTION_HELP, resolveDesignOption } from "../resolve-design-option.js";
+import { resolveSampleSource } from "../sample-source.js";
 import { UsageError } from "../usage-error.js";
 
 interface SampleOptions {
-  scenario: string;
+  scenario?: string;
+  problem?: string;
   n: string;
   seed: string;
   design?: string;
@@ -59,8 +60,13 @@ function timeoutSeconds(text: string): number {
 export function registerSampleCommand(program: Command, ctx: CommandContext): void {
   program
     .command("sample")
-    .description("Sample a scenario's design space with the exact evaluator and write a dataset CSV with its manifest")
-    .requiredOption("--scenario <file>", "scenario file (JSON, see README \"Scenario files\")")
+    .description("Sample a scenario's (or a problem's) design space with the exact evaluator and write a dataset CSV with its manifest")
+    .option("--scenario <file>", "scenario file (JSON, see README \"Scenario files\"); one of --scenario and --problem is required")
+    .option(
+      "--problem <file>",
+      "problem file (JSON, see README \"Problem files\"): sample its own variables with its fixed values and its evaluator, " +
+        "so the CSV fits a model optimize --surrogate accepts for it; one of --scenario and --problem is required",
+    )
     .requiredOption("--n <n>", "design size (all shards together)")
     .requiredOption("--seed <s>", "seed of the design (whole number)")
     .option("--design <kind>", DESIGN_OPTION_HELP)
@@ -98,7 +104,8 @@ export function registerSampleCommand(program: Command, ctx: CommandContext): vo
         throw new UsageError("sample: --shard-count needs JOB_COMPLETION_INDEX (a Kubernetes Indexed Job); otherwise use --shard k/N");
       }
       const shard = opts.shard === undefined ? fromEnvironment?.shard : parseShard(opts.shard);
-      const scenario = await loadScenario(opts.scenario);
+      const source = await resolveSampleSource(opts);
+      const scenario = source.scenario;
       const { design, announce } = resolveDesignOption("sample", opts.design, n, scenario.parameters.length, ctx.stderr);
       const processes = wholeNumber("--processes", opts.processes ?? "1", 1);
       if (processes > 1 && opts.evaluatorCommand === undefined) {
@@ -115,11 +122,13 @@ export function registerSampleCommand(program: Command, ctx: CommandContext): vo
         throw new UsageError(`sample: --evaluator-protocol must be ids or ordered, got ${JSON.stringify(protocol)}`);
       }
       const evaluator: Evaluator | undefined =
-        opts.evaluatorCommand !== undefined
-          ? commandEvaluator(opts.evaluatorCommand, { processes, timeoutMs, protocol })
-          : opts.plateProfile === true
-            ? massingEvaluator(scenario, { plateProfile: true })
-            : undefined;
+        source.evaluator !== undefined
+          ? source.evaluator()
+          : opts.evaluatorCommand !== undefined
+            ? commandEvaluator(opts.evaluatorCommand, { processes, timeoutMs, protocol })
+            : opts.plateProfile === true
+              ? massingEvaluator(scenario, { plateProfile: true })
+              : undefined;
       let started = false;
       /** Once the run has started (so a mistake found before still prints one line): which shard and which design. */
       const announceStart = (): void => {
@@ -141,7 +150,7 @@ export function registerSampleCommand(program: Command, ctx: CommandContext): vo
           ...(shard === undefined ? {} : { shard }),
           resume: opts.resume === true,
           force: opts.force === true,
-          inputs: [opts.scenario],
+          inputs: source.inputs,
           ...(evaluator === undefined ? {} : { evaluator }),
           onDesignProgress: (done, total) => {
             announceStart();
@@ -167,6 +176,7 @@ export function registerSampleCommand(program: Command, ctx: CommandContext): vo
         designBar?.stop();
         bar?.stop();
         await evaluator?.close();
+        await source.close();
       }
     });
 }
