@@ -10,6 +10,7 @@ import {
   type Evaluator,
 } from "@floorcast/sampler";
 import type { CommandContext } from "../command-context.js";
+import { FLOORCAST_CAUTION } from "../../floorcast-caution.js";
 import { DESIGN_OPTION_HELP, resolveDesignOption } from "../resolve-design-option.js";
 import { resolveSampleSource } from "../sample-source.js";
 import { UsageError } from "../usage-error.js";
@@ -170,7 +171,7 @@ export function registerSampleCommand(program: Command, ctx: CommandContext): vo
         const s = manifest.shard;
         ctx.stdout.write(
           `wrote ${opts.out}: ${manifest.rows} rows (samples ${s.start}–${s.end - 1} of ${manifest.n}, shard ${s.index}/${s.count}), ` +
-            `sha256 ${manifest.csv.sha256}\nmanifest ${manifestPathFor(opts.out)}\n${manifest.caution}\n`,
+            `sha256 ${manifest.csv.sha256}\nmanifest ${manifestPathFor(opts.out)}\n${FLOORCAST_CAUTION}\n`,
         );
       } finally {
         designBar?.stop();
