@@ -6,6 +6,7 @@ import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { expectCleanOutcome } from "./reliability-cli-run.js";
 import { runCli } from "./run-cli.js";
+import { FLOORCAST_CAUTION } from "@floorcast/bench";
 import { HOSTILE_PROGRAM } from "../sampler/helpers/hostile-evaluator.js";
 
 // The README's exit-status table, cell by cell: each case is one command run that must end with that status.
@@ -13,6 +14,7 @@ const root = fileURLToPath(new URL("../../", import.meta.url));
 const BIN = join(root, "packages/bench/bin/floorcast.js");
 const scenario = join(root, "datasets/scenarios/larkspur-terraces.json");
 const branin = join(root, "datasets/problems/standard-branin.json");
+const parcels = join(root, "datasets/parcels/");
 const dir = mkdtempSync(join(tmpdir(), "floorcast-exit-"));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 const p = (name: string) => join(dir, name);
@@ -37,6 +39,13 @@ beforeAll(async () => {
     const r = await runCli(["sample", "--scenario", scenario, "--n", "6", "--seed", "1", "--design", "lhs", "--shard", `${s}/2`, "--out", p(`s${s}.csv`)]);
     expect(r.code, r.err).toBe(0);
   }
+  // one good 20 × 30 m lot and one with no controls (fc_error in place)
+  const lot = { type: "Polygon", coordinates: [[[0, 0], [20, 0], [20, 30], [0, 30], [0, 0]]] };
+  const lotLines = ["front", "side", "rear", "side"];
+  writeFileSync(p("bad.geojson"), JSON.stringify({ type: "FeatureCollection", features: [
+    { type: "Feature", properties: { setbacks: { front: 3, side: 1, rear: 4 }, floorHeight: 3, maxHeight: 9, lotLines }, geometry: lot },
+    { type: "Feature", properties: { lotLines }, geometry: lot },
+  ] }));
   mkdirSync(p("reports"));
   writeFileSync(p("reports/report.json"), "{}\n");
 });
@@ -73,6 +82,11 @@ const table: Record<string, Partial<Record<0 | 1 | 2, () => string[]>>> = {
     0: () => ["bench", "--suite", "standard", "--problem", "standard-forrester", "--quick", "--no-peers", "--seeds", "1", "--out", fresh("d")],
     2: () => ["bench", "--suite", "nope", "--out", fresh("d")],
   },
+  parcels: {
+    0: () => ["parcels", "--input", `${parcels}quillmere-parcels.geojson`, "--zoning", `${parcels}quillmere-zoning.json`, "--streets", `${parcels}quillmere-streets.geojson`, "--street-distance", "8", "--out", fresh("geojson")],
+    1: () => ["parcels", "--input", p("bad.geojson"), "--coordinates", "metres", "--out", fresh("geojson")],
+    2: () => ["parcels", "--input", p("bad.geojson"), "--coordinates", "metres", "--out", p("reports/report.json")],
+  },
   demo: { 2: () => ["demo", "--out", p("reports"), "--no-such-option"] },
 };
 
@@ -92,17 +106,19 @@ describe("exit statuses: the README's table, for every command", () => {
       it(`${command} → ${code}`, async () => {
         const r = await runCli(args());
         expectCleanOutcome(r, [Number(code)], `${command} ${code}`);
+        // every command that shows results shows the one caution (design writes a unit-cube design, no result)
+        if (code === "0" && command !== "design") expect(`${r.out}${r.err}`, command).toContain(FLOORCAST_CAUTION);
       }, 180_000);
     }
   }
-  it("a reader that closes the pipe early ends massing quietly (no EPIPE message, status 0)", async () => {
+  it("a reader that closes the pipe early ends massing quietly (only the caution on stderr, no EPIPE message, status 0)", async () => {
     writeFileSync(p("many.jsonl"), `${MASSING_OK}\n`.repeat(20_000));
     const child = spawn(process.execPath, [BIN, "massing", "--input", p("many.jsonl")], { stdio: ["ignore", "pipe", "pipe"] });
     let err = "";
     child.stderr.on("data", (c: Buffer) => (err += c.toString()));
     child.stdout.once("data", () => child.stdout.destroy()); // like `| head -1`: read a little, then close
     const code = await new Promise<number | null>((resolve) => child.on("close", (c) => resolve(c)));
-    expect(err).toBe("");
+    expect(err).toBe(`${FLOORCAST_CAUTION}\n`); // the caution, printed before the first result, and no EPIPE message
     expect(code).toBe(0);
   }, 120_000);
 });

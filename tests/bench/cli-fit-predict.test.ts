@@ -6,6 +6,7 @@ import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { runCli } from "./run-cli.js";
 import { loadSurrogate } from "@floorcast/surrogate";
+import { FLOORCAST_CAUTION } from "@floorcast/bench";
 
 const bin = fileURLToPath(new URL("../../packages/bench/bin/floorcast.js", import.meta.url));
 const run = (args: string[]) => spawnSync(process.execPath, [bin, ...args], { encoding: "utf8" });
@@ -43,6 +44,8 @@ describe("floorcast fit / predict", () => {
     const fit = run(["fit", "--data", p("train.csv"), "--inputs", "x", "--target", "y,z", "--model", "gp", "--kernel", "matern52", "--seed", "4", "--out", p("m.json")]);
     expect(fit.status).toBe(0);
     expect(fit.stdout).toMatch(/not a zoning determination/);
+    // the model file carries the one caution constant, sealed under its checksum (loadSurrogate below verifies it)
+    expect((JSON.parse(readFileSync(p("m.json"), "utf8")) as { caution?: string }).caution).toBe(FLOORCAST_CAUTION);
     const pred = run(["predict", "--model", p("m.json"), "--data", p("query.csv"), "--out", p("pred.csv")]);
     expect(pred.status).toBe(0);
     const out = readCsv(p("pred.csv"));

@@ -5,6 +5,7 @@ import { join } from "node:path";
 import { spawnSync } from "node:child_process";
 import { fileURLToPath } from "node:url";
 import { runCli } from "./run-cli.js";
+import { FLOORCAST_CAUTION } from "@floorcast/bench";
 import { evaluateMassing, quadParcel } from "@floorcast/sampler";
 import type { MassingInput } from "@floorcast/sampler";
 
@@ -39,6 +40,8 @@ describe("floorcast massing", () => {
     const lines = r.out.trim().split("\n").map((l) => JSON.parse(l));
     expect(lines).toEqual([evaluateMassing(larkspur), evaluateMassing(ferrow)]);
     expect(lines[0].plates).toBeUndefined();
+    // the caution, once, on stderr (stdout stays pure JSON Lines)
+    expect(r.err).toBe(`${FLOORCAST_CAUTION}\n`);
   });
 
   it("puts an error object in a bad line's place, goes on, and exits 1", async () => {
@@ -80,7 +83,7 @@ describe("floorcast massing", () => {
 
   it("empty input writes nothing and exits 0", async () => {
     const r = await run(["massing"], "");
-    expect([r.code, r.out]).toEqual([0, ""]);
+    expect([r.code, r.out, r.err]).toEqual([0, "", ""]); // no result shown, so no caution either
   });
 
   it("a missing --input file or an unknown option is a usage error (exit 2, one line, no stack)", async () => {

@@ -1,8 +1,9 @@
-import { mkdtempSync, readFileSync, writeFileSync } from "node:fs";
+import { existsSync, mkdtempSync, readFileSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 import proj4 from "proj4";
+import { claimOutput } from "@floorcast/sampler";
 import { referenceAvailable, runReference } from "../reference/python.js";
 import { runCli } from "./run-cli.js";
 
@@ -127,6 +128,42 @@ describe("floorcast parcels: user mistakes", () => {
       expect(r.code).toBe(2);
       expect(r.err.trim().split("\n")).toHaveLength(1);
       expect(r.err).toMatch(/parcels: /);
+    }
+  });
+
+  it("writes through claimOutput: --force replaces, an input as --out or a held lock is refused before any work, a failed run keeps the previous file", async () => {
+    const input = join(dir, "parcels.geojson");
+    const before = readFileSync(input, "utf8");
+    const out = join(dir, "claimed.geojson");
+    writeFileSync(out, "previous\n");
+    // an existing file is replaced only with --force, and then through the temporary name: none is left behind
+    expect((await runCli(["parcels", "--input", input, "--out", out])).code).toBe(2);
+    expect(readFileSync(out, "utf8")).toBe("previous\n");
+    const forced = await runCli(["parcels", "--input", input, "--out", out, "--force"]);
+    expect(forced.code).toBe(1); // the bowtie and nofront parcels fail in place (first describe)
+    expect((JSON.parse(readFileSync(out, "utf8")) as { features: unknown[] }).features.length).toBeGreaterThan(0);
+    expect(existsSync(`${out}.partial`)).toBe(false);
+    expect(existsSync(`${out}.lock`)).toBe(false);
+    // an output that is an input is refused, even with --force, and the input is untouched
+    const self = await runCli(["parcels", "--input", input, "--out", input, "--force"]);
+    expect(self.code).toBe(2);
+    expect(self.err).toMatch(/^floorcast: parcels: .*input/);
+    expect(readFileSync(input, "utf8")).toBe(before);
+    // a failed run (an input that is not GeoJSON) leaves the previous file as it was
+    writeFileSync(out, "previous\n");
+    const failed = await runCli(["parcels", "--input", join(dir, "zoning.json"), "--out", out, "--force"]);
+    expect(failed.code).toBe(2);
+    expect(readFileSync(out, "utf8")).toBe("previous\n");
+    expect(existsSync(`${out}.partial`)).toBe(false);
+    // a second writer of the same output is refused while the first holds its lock
+    const held = await claimOutput(out, { force: true });
+    try {
+      const second = await runCli(["parcels", "--input", input, "--out", out, "--force"]);
+      expect(second.code).toBe(2);
+      expect(second.err.trim().split("\n")).toHaveLength(1);
+      expect(readFileSync(out, "utf8")).toBe("previous\n");
+    } finally {
+      await held.release();
     }
   });
 

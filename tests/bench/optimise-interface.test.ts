@@ -63,6 +63,18 @@ describe("optimiser entry points: validation (common practice: TypeError for typ
     ).rejects.toThrow(/op must be/);
   });
 
+  it("geneticAlgorithm's mutationEtaGrowth: a number ≥ 0; 0 keeps ηm constant and changes the run", async () => {
+    const ev = braninEvaluator();
+    await expect(geneticAlgorithm(braninProblem, ev, { maxEvaluations: 40, mutationEtaGrowth: -1 })).rejects.toThrow(/geneticAlgorithm: options.mutationEtaGrowth must be ≥ 0, got -1/);
+    await expect(geneticAlgorithm(braninProblem, ev, { maxEvaluations: 40, mutationEtaGrowth: Number.NaN })).rejects.toThrow(RangeError);
+    await expect(geneticAlgorithm(braninProblem, ev, { maxEvaluations: 40, mutationEtaGrowth: "2" as never })).rejects.toThrow(TypeError);
+    // the first generation mutates with ηm itself; later ones differ once the growth has moved it
+    const run = (growth: number) => geneticAlgorithm(braninProblem, braninEvaluator(), { seed: 4, maxEvaluations: 400, mutationEtaGrowth: growth, keepHistory: true });
+    const [grown, flat] = await Promise.all([run(200), run(0)]);
+    expect(grown.history!.slice(0, 40)).toEqual(flat.history!.slice(0, 40));
+    expect(grown.history!.slice(40)).not.toEqual(flat.history!.slice(40));
+  });
+
   it("single-objective methods refuse two objectives; NSGA-II refuses one", async () => {
     const two: OptimisationProblem = { ...braninProblem, objectives: [{ output: "f", sense: "min" }, { output: "g", sense: "max" }] };
     await expect(geneticAlgorithm(two, braninEvaluator())).rejects.toThrow(/exactly one objective, got 2/);

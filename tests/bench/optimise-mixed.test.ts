@@ -145,13 +145,14 @@ describe("continuous constrained problem: min x² + y² s.t. x + y ≥ 1 (optimu
     constraints: [{ output: "s", op: ">=", value: 1 }],
   };
   const e = () => fnEvaluator((d) => ({ f: (d.x as number) ** 2 + (d.y as number) ** 2, s: (d.x as number) + (d.y as number) }));
-  // Tolerances: PSO 1e-3; the GA 2e-2: its coordinate-wise operators close in slowly along an active
-  // constraint at 45° (measured relative errors 2e-4 … 9e-3 over seeds 0–9 at 3000 evaluations, so this
-  // bound is a regression check, not a precision claim); the penalty method 1e-2
+  // Tolerances: PSO 1e-3; the GA 5e-3: its coordinate-wise operators close in slowly along an active
+  // constraint at 45°, and its mutation narrowing as the budget is spent (mutationEtaGrowth) lets it refine
+  // there: measured over seeds 0–59 at 3000 evaluations, median 3.5e-4, worst 2.4e-3 (seed 2: 9.3e-4; with a
+  // constant ηm = 20: median 1.5e-3, worst 1.9e-2, seed 2: 9.4e-3); the penalty method 1e-2
   // (the quadratic penalty's minimiser sits slightly outside, and the best feasible point it meets is
   // reported); BO 5e-2 at only 35 evaluations.
   it.each([
-    ["GA", () => geneticAlgorithm(p, e(), { seed: 2, maxEvaluations: 3000 }), 2e-2],
+    ["GA", () => geneticAlgorithm(p, e(), { seed: 2, maxEvaluations: 3000 }), 5e-3],
     ["PSO", () => particleSwarm(p, e(), { seed: 2, maxEvaluations: 3000 }), 1e-3],
     ["gradient (penalty)", () => projectedGradient(p, e(), { seed: 2, maxEvaluations: 3000 }), 1e-2],
     ["BO (probability of feasibility)", () => bayesianOptimisation(p, e(), { seed: 2, maxEvaluations: 35 }), 5e-2],

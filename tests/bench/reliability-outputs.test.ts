@@ -125,29 +125,80 @@ describe("one writer per output; nothing partial under a final name", () => {
     expect(readFileSync(out, "utf8").trimEnd().split("\n")).toHaveLength(3001);
     expect(readdirSync(dir).filter((f) => f.startsWith("shared.csv."))).toEqual([]);
   }, 240_000);
-  it("predict killed while writing leaves the previous file, not a short one", async () => {
-    const rows = ["a,b"];
-    for (let i = 0; i < 120_000; i++) rows.push(`${1 + (i % 8)},${1 + ((i * 7) % 5)}`);
-    writeFileSync(p("many.csv"), `${rows.join("\n")}\n`);
-    const out = p("pred.csv");
-    writeFileSync(out, KEEP);
-    const child = spawn(process.execPath, [BIN, "predict", "--model", p("model.json"), "--data", p("many.csv"), "--force", "--out", out], { stdio: "ignore" });
-    const ended = new Promise<void>((resolve) => child.on("close", () => resolve()));
-    // kill as soon as new bytes appear, under the temporary name or the final one (or when the run ends)
-    const deadline = Date.now() + 120_000;
-    let exited = false;
-    void ended.then(() => (exited = true));
-    while (!exited && Date.now() < deadline) {
-      if (existsSync(`${out}.partial`) && readFileSync(`${out}.partial`).length > 0) break;
-      if (readFileSync(out, "utf8") !== KEEP) break;
-      await new Promise((r) => setTimeout(r, 2));
+  // The probe: run a writer over an existing file holding KEEP, freeze it (SIGSTOP) at the first new byte under the
+  // final name or its temporary name, read the final name while it is frozen, then SIGKILL it. An atomic writer
+  // leaves KEEP or the whole new file at both moments; a writer that streams into the final name is caught with a
+  // short file. The same probe is run on a deliberately non-atomic writer (the sampler's CSV writer pointed at
+  // the final name, as predict wrote before it claimed its output), so the check is shown able to fail.
+  const ROWS = 120_000;
+  const atomicOutcome = (text: string): boolean => text === KEEP || (text.endsWith("\n") && text.trimEnd().split("\n").length === ROWS + 1);
+  /** Linux process state from /proc (T stopped, Z exited and not yet reaped), or "" when it is gone. */
+  const stateOf = (pid: number): string => {
+    try {
+      return readFileSync(`/proc/${pid}/stat`, "utf8").replace(/^.*\) /s, "")[0] ?? "";
+    } catch {
+      return "";
     }
+  };
+  async function freezeAtFirstWrite(args: string[], out: string): Promise<{ midRun: boolean; whileFrozen: string; afterKill: string }> {
+    writeFileSync(out, KEEP);
+    rmSync(`${out}.partial`, { force: true });
+    rmSync(`${out}.lock`, { force: true });
+    const child = spawn(process.execPath, args, { cwd: root, stdio: "ignore" });
+    let exited = false;
+    const ended = new Promise<void>((resolve) =>
+      child.on("close", () => {
+        exited = true;
+        resolve();
+      }),
+    );
+    const size = (f: string): number => (existsSync(f) ? readFileSync(f).length : 0);
+    const guard = Date.now() + 120_000; // a hang guard only: the probe itself does not depend on timing
+    let midRun = false;
+    while (!exited && Date.now() < guard) {
+      if (size(`${out}.partial`) > 0 || readFileSync(out, "utf8") !== KEEP) {
+        child.kill("SIGSTOP");
+        let state = stateOf(child.pid!);
+        while (state !== "T" && state !== "Z" && state !== "") state = stateOf(child.pid!); // the stop is delivered asynchronously
+        midRun = state === "T";
+        break;
+      }
+      await new Promise((r) => setTimeout(r, 1));
+    }
+    const whileFrozen = readFileSync(out, "utf8");
     child.kill("SIGKILL");
     await ended;
-    const text = readFileSync(out, "utf8");
-    // either the old file, or (if the run finished before the kill) the whole new one
-    if (text !== KEEP) expect(text.trimEnd().split("\n")).toHaveLength(120_001);
-  }, 240_000);
+    return { midRun, whileFrozen, afterKill: readFileSync(out, "utf8") };
+  }
+  it("predict frozen and killed while writing leaves the previous file, never a short one; a non-atomic writer fails the same probe", async () => {
+    const rows = ["a,b"];
+    for (let i = 0; i < ROWS; i++) rows.push(`${1 + (i % 8)},${1 + ((i * 7) % 5)}`);
+    writeFileSync(p("many.csv"), `${rows.join("\n")}\n`);
+    const out = p("pred.csv");
+    // the control: the CSV writer streaming into the final name, the same number of rows
+    const streamed = `import { createCsvWriter } from "@floorcast/sampler";
+      const w = createCsvWriter(${JSON.stringify(out)}, ["a", "b", "y_mean"]);
+      for (let i = 0; i < ${ROWS}; i++) await w.write([1, 2, 5]);
+      await w.close();`;
+    const control = await freezeAtFirstWrite(["--input-type=module", "-e", streamed], out);
+    expect(control.midRun).toBe(true);
+    expect(atomicOutcome(control.whileFrozen)).toBe(false);
+    expect(atomicOutcome(control.afterKill)).toBe(false);
+    // predict: frozen mid-run at its first byte in at least one of three tries (a try where the run ended before
+    // the probe saw a byte proves nothing), and every try leaves the previous file or the whole new one
+    let caught = 0;
+    for (let attempt = 0; attempt < 3 && caught === 0; attempt++) {
+      const r = await freezeAtFirstWrite([BIN, "predict", "--model", p("model.json"), "--data", p("many.csv"), "--force", "--out", out], out);
+      expect(atomicOutcome(r.whileFrozen), "while frozen").toBe(true);
+      expect(atomicOutcome(r.afterKill), "after SIGKILL").toBe(true);
+      if (r.midRun) {
+        caught += 1;
+        expect(r.whileFrozen).toBe(KEEP);
+        expect(r.afterKill).toBe(KEEP);
+      }
+    }
+    expect(caught).toBe(1);
+  }, 400_000);
 });
 
 describe("predict reports a row it cannot predict in place", () => {

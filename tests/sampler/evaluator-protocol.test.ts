@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { execFileSync } from "node:child_process";
 import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
@@ -73,6 +74,22 @@ describe("the id protocol", () => {
       if (existsSync(`${r.out}.partial`)) expect(aligned(`${r.out}.partial`)).toBeLessThanOrEqual(sample + 1);
     });
   }
+});
+
+describe("closing", () => {
+  it("close leaves no timer behind once the program has exited, so a finished run does not linger for the grace period", () => {
+    // In a fresh Node process (no test-runner timers): answer one sample, close, list the active handles. Before
+    // the fix the grace-period timer (5 s) stayed armed after the program exited and held the CLI open.
+    const script = `
+      import { commandEvaluator } from "@floorcast/sampler";
+      const e = commandEvaluator(${JSON.stringify(`${node} ${JSON.stringify(program)} ok -1`)});
+      await e.evaluate({ frontage: 2, depth: 3 }, { sample: 0 });
+      await e.finish();
+      await e.close();
+      console.log(JSON.stringify(process.getActiveResourcesInfo()));`;
+    const out = execFileSync(process.execPath, ["--input-type=module", "-e", script], { cwd: fileURLToPath(new URL("../../", import.meta.url)), encoding: "utf8" });
+    expect(JSON.parse(out) as string[]).not.toContain("Timeout");
+  });
 });
 
 describe("the in-order compatibility protocol", () => {

@@ -60,6 +60,7 @@ export { modelFileSchema } from "./model-file/model-file-schema.js";
 export type { ModelFile } from "./model-file/model-file-schema.js";
 export { parseModelFile } from "./model-file/parse-model-file.js";
 export { inputSchemaSchema, withInputSchema } from "./model-file/input-schema.js";
+export { withCaution } from "./model-file/with-caution.js";
 export type { InputSchema } from "./model-file/input-schema.js";
 export { loadSurrogate } from "./model-file/load-surrogate.js";
 export { sealModelFile, nodeSha256Hex } from "./model-file/seal-model-file.js";

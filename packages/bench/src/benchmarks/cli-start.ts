@@ -8,6 +8,7 @@
 import { spawnSync } from "node:child_process";
 import { readFileSync } from "node:fs";
 import { fileURLToPath } from "node:url";
+import { FLOORCAST_CAUTION } from "../floorcast-caution.js";
 
 const RUNS = Number(process.env.FLOORCAST_BENCH_RUNS ?? "9");
 const TICK = 0.01; // seconds per clock tick: USER_HZ is 100 on Linux (common practice)
@@ -47,4 +48,4 @@ for (const [label, args] of cases) {
   const s = label.startsWith("node -e 0") ? base : cpuOf(args);
   console.log(`${label.padEnd(40)} ${s.toFixed(2)} s   ×${(s / Math.max(base, TICK)).toFixed(1)}`);
 }
-console.log("Estimates for early feasibility studies only: not a zoning determination. Local codes and licensed professionals decide.");
+console.log(`\n${FLOORCAST_CAUTION}`);

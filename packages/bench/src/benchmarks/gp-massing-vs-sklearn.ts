@@ -18,6 +18,7 @@ import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { readTable } from "@floorcast/sampler";
 import { loadSurrogate } from "@floorcast/surrogate";
+import { FLOORCAST_CAUTION } from "../floorcast-caution.js";
 
 const root = fileURLToPath(new URL("../../../../", import.meta.url));
 const cli = `${root}packages/bench/bin/floorcast.js`;
@@ -110,7 +111,8 @@ async function run(): Promise<void> {
           (same ? "" : "   (threaded and 1-thread model files DIFFER)"),
       );
     }
-    console.log("Aims: time ratio ≤ 0.5 at RMSE ratio ≤ 1.02. Estimates for early feasibility studies only: not a zoning determination.");
+    console.log("Aims: time ratio ≤ 0.5 at RMSE ratio ≤ 1.02.");
+    console.log(`\n${FLOORCAST_CAUTION}`);
   } finally {
     rmSync(dir, { recursive: true, force: true });
   }

@@ -12,6 +12,7 @@ import { fileURLToPath } from "node:url";
 import { generateDataset, parseScenario } from "@floorcast/sampler";
 import type { Scenario } from "@floorcast/sampler";
 import { fitGaussianProcess } from "@floorcast/surrogate";
+import { FLOORCAST_CAUTION } from "../floorcast-caution.js";
 
 const root = fileURLToPath(new URL("../../../../", import.meta.url));
 const script = `${root}tests/reference/gp_sklearn.py`;
@@ -91,6 +92,7 @@ async function run(): Promise<void> {
     );
   }
   console.log("LML: ours is the log marginal likelihood of all n rows at the chosen hyperparameters; sklearn's of all n rows at its optimum.");
+  console.log(`\n${FLOORCAST_CAUTION}`);
 }
 
 await run();

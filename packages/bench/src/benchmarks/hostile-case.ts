@@ -53,7 +53,11 @@ export function drawHostileCase(rng: () => number): HostileCase {
 interface Run {
   readonly code: number | null;
   readonly err: string;
+  /** Stopped by the hang guard, not by the case. */
+  readonly hung: boolean;
 }
+
+const HANG_MS = 300_000;
 
 function floorcast(args: string[], killWhen?: () => boolean): Promise<Run> {
   return new Promise((resolve) => {
@@ -63,13 +67,32 @@ function floorcast(args: string[], killWhen?: () => boolean): Promise<Run> {
     const timer = setInterval(() => {
       if (killWhen?.()) child.kill("SIGKILL");
     }, 5);
-    const guard = setTimeout(() => child.kill("SIGKILL"), 600_000);
+    // a run that takes this long hangs (the largest case takes seconds): stop it and report it as unexpected
+    let hung = false;
+    const guard = setTimeout(() => {
+      hung = true;
+      child.kill("SIGKILL");
+    }, HANG_MS);
     child.on("close", (code) => {
       clearInterval(timer);
       clearTimeout(guard);
-      resolve({ code, err });
+      resolve({ code, err: hung ? `hung: stopped after ${HANG_MS / 1000} s\n${err}` : err, hung });
     });
   });
+}
+
+const farModels = new Map<string, Promise<number | null>>();
+
+/** Fits the predict-far model once per folder (cases may run side by side); resolves with fit's exit status. */
+function fitFarModel(dir: string, model: string): Promise<number | null> {
+  let fitted = farModels.get(model);
+  if (fitted === undefined) {
+    const train = join(dir, "train.csv");
+    writeFileSync(train, "a,b,y\n" + [[1, 2], [2, 3], [3, 1], [4, 4], [5, 2], [6, 1], [7, 3], [8, 5]].map(([a, b]) => `${a},${b},${a! + 2 * b!}`).join("\n") + "\n");
+    fitted = floorcast(["fit", "--data", train, "--inputs", "a,b", "--target", "y", "--restarts", "1", "--out", model]).then((r) => r.code);
+    farModels.set(model, fitted);
+  }
+  return fitted;
 }
 
 const sha = (f: string): string => createHash("sha256").update(readFileSync(f)).digest("hex");
@@ -157,6 +180,7 @@ export async function runHostileCase(c: HostileCase, dir: string, name: string):
         const r = await floorcast(attempts === 0 ? args : [...args.slice(0, -2), "--resume", "--out", out], () => sizeOf() >= killAt);
         attempts++;
         if (r.code === null && existsSync(out)) partial++; // a killed run must never leave the final name
+        if (r.hung) unexpected = r.err.split("\n")[0]!;
         if (r.code !== null && r.code !== 0) unexpected = `exit ${r.code}: ${r.err.trim().split("\n")[0] ?? ""}`;
       }
       if (!existsSync(out)) unexpected ??= "no dataset after 6 attempts";
@@ -165,13 +189,9 @@ export async function runHostileCase(c: HostileCase, dir: string, name: string):
     return { misalignedRows: differingRows(out, reference), partialFiles: partial + (existsSync(out) && !complete ? 1 : 0), nanOutputs: nanCells(out), unexpected };
   }
   // predict-far: a model of y = a + 2b (derived), asked about rows up to ±1e308
-  const train = join(dir, "train.csv");
   const model = join(dir, "model.json");
-  if (!existsSync(model)) {
-    writeFileSync(train, "a,b,y\n" + [[1, 2], [2, 3], [3, 1], [4, 4], [5, 2], [6, 1], [7, 3], [8, 5]].map(([a, b]) => `${a},${b},${a! + 2 * b!}`).join("\n") + "\n");
-    const fit = await floorcast(["fit", "--data", train, "--inputs", "a,b", "--target", "y", "--restarts", "1", "--out", model]);
-    if (fit.code !== 0) return { misalignedRows: 0, partialFiles: 0, nanOutputs: 0, unexpected: `fit exit ${fit.code}` };
-  }
+  const fitCode = await fitFarModel(dir, model);
+  if (fitCode !== 0) return { misalignedRows: 0, partialFiles: 0, nanOutputs: 0, unexpected: `fit exit ${fitCode}` };
   let state = c.seed + 1;
   const next = (): number => ((state = (state * 48271) % 2147483647) / 2147483647); // Park–Miller minimal standard
   const magnitudes = [1, 10, 1e10, 1e150, 1e160, 1e300, 1.7e308];

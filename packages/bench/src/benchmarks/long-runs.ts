@@ -17,6 +17,7 @@ import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { createDesign, defaultDesign, loadScenario, openTableStream, writeDataset } from "@floorcast/sampler";
 import { fitGaussianProcess } from "@floorcast/surrogate";
+import { FLOORCAST_CAUTION } from "../floorcast-caution.js";
 
 const SIZES = (process.env.FLOORCAST_LONG_ROWS ?? "100000,1000000,10000000").split(",").map(Number);
 /** Files up to this many rows are also read back. */
@@ -121,7 +122,7 @@ if (process.argv[2] === "--phase") {
         ].join(" | "),
       );
     }
-    console.log("\nThe datasets are estimates for early feasibility studies, not a zoning determination.");
+    console.log(`\n${FLOORCAST_CAUTION}`);
   } finally {
     rmSync(dir, { recursive: true, force: true });
   }

@@ -14,6 +14,7 @@ import { evaluateMassing, generateDataset, loadScenario, scenarioToMassingInput 
 import type { Scenario } from "@floorcast/sampler";
 import { fitMlp, useNnBackend, type MlpSurrogate } from "@floorcast/surrogate/nn";
 import { createMlpPredictor } from "@floorcast/surrogate/predict";
+import { FLOORCAST_CAUTION } from "../floorcast-caution.js";
 
 const root = fileURLToPath(new URL("../../../../", import.meta.url));
 const script = `${root}tests/reference/mlp_sklearn.py`;
@@ -75,7 +76,7 @@ async function run(): Promise<void> {
   const names = sc.parameters.map((p) => p.name);
   const test = await sample(sc, TEST_N, 999, names);
   console.log(`MLP benchmark: Quillmere Core (${names.length} parameters, exact massing via generateDataset), targets ${TARGETS.join(", ")}; 64-64 ReLU, Adam, batch 64, ≤ ${SETTINGS.epochs} epochs, early stopping; test RMSE on ${TEST_N} LHS rows.`);
-  console.log("Estimates for early feasibility studies only: not a zoning determination.\n");
+  console.log(`${FLOORCAST_CAUTION}\n`);
   console.log(`n      model                wall s   CPU s   epochs   RMSE ${TARGETS.map((t) => t.padStart(9)).join(" ")}   RMSE ratio vs sklearn`);
   let last: MlpSurrogate | undefined;
   for (const n of ns) {

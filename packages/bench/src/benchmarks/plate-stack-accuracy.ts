@@ -15,6 +15,7 @@ import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { readTable } from "@floorcast/sampler";
 import { main } from "../cli/main.js";
+import { FLOORCAST_CAUTION } from "../floorcast-caution.js";
 
 const root = fileURLToPath(new URL("../../../../", import.meta.url));
 const scenario = `${root}datasets/scenarios/hollin-quads.json`;
@@ -98,4 +99,4 @@ row("plate-stack (expected)", ps.mean, seconds["plate-stack.json"]);
 row("plate-stack (plugin)", plug.mean, seconds["plate-stack-plugin.json"]);
 const covered = ps.mean.filter((m, i) => Math.abs(y[i]! - m) <= 1.6448536269514722 * ps.sd[i]!).length / y.length;
 console.log(`plate-stack 90% interval (mean ± 1.645 sd, Monte Carlo through the rule): covers ${(100 * covered).toFixed(1)}% of test rows`);
-console.log("Estimates for early feasibility studies only: not a zoning determination. Local codes and licensed professionals decide.");
+console.log(`\n${FLOORCAST_CAUTION}`);

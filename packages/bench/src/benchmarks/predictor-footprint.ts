@@ -11,6 +11,7 @@ import { join } from "node:path";
 import { gzipSync } from "node:zlib";
 import { installTarballs, packWorkspace } from "./pack-workspace.js";
 import { bundlePredictor } from "./bundle-predictor.js";
+import { FLOORCAST_CAUTION } from "../floorcast-caution.js";
 
 /** Bytes of every file under a folder (symbolic links not followed) and the number of package.json files in it. */
 function footprint(dir: string): { bytes: number; packages: number } {
@@ -54,7 +55,7 @@ async function main(): Promise<void> {
     for (const r of rows) console.log(`| ${r.join(" | ")} | ${(Number(r[1]) / base).toFixed(1)} |`);
     const bytes = Buffer.byteLength(code);
     console.log(`\n@floorcast/surrogate/predict bundled by vite (IIFE, minified): ${(bytes / 1000).toFixed(1)} kB, ${(gzipSync(code).length / 1000).toFixed(1)} kB gzipped`);
-    console.log("\nPredictions are estimates for early feasibility studies, not a zoning determination.");
+    console.log(`\n${FLOORCAST_CAUTION}`);
   } finally {
     rmSync(dir, { recursive: true, force: true });
   }

@@ -7,6 +7,7 @@
 import { spawn, spawnSync, type ChildProcess } from "node:child_process";
 import { cpus, loadavg } from "node:os";
 import { fileURLToPath } from "node:url";
+import { FLOORCAST_CAUTION } from "../floorcast-caution.js";
 
 const root = fileURLToPath(new URL("../../../../", import.meta.url));
 const runs = Number(process.argv[2] ?? "5");
@@ -49,4 +50,5 @@ for (let k = 1; k <= runs; k++) {
 }
 stop();
 console.log(`\n${passed} of ${runs} runs passed under ${loops} busy loops on ${cpus().length} CPUs.`);
+console.log(`\n${FLOORCAST_CAUTION}`);
 process.exitCode = passed === runs ? 0 : 1;

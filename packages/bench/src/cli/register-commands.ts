@@ -9,7 +9,7 @@ type Register = (program: Command, ctx: CommandContext) => void;
  * exports a `register…Command(program, ctx)` function; adding one is one line here.
  */
 const COMMANDS: readonly { readonly name: string; readonly summary: string; readonly load: () => Promise<Register> }[] = [
-  { name: "sample", summary: "sample a scenario with the exact rule into a dataset CSV and manifest", load: async () => (await import("./commands/sample.js")).registerSampleCommand },
+  { name: "sample", summary: "sample a scenario (or a problem's own space) with the exact rule into a dataset CSV and manifest", load: async () => (await import("./commands/sample.js")).registerSampleCommand },
   { name: "merge", summary: "join dataset shards into one CSV identical to an unsharded run", load: async () => (await import("./commands/merge.js")).registerMergeCommand },
   { name: "assess", summary: "trust report of a surrogate on an independent test set", load: async () => (await import("./commands/assess.js")).registerAssessCommand },
   { name: "bench", summary: "measure the optimum gap of surrogate-based optimisation against the exact optimum", load: async () => (await import("./commands/bench.js")).registerBenchCommand },

@@ -1,5 +1,6 @@
 import { readTable, schemaLevels } from "@floorcast/sampler";
-import { withInputSchema, type TrainingData } from "@floorcast/surrogate";
+import { withCaution, withInputSchema, type TrainingData } from "@floorcast/surrogate";
+import { FLOORCAST_CAUTION } from "../floorcast-caution.js";
 import { UsageError } from "../cli/usage-error.js";
 import { datasetInputSchema } from "./dataset-input-schema.js";
 import { optionDefaults, type FitOptions } from "./model-family.js";
@@ -23,8 +24,9 @@ export interface FitModelRequest {
 
 /**
  * The one fit entry: reads the training columns of a CSV, fits the family with its defaults (overridden by
- * `options`), applies `--ensemble`/`--conformal`, records the input schema from the manifest, and returns the
- * model file's text exactly as `floorcast fit` writes it (the benchmark writes and reloads the same text).
+ * `options`), applies `--ensemble`/`--conformal`, records the input schema from the manifest and the caution
+ * (FLOORCAST_CAUTION), and returns the model file's text exactly as `floorcast fit` writes it (the benchmark
+ * writes and reloads the same text).
  * @param request - data, inputs, targets, family, seed and options.
  * @returns the model file's JSON text (one line and a newline) and the number of training rows.
  * @throws UsageError for an unknown family or a bad option value; RangeError from the CSV reader.
@@ -43,7 +45,8 @@ export async function fitModelFile(request: FitModelRequest): Promise<{ readonly
   const model = family.fitCsv
     ? await family.fitCsv(request.data, inputs, targets, opts, request.seed, say)
     : await fitWithUncertainty(family, data, opts, request.seed, say);
-  const file = schema === undefined ? model.toJSON() : withInputSchema(model.toJSON() as object, schema);
+  const fitted = schema === undefined ? model.toJSON() : withInputSchema(model.toJSON() as object, schema);
+  const file = withCaution(fitted as object, FLOORCAST_CAUTION);
   return { text: `${JSON.stringify(file)}\n`, rows: data.x.length };
 }
 

@@ -12,6 +12,12 @@ export interface GeneticAlgorithmOptions extends CommonOptions, Partial<Variatio
   readonly populationSize?: number;
   /** Tournament size for parent selection (≥ 2, default 2: binary tournament). */
   readonly tournamentSize?: number;
+  /**
+   * Growth of the polynomial mutation's distribution index over the run (≥ 0, default 200): generation by
+   * generation ηm rises linearly from `mutationEta` to `mutationEta + mutationEtaGrowth` as the budget is spent,
+   * so mutation explores early and refines late. 0 keeps ηm constant (the plain operator).
+   */
+  readonly mutationEtaGrowth?: number;
 }
 
 interface Member {
@@ -26,10 +32,15 @@ interface Member {
  * and (μ + λ) survival of the best by the same rules. Integers and stepped variables stay on
  * their lattice inside the operators (mutation moves whole steps); categoricals are crossed
  * uniformly and mutated by resampling levels. A child equal to a population member or an earlier
- * child is mutated again (duplicate avoidance), so the budget is not spent re-evaluating designs. Stops when `maxEvaluations` is spent.
+ * child is mutated again (duplicate avoidance), so the budget is not spent re-evaluating designs. The mutation
+ * narrows as the budget is spent (ηm rising linearly by `mutationEtaGrowth`; the time-dependent mutation idea of
+ * Michalewicz 1992, "Genetic Algorithms + Data Structures = Evolution Programs", non-uniform mutation, applied to
+ * the polynomial operator), which lets the elitist population refine an optimum it has found instead of
+ * scattering its children over the range. Stops when `maxEvaluations` is spent.
  * @param problem - single-objective problem.
  * @param evaluator - the function evaluated.
- * @param options - maxEvaluations (default 50 generations), seed, populationSize, tournamentSize, variation settings.
+ * @param options - maxEvaluations (default 50 generations), seed, populationSize, tournamentSize, variation settings,
+ *   mutationEtaGrowth.
  * @returns the result.
  */
 export async function geneticAlgorithm(
@@ -44,6 +55,7 @@ export async function geneticAlgorithm(
   const pop = numberOption(fn, "populationSize", options.populationSize, defPop + (defPop % 2), 4, true);
   if (pop % 2 !== 0) throw new RangeError(`${fn}: options.populationSize must be even, got ${pop}`);
   const tsize = numberOption(fn, "tournamentSize", options.tournamentSize, 2, 2, true);
+  const growth = numberOption(fn, "mutationEtaGrowth", options.mutationEtaGrowth, 200, 0);
   const settings = variationSettings(fn, dims, options);
   const session = new EvaluationSession("genetic-algorithm", problem, evaluator, {
     ...options,
@@ -62,8 +74,11 @@ export async function geneticAlgorithm(
     }
     return winner;
   };
+  const budget = session.remaining; // after the initial population (Infinity without maxEvaluations: ηm stays put)
   while (session.remaining > 0 && population.length > 0) {
-    const children = makeOffspring(session.codec, pop, () => tournament().x, population.map((m) => m.x), settings, rng);
+    const spent = Number.isFinite(budget) ? (budget - session.remaining) / budget : 0;
+    const step = { ...settings, mutationEta: settings.mutationEta + growth * spent };
+    const children = makeOffspring(session.codec, pop, () => tournament().x, population.map((m) => m.x), step, rng);
     const scored = await session.evaluate(children);
     const merged = [...population, ...scored.map((e, i) => ({ x: children[i]!, e }))];
     merged.sort(cmp);

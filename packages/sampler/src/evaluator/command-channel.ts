@@ -44,10 +44,6 @@ interface Pending {
   readonly reject: (e: Error) => void;
 }
 
-const sleep = (ms: number): Promise<"timeout"> =>
-  new Promise((resolve) => {
-    setTimeout(() => resolve("timeout"), ms);
-  });
 
 /**
  * Starts `command` through the system shell and pairs each line written to its stdin with the next line read
@@ -105,7 +101,19 @@ export function openCommandChannel(fn: string, command: string, options: Command
       resolve();
     });
   });
-  const waitExit = async (ms: number): Promise<boolean> => closed || (await Promise.race([exited, sleep(ms)])) !== "timeout";
+  /** Waits at most `ms` for the program to exit; the timer is cleared when it exits first, so it never holds the process open. */
+  const waitExit = async (ms: number): Promise<boolean> => {
+    if (closed) return true;
+    let t: NodeJS.Timeout | undefined;
+    const limit = new Promise<"timeout">((resolve) => {
+      t = setTimeout(() => resolve("timeout"), ms);
+    });
+    try {
+      return (await Promise.race([exited, limit])) !== "timeout";
+    } finally {
+      clearTimeout(t);
+    }
+  };
   const stop = (reason: Error): Promise<void> => {
     fail(reason);
     stopping ??= (async () => {

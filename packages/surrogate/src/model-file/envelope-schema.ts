@@ -18,7 +18,7 @@ export const trainingSummarySchema = z.looseObject({
 });
 
 /**
- * The zod schema of one model type's file: the shared versioned envelope (kind, formatVersion, modelType,
+ * The zod schema of one model type's file: the shared versioned envelope (kind, formatVersion, optional caution, modelType,
  * inputs, targets, optional inputSchema, inputScaling, outputScaling, payload, training, optional checksum) around `payload`.
  * Each model type builds its schema with this and adds one line to `model-file-schema.ts`.
  * @param modelType - the discriminator value, e.g. "gp".
@@ -30,6 +30,8 @@ export function envelopeSchema<T extends string, P extends z.ZodType>(modelType:
     kind: z.literal(MODEL_FILE_KIND),
     formatVersion: z.literal(MODEL_FORMAT_VERSION),
     modelType: z.literal(modelType),
+    /** The caution users see with the model's numbers (withCaution); files written before it lack it. */
+    caution: z.string().min(1).optional(),
     inputs: names,
     targets: names,
     /** Kind, bounds, scale and levels of each input (files written before it lack it, and load with a note). */

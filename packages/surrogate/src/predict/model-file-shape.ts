@@ -7,6 +7,8 @@ export interface ModelFileShape {
   readonly kind: string;
   readonly formatVersion: number;
   readonly modelType: string;
+  /** The caution users see with the model's numbers; files written before it lack it. */
+  readonly caution?: string;
   readonly inputs: readonly string[];
   readonly targets: readonly string[];
   readonly inputScaling: { readonly lower: readonly number[]; readonly upper: readonly number[] };

@@ -25,6 +25,7 @@ import { refitTrainer } from "../assess/refit-trainer.js";
 import { refuseOutsideDomain } from "../refuse-outside-domain.js";
 import { noteUnsealedModel } from "../note-unsealed-model.js";
 import { modelInputSchema } from "../model-input-schema.js";
+import { FLOORCAST_CAUTION } from "../../floorcast-caution.js";
 
 interface AssessOptions {
   model: string;
@@ -152,7 +153,7 @@ async function runAssess(opts: AssessOptions, ctx: CommandContext): Promise<void
   ctx.stdout.write(
     `assessed ${report.target} on ${m.n} test rows: RMSE ${m.rmse.toPrecision(4)}, MAE ${m.mae.toPrecision(4)}, max |error| ${m.maxAbsError.toPrecision(4)}, R² ${Number.isNaN(m.r2) ? "undefined" : m.r2.toFixed(4)}` +
       (report.domain ? `; ${report.domain.nOutside} rows outside the domain of validity` : "") +
-      `\nwrote ${join(opts.out, "report.json")}, report.md, report.html\n${report.caution}\n`,
+      `\nwrote ${join(opts.out, "report.json")}, report.md, report.html\n${FLOORCAST_CAUTION}\n`,
   );
 }
 

@@ -7,6 +7,7 @@ import type { Command } from "commander";
 import { evaluateMassing } from "@floorcast/sampler";
 import type { CommandContext } from "../command-context.js";
 import { EXIT_CODES } from "../exit-codes.js";
+import { FLOORCAST_CAUTION } from "../../floorcast-caution.js";
 import { STDIO_PATH } from "../stdio-table.js";
 import { UsageError } from "../usage-error.js";
 
@@ -50,8 +51,8 @@ async function openInput(ctx: CommandContext, file: string | undefined): Promise
  * `floorcast massing`: evaluates the exact massing rule on JSON Lines of MassingInput (stdin or
  * `--input FILE`) and writes one JSON line of MassingResult per input line, in order; a bad line gets
  * `{"error": {"line", "field", "message"}}` in its place and the exit status becomes 1. Blank lines are
- * skipped (they still count in line numbers). Estimates for early feasibility studies, not a zoning
- * determination.
+ * skipped (they still count in line numbers). Before the first result, the caution (FLOORCAST_CAUTION) goes
+ * to stderr once: estimates for early feasibility studies, not a zoning determination.
  * @param program - the root command.
  * @param ctx - the streams and exit status.
  */
@@ -71,8 +72,14 @@ export function registerMassingCommand(program: Command, ctx: CommandContext): v
       let lineNo = 0;
       let failed = 0;
       let pending: string[] = [];
+      let cautioned = false;
       const flush = async (): Promise<void> => {
         if (pending.length === 0) return;
+        if (!cautioned) {
+          // once, before the first result: whoever reads the results has seen the caution (stderr keeps stdout pure JSON Lines)
+          cautioned = true;
+          ctx.stderr.write(`${FLOORCAST_CAUTION}\n`);
+        }
         const text = pending.join("");
         pending = [];
         if (!ctx.stdout.write(text)) await once(ctx.stdout, "drain");

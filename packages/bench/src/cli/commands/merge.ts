@@ -1,6 +1,7 @@
 import type { Command } from "commander";
 import { manifestPathFor, mergeShards } from "@floorcast/sampler";
 import type { CommandContext } from "../command-context.js";
+import { FLOORCAST_CAUTION } from "../../floorcast-caution.js";
 
 /**
  * `floorcast merge`: checks the shards' manifests and joins them into one dataset CSV, byte-identical to an
@@ -19,7 +20,7 @@ export function registerMergeCommand(program: Command, ctx: CommandContext): voi
       const manifest = await mergeShards(shards, opts.out, { force: opts.force === true });
       ctx.stdout.write(
         `merged ${shards.length} shards into ${opts.out}: ${manifest.rows} rows, sha256 ${manifest.csv.sha256}\n` +
-          `manifest ${manifestPathFor(opts.out)}\n${manifest.caution}\n`,
+          `manifest ${manifestPathFor(opts.out)}\n${FLOORCAST_CAUTION}\n`,
       );
     });
 }

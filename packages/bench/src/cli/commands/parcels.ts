@@ -1,9 +1,9 @@
-import { existsSync } from "node:fs";
-import { readFile, rename, writeFile } from "node:fs/promises";
+import { readFile } from "node:fs/promises";
 import { basename } from "node:path";
 import type { Command } from "commander";
 import type { CommandContext } from "../command-context.js";
 import { EXIT_CODES } from "../exit-codes.js";
+import { FLOORCAST_CAUTION } from "../../floorcast-caution.js";
 import { UsageError } from "../usage-error.js";
 import { evaluateParcelFile } from "../../parcels/evaluate-parcel-file.js";
 import { streetGeometrySchema, zoningTableSchema } from "../../parcels/parcel-file-schema.js";
@@ -81,7 +81,7 @@ export function registerParcelsCommand(program: Command, ctx: CommandContext): v
     .option("--street-distance <metres>", "an edge whose midpoint lies within this distance of a street line faces it", "6")
     .option("--coordinates <lonlat|metres>", "lonlat (RFC 7946, projected to local metres) or metres (a projected CRS)", "lonlat")
     .option("--plates", "add every parcel's floor plates as Polygon features")
-    .option("--force", "overwrite --out if it exists")
+    .option("--force", "replace an existing output file")
     .action(async (opts: ParcelsOptions) => {
       if (opts.coordinates !== "lonlat" && opts.coordinates !== "metres") {
         throw new UsageError(`parcels: --coordinates must be lonlat or metres, got ${JSON.stringify(opts.coordinates)}`);
@@ -90,7 +90,7 @@ export function registerParcelsCommand(program: Command, ctx: CommandContext): v
       if (!(distance >= 0) || !Number.isFinite(distance)) {
         throw new UsageError(`parcels: --street-distance must be a number ≥ 0, got ${JSON.stringify(opts.streetDistance)}`);
       }
-      if (existsSync(opts.out) && opts.force !== true) throw new UsageError(`parcels: ${opts.out} exists (use --force to overwrite)`);
+      const claim = await ctx.claimOutput("parcels", opts.out, { force: opts.force, inputs: [opts.input, opts.zoning, opts.streets] });
       const collection = await readJson(opts.input, "--input");
       const zoning = opts.zoning === undefined ? undefined : await readZoning(opts.zoning);
       const streets = opts.streets === undefined ? undefined : await readStreets(opts.streets);
@@ -107,13 +107,11 @@ export function registerParcelsCommand(program: Command, ctx: CommandContext): v
         if (e instanceof RangeError) throw new UsageError(`parcels: ${basename(opts.input)}: ${e.message.replace(/^evaluateParcelFile: /, "")}`);
         throw e;
       }
-      const tmp = `${opts.out}.partial`;
-      await writeFile(tmp, `${JSON.stringify(result.collection)}\n`);
-      await rename(tmp, opts.out);
+      await claim.put(opts.out, `${JSON.stringify(result.collection)}\n`);
+      await claim.commit();
       const total = result.evaluated.length + result.failed;
       ctx.stdout.write(
-        `parcels: ${result.evaluated.length} of ${total} parcels of ${basename(opts.input)} evaluated → ${opts.out}\n` +
-          "Estimates for early feasibility studies only: not a zoning determination. Local codes and licensed professionals decide.\n",
+        `parcels: ${result.evaluated.length} of ${total} parcels of ${basename(opts.input)} evaluated → ${opts.out}\n${FLOORCAST_CAUTION}\n`,
       );
       if (result.failed > 0) {
         ctx.stderr.write(`parcels: ${result.failed} of ${total} features could not be evaluated (see their fc_error property)\n`);

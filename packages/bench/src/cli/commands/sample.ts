@@ -2,7 +2,6 @@ import type { Command } from "commander";
 import {
   commandEvaluator,
   createProgressBar,
-  loadScenario,
   manifestPathFor,
   massingEvaluator,
   parseShard,
@@ -11,12 +10,15 @@ import {
   type Evaluator,
 } from "@floorcast/sampler";
 import type { CommandContext } from "../command-context.js";
+import { FLOORCAST_CAUTION } from "../../floorcast-caution.js";
 import { DESIGN_OPTION_HELP, resolveDesignOption } from "../resolve-design-option.js";
 import { parseWhole } from "../parse-whole.js";
+import { resolveSampleSource } from "../sample-source.js";
 import { UsageError } from "../usage-error.js";
 
 interface SampleOptions {
-  scenario: string;
+  scenario?: string;
+  problem?: string;
   n: string;
   seed: string;
   design?: string;
@@ -55,8 +57,13 @@ function timeoutSeconds(text: string): number {
 export function registerSampleCommand(program: Command, ctx: CommandContext): void {
   program
     .command("sample")
-    .description("Sample a scenario's design space with the exact evaluator and write a dataset CSV with its manifest")
-    .requiredOption("--scenario <file>", "scenario file (JSON, see README \"Scenario files\")")
+    .description("Sample a scenario's (or a problem's) design space with the exact evaluator and write a dataset CSV with its manifest")
+    .option("--scenario <file>", "scenario file (JSON, see README \"Scenario files\"); one of --scenario and --problem is required")
+    .option(
+      "--problem <file>",
+      "problem file (JSON, see README \"Problem files\"): sample its own variables with its fixed values and its evaluator, " +
+        "so the CSV fits a model optimize --surrogate accepts for it; one of --scenario and --problem is required",
+    )
     .requiredOption("--n <n>", "design size (all shards together)")
     .requiredOption("--seed <s>", "seed of the design (whole number)")
     .option("--design <kind>", DESIGN_OPTION_HELP)
@@ -94,7 +101,8 @@ export function registerSampleCommand(program: Command, ctx: CommandContext): vo
         throw new UsageError("sample: --shard-count needs JOB_COMPLETION_INDEX (a Kubernetes Indexed Job); otherwise use --shard k/N");
       }
       const shard = opts.shard === undefined ? fromEnvironment?.shard : parseShard(opts.shard);
-      const scenario = await loadScenario(opts.scenario);
+      const source = await resolveSampleSource(opts);
+      const scenario = source.scenario;
       const { design, announce } = resolveDesignOption("sample", opts.design, n, scenario.parameters.length, ctx.stderr);
       const processes = wholeNumber("--processes", opts.processes ?? "1", 1);
       if (processes > 1 && opts.evaluatorCommand === undefined) {
@@ -111,11 +119,13 @@ export function registerSampleCommand(program: Command, ctx: CommandContext): vo
         throw new UsageError(`sample: --evaluator-protocol must be ids or ordered, got ${JSON.stringify(protocol)}`);
       }
       const evaluator: Evaluator | undefined =
-        opts.evaluatorCommand !== undefined
-          ? commandEvaluator(opts.evaluatorCommand, { processes, timeoutMs, protocol })
-          : opts.plateProfile === true
-            ? massingEvaluator(scenario, { plateProfile: true })
-            : undefined;
+        source.evaluator !== undefined
+          ? source.evaluator()
+          : opts.evaluatorCommand !== undefined
+            ? commandEvaluator(opts.evaluatorCommand, { processes, timeoutMs, protocol })
+            : opts.plateProfile === true
+              ? massingEvaluator(scenario, { plateProfile: true })
+              : undefined;
       let started = false;
       /** Once the run has started (so a mistake found before still prints one line): which shard and which design. */
       const announceStart = (): void => {
@@ -137,7 +147,7 @@ export function registerSampleCommand(program: Command, ctx: CommandContext): vo
           ...(shard === undefined ? {} : { shard }),
           resume: opts.resume === true,
           force: opts.force === true,
-          inputs: [opts.scenario],
+          inputs: source.inputs,
           ...(evaluator === undefined ? {} : { evaluator }),
           onDesignProgress: (done, total) => {
             announceStart();
@@ -157,12 +167,13 @@ export function registerSampleCommand(program: Command, ctx: CommandContext): vo
         const s = manifest.shard;
         ctx.stdout.write(
           `wrote ${opts.out}: ${manifest.rows} rows (samples ${s.start}–${s.end - 1} of ${manifest.n}, shard ${s.index}/${s.count}), ` +
-            `sha256 ${manifest.csv.sha256}\nmanifest ${manifestPathFor(opts.out)}\n${manifest.caution}\n`,
+            `sha256 ${manifest.csv.sha256}\nmanifest ${manifestPathFor(opts.out)}\n${FLOORCAST_CAUTION}\n`,
         );
       } finally {
         designBar?.stop();
         bar?.stop();
         await evaluator?.close();
+        await source.close();
       }
     });
 }
