@@ -1,0 +1,65 @@
+import type { Design, Objective, Outputs } from "../optimise/optimisation-problem.js";
+
+/** The best design one route found for one parcel, exactly evaluated. */
+export interface ParcelOptimum {
+  /** Exact objective value at `design`; null when no exactly feasible design was found. */
+  readonly value: number | null;
+  readonly design: Design | null;
+  /** Exact outputs at `design` (null with it). */
+  readonly outputs: Outputs | null;
+  /** Exact evaluations this route spent on this parcel. */
+  readonly evaluations: number;
+  /** 1 = best objective among the parcels (ties by file order; parcels without a value last). */
+  readonly rank: number;
+}
+
+/** The surrogate route's result on one parcel: the surrogate's choice, re-evaluated exactly. */
+export interface SurrogateParcelOptimum extends ParcelOptimum {
+  /** The surrogate's predicted objective at its choice. */
+  readonly predicted: number | null;
+  /** Rank by `predicted` (what the surrogate alone says, before re-evaluation). */
+  readonly predictedRank: number;
+  /** True when the parcel's designs were in the training set. */
+  readonly trained: boolean;
+}
+
+/** One parcel of a ranking. */
+export interface RankedParcel {
+  /** Position in the parcel list (file order among evaluated parcels). */
+  readonly index: number;
+  readonly id: string;
+  readonly exact: ParcelOptimum | null;
+  readonly surrogate: SurrogateParcelOptimum | null;
+}
+
+/** Agreement of a ranking with the exact route's ranking. */
+export interface RankAgreement {
+  /** Spearman's rho (scipy.stats.spearmanr's definition). */
+  readonly spearman: number;
+  /** Kendall's tau-b (scipy.stats.kendalltau's default). */
+  readonly kendall: number;
+  /** Share of the exact top `shortlist` also in this ranking's top `shortlist`. */
+  readonly topOverlap: number;
+}
+
+/** What rankParcels returns. */
+export interface ParcelRanking {
+  readonly kind: "floorcast.parcel-ranking";
+  readonly formatVersion: 1;
+  readonly caution: string;
+  readonly objective: Objective;
+  readonly optimizer: string;
+  readonly seed: number;
+  /** Exact evaluations per parcel on the exact route; surrogate evaluations per parcel on the surrogate route. */
+  readonly budget: number;
+  readonly shortlist: number;
+  readonly parcels: readonly RankedParcel[];
+  readonly evaluations: {
+    readonly exact: number | null;
+    readonly surrogate: { readonly training: number; readonly reevaluation: number; readonly total: number } | null;
+  };
+  /** The surrogate route: training parcels, rows and family. */
+  readonly surrogate: { readonly model: string; readonly trainingParcels: readonly string[]; readonly rows: number } | null;
+  /** Against the exact ranking (both routes run): by re-evaluated values and by the surrogate's predictions. */
+  readonly agreement: { readonly reevaluated: RankAgreement; readonly predicted: RankAgreement } | null;
+}
