@@ -47,3 +47,7 @@ export type { ParcelSurrogate, ParcelSurrogateRequest } from "../parcels/train-p
 export { rankParcels } from "../parcels/rank-parcels.js";
 export type { RankParcelsOptions } from "../parcels/rank-parcels.js";
 export type { ParcelOptimum, ParcelRanking, RankAgreement, RankedParcel, SurrogateParcelOptimum } from "../parcels/parcel-ranking.js";
+export type { ParcelRankingReport } from "../parcels/parcel-ranking.js";
+export { rankedParcelCollection } from "../parcels/ranked-parcel-collection.js";
+export { rankParcelCollection } from "../parcels/rank-parcel-collection.js";
+export type { RankedParcelFile } from "../parcels/rank-parcel-collection.js";

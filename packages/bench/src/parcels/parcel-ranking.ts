@@ -63,3 +63,11 @@ export interface ParcelRanking {
   /** Against the exact ranking (both routes run): by re-evaluated values and by the surrogate's predictions. */
   readonly agreement: { readonly reevaluated: RankAgreement; readonly predicted: RankAgreement } | null;
 }
+
+/** A parcel ranking as a report carries it: the parcel file's name, the ranking and each parcel's outline (local metres). */
+export interface ParcelRankingReport {
+  readonly file: string;
+  readonly ranking: ParcelRanking;
+  /** Outer ring of each ranked parcel, in ranking order, local metres. */
+  readonly outlines: readonly (readonly (readonly [number, number])[])[];
+}

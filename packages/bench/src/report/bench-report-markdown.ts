@@ -3,10 +3,9 @@ import { fitRatio } from "../harness/fit-ratio.js";
 import { headlineTable } from "../harness/headline-table.js";
 import { formatDesign } from "../harness/format-design.js";
 import { formatPercent } from "../harness/format-percent.js";
+import { markdownTable } from "./markdown-table.js";
 
-const cell = (s: string): string => s.replace(/\|/g, "\\|");
-const table = (header: readonly string[], rows: readonly (readonly string[])[]): string =>
-  [`| ${header.map(cell).join(" | ")} |`, `| ${header.map(() => "---").join(" | ")} |`, ...rows.map((r) => `| ${r.map(cell).join(" | ")} |`)].join("\n");
+const table = markdownTable;
 const pct = formatPercent;
 const fmt = (v: number | null | undefined): string => (v === null || v === undefined || !Number.isFinite(v) ? "—" : String(Number(v.toPrecision(4))));
 
