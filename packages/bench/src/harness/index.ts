@@ -51,3 +51,4 @@ export type { ParcelRankingReport } from "../parcels/parcel-ranking.js";
 export { rankedParcelCollection } from "../parcels/ranked-parcel-collection.js";
 export { rankParcelCollection } from "../parcels/rank-parcel-collection.js";
 export type { RankedParcelFile } from "../parcels/rank-parcel-collection.js";
+export { rankDemoParcels, DEFAULT_PARCELS_DIR } from "../parcels/rank-demo-parcels.js";

@@ -48,7 +48,7 @@ function centroid(v: readonly Point[]): Point {
 /**
  * A plan of parcels coloured by their estimated capacity, as inline SVG in a `<figure>`: north up, one scale
  * for both axes, each parcel filled along the viridis ramp from the lowest to the highest capacity (grey
- * without one) and labelled with its id and rank, a colour bar with the range and a 10 m-rounded scale bar.
+ * without one) and labelled with its id and rank (turned upright on a lot taller than wide), a colour bar with the range and a 10 m-rounded scale bar.
  * @param parcels - the parcels (local metres), ≥ 1.
  * @param caption - what the figure shows (escaped).
  * @param unit - the capacity's label on the colour bar, e.g. "best gfa (m²)".
@@ -78,11 +78,15 @@ export function parcelCapacityPlan(parcels: readonly PlanParcel[], caption: stri
     const fill = p.capacity === null || !Number.isFinite(p.capacity) ? "#bbbbbb" : rampColour(share(p.capacity));
     const pts = p.vertices.map((q: Point) => `${sx(q[0])},${sy(q[1])}`).join(" ");
     const [cx, cy] = centroid(p.vertices);
+    // a parcel taller than wide gets its label turned upright, so narrow lots side by side keep theirs apart
+    const xs = p.vertices.map((q: Point) => q[0]);
+    const ys = p.vertices.map((q: Point) => q[1]);
+    const upright = Math.max(...ys) - Math.min(...ys) > Math.max(...xs) - Math.min(...xs);
     const dark = p.capacity !== null && share(p.capacity) < 0.6;
     const title = `${p.id}: rank ${p.rank}, ${unit} ${formatNumber(p.capacity, 5)}`;
     return (
       `<g class="parcel"><title>${escapeHtml(title)}</title><polygon points="${pts}" fill="${fill}" stroke="#222" stroke-width="1"/>` +
-      `<text x="${sx(cx)}" y="${sy(cy)}" text-anchor="middle" font-size="10" fill="${dark ? "#fff" : "#111"}">${escapeHtml(p.id)} · ${p.rank}</text></g>`
+      `<text x="${sx(cx)}" y="${sy(cy)}"${upright ? ` transform="rotate(-90 ${sx(cx)} ${sy(cy)})"` : ""} text-anchor="middle" dominant-baseline="middle" font-size="10" fill="${dark ? "#fff" : "#111"}">${escapeHtml(p.id)} · ${p.rank}</text></g>`
     );
   });
   const barY = pad + plotH + 22;
