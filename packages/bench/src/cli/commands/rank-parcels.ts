@@ -1,4 +1,4 @@
-import { mkdtemp, rm } from "node:fs/promises";
+import { mkdir, mkdtemp, rm } from "node:fs/promises";
 import { tmpdir } from "node:os";
 import { basename, join } from "node:path";
 import type { Command } from "commander";
@@ -66,7 +66,7 @@ export function registerRankParcelsCommand(program: Command, ctx: CommandContext
     .option("--training-parcels <m>", "parcels the surrogate's training designs are drawn on; default two thirds")
     .option("--training-rows <n>", "exact evaluations in the surrogate's training set; default 8 per training parcel")
     .option("--model <family>", `surrogate family (${MODEL_FAMILIES.filter((f) => f.name !== "plate-stack").map((f) => f.name).join(", ")})`, "gp")
-    .option("--work <dir>", "keep the training CSV, its manifest and the model file in this folder (default: a temporary one, removed)")
+    .option("--work <dir>", "keep the training CSV, its manifest and the model file in this folder, created when missing (default: a temporary one, removed)")
     .option("--force", "overwrite outputs that exist")
     .action(async (opts: RankParcelsCommandOptions) => {
       const cmd = "rank-parcels";
@@ -83,6 +83,7 @@ export function registerRankParcelsCommand(program: Command, ctx: CommandContext
       const inputs = await readParcelInputs(cmd, opts);
       const summary = { json: `${opts.summary}.json`, md: `${opts.summary}.md` };
       const claim = await ctx.claimOutput(cmd, [opts.out, summary.json, summary.md], { force: opts.force, inputs: [opts.input, opts.zoning, opts.streets] });
+      if (opts.work !== undefined) await mkdir(opts.work, { recursive: true });
       const work = opts.work ?? (await mkdtemp(join(tmpdir(), "floorcast-rank-")));
       let bar: ReturnType<typeof createProgressBar> | undefined;
       let stage = "";
