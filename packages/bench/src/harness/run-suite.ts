@@ -26,8 +26,11 @@ export interface RunSuiteOptions {
   readonly peers?: boolean;
   /** Problems directory (default {@link DEFAULT_PROBLEMS_DIR}, the problems shipped with floorcast). */
   readonly problemsDir?: string;
-  /** Rank the demo parcel file by capacity and add its plan to the report (`floorcast demo`), with this budget per parcel. */
-  readonly parcelBudget?: number;
+  /**
+   * Rank the demo parcel file by capacity and add its plan to the report (`floorcast demo`): evaluations per parcel,
+   * and the folder of the parcel files (default DEFAULT_PARCELS_DIR, the files shipped with floorcast).
+   */
+  readonly parcels?: { readonly budget: number; readonly dir?: string };
   /** Progress messages (stderr). */
   readonly progress?: Writable;
   /** Overrides for tests: training sizes, test size, budgets. */
@@ -38,7 +41,7 @@ export interface RunSuiteOptions {
  * Runs a suite end to end — for every problem: the exact optimum, then per surrogate, training
  * size and seed: sample, fit, assess, optimise on the surrogate, re-evaluate exactly, refine — with
  * the peers when Debian's python3-sklearn and python3-scipy are present; writes each finished
- * problem as it goes (resumable), with `parcelBudget` ranks the demo parcel file (rankDemoParcels), and then
+ * problem as it goes (resumable), with `parcels` ranks the demo parcel file (rankDemoParcels), and then
  * writes report.json, report.md and report.html into `out`.
  * @param options - suite, problem, seeds, quick, output directory.
  * @returns the report and the paths written.
@@ -87,9 +90,9 @@ export async function runSuite(options: RunSuiteOptions): Promise<{ report: Benc
     });
     progress?.stop();
     let full = report;
-    if (options.parcelBudget !== undefined) {
+    if (options.parcels !== undefined) {
       options.progress?.write("parcel ranking: the Quillmere demo parcels, exact and surrogate routes\n");
-      full = { ...report, parcels: await rankDemoParcels(options.parcelBudget) };
+      full = { ...report, parcels: await rankDemoParcels(options.parcels.budget, options.parcels.dir) };
     }
     const paths = await writeBenchReport(full, options.out, claim);
     return { report: full, paths };

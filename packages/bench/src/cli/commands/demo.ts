@@ -22,7 +22,7 @@ export function registerDemoCommand(program: Command, ctx: CommandContext): void
     .action(async (opts: { out: string; peers: boolean; force?: boolean }) => {
       const t0 = performance.now();
       ctx.stderr.write(`floorcast demo: the Quillmere demo suite, quick sizes. ${FLOORCAST_CAUTION}\n`);
-      const { report, paths } = await runSuite({ suite: "demo", quick: true, out: opts.out, force: opts.force === true, peers: opts.peers, parcelBudget: 100, progress: ctx.stderr });
+      const { report, paths } = await runSuite({ suite: "demo", quick: true, out: opts.out, force: opts.force === true, peers: opts.peers, parcels: { budget: 100 }, progress: ctx.stderr });
       const seconds = (performance.now() - t0) / 1000;
       ctx.stdout.write(`\n${formatTextTable(headlineTable(report))}\n\n`);
       ctx.stdout.write(`${FLOORCAST_CAUTION}\n\n`);
