@@ -86,4 +86,18 @@ describe("floorcast rank-parcels", () => {
     expect(r.code).toBe(2);
     expect(r.err).toMatch(/rank-parcels: one\.geojson: parcels must hold at least 2 parcels to rank, got 1/);
   });
+
+  it("a feature that cannot be evaluated is reported in place, the rest ranked: exit 1", async () => {
+    const file = JSON.parse(readFileSync(join(DEMO, "quillmere-parcels.geojson"), "utf8"));
+    file.features.push({ type: "Feature", id: "QM-bad", properties: { zone: "QM-R1" }, geometry: { type: "MultiPolygon", coordinates: [] } });
+    writeFileSync(join(dir, "with-bad.geojson"), JSON.stringify(file));
+    const r = await runCli(["rank-parcels", ...FILES.slice(2), "--input", join(dir, "with-bad.geojson"), "--out", join(dir, "bad-out.geojson"), "--summary", join(dir, "bad"), "--route", "exact", "--budget", "5"]);
+    expect(r.code).toBe(1);
+    expect(r.err).toMatch(/rank-parcels: 1 of 13 features could not be evaluated and are not ranked/);
+    const geo = JSON.parse(readFileSync(join(dir, "bad-out.geojson"), "utf8"));
+    const bad = geo.features.find((f: { id: string }) => f.id === "QM-bad");
+    expect(bad.properties.fc_error).toMatch(/geometry must be a Polygon/);
+    expect(bad.properties.fc_rank).toBeUndefined();
+    expect(geo.features.filter((f: { properties: { fc_rank?: number } }) => f.properties.fc_rank !== undefined)).toHaveLength(12);
+  });
 });

@@ -129,7 +129,7 @@ export function registerRankParcelsCommand(program: Command, ctx: CommandContext
         }
         ctx.stdout.write(`${lines.join("\n")}\n${FLOORCAST_CAUTION}\n`);
         if (ranked.failed > 0) {
-          ctx.stderr.write(`${cmd}: ${ranked.failed} features could not be evaluated and are not ranked (see their fc_error property)\n`);
+          ctx.stderr.write(`${cmd}: ${ranked.failed} of ${n + ranked.failed} features could not be evaluated and are not ranked (see their fc_error property)\n`);
           ctx.setExitCode(EXIT_CODES.someFailed);
         }
       } finally {
