@@ -1,4 +1,5 @@
 import { readFile } from "node:fs/promises";
+import type { Command } from "commander";
 import { basename } from "node:path";
 import { UsageError } from "./usage-error.js";
 import { streetGeometrySchema, zoningTableSchema } from "../parcels/parcel-file-schema.js";
@@ -83,4 +84,19 @@ export async function readParcelInputs(command: string, opts: ParcelInputOptions
     streetDistance: distance,
     coordinates: opts.coordinates,
   };
+}
+
+/**
+ * Adds the options that name a parcel file and how to read it (--input, --zoning, --streets, --street-distance,
+ * --coordinates), the same on every command that reads one.
+ * @param command - the command being declared.
+ * @returns the same command, for chaining.
+ */
+export function withParcelFileOptions(command: Command): Command {
+  return command
+    .requiredOption("--input <parcels.geojson>", "FeatureCollection of Polygon features")
+    .option("--zoning <zones.json>", "zoning table: { \"zones\": { id: controls } } for features with a `zone` property")
+    .option("--streets <streets.geojson>", "street lines (LineString features) to infer lot-line kinds where `lotLines` is absent")
+    .option("--street-distance <metres>", "an edge whose midpoint lies within this distance of a street line faces it", "6")
+    .option("--coordinates <lonlat|metres>", "lonlat (RFC 7946, projected to local metres) or metres (a projected CRS)", "lonlat");
 }

@@ -3,7 +3,7 @@ import type { Command } from "commander";
 import type { CommandContext } from "../command-context.js";
 import { EXIT_CODES } from "../exit-codes.js";
 import { UsageError } from "../usage-error.js";
-import { readParcelInputs } from "../read-parcel-inputs.js";
+import { readParcelInputs, withParcelFileOptions } from "../read-parcel-inputs.js";
 import { evaluateParcelFile } from "../../parcels/evaluate-parcel-file.js";
 import { FLOORCAST_CAUTION } from "../../floorcast-caution.js";
 
@@ -28,18 +28,12 @@ interface ParcelsOptions {
  * @param ctx - the streams and exit status.
  */
 export function registerParcelsCommand(program: Command, ctx: CommandContext): void {
-  program
-    .command("parcels")
+  withParcelFileOptions(program.command("parcels"))
     .description(
       "Evaluate the massing rule on the parcels of a GeoJSON file; write GeoJSON with the results as properties. " +
         "Estimates for early feasibility studies, not a zoning determination.",
     )
-    .requiredOption("--input <parcels.geojson>", "FeatureCollection of Polygon features")
     .requiredOption("--out <result.geojson>", "GeoJSON to write")
-    .option("--zoning <zones.json>", "zoning table: { \"zones\": { id: controls } } for features with a `zone` property")
-    .option("--streets <streets.geojson>", "street lines (LineString features) to infer lot-line kinds where `lotLines` is absent")
-    .option("--street-distance <metres>", "an edge whose midpoint lies within this distance of a street line faces it", "6")
-    .option("--coordinates <lonlat|metres>", "lonlat (RFC 7946, projected to local metres) or metres (a projected CRS)", "lonlat")
     .option("--plates", "add every parcel's floor plates as Polygon features")
     .option("--force", "overwrite --out if it exists")
     .action(async (opts: ParcelsOptions) => {

@@ -6,7 +6,7 @@ import { createProgressBar, MASSING_OUTPUT_COLUMNS } from "@floorcast/sampler";
 import type { CommandContext } from "../command-context.js";
 import { EXIT_CODES } from "../exit-codes.js";
 import { UsageError } from "../usage-error.js";
-import { readParcelInputs, type ParcelInputOptions } from "../read-parcel-inputs.js";
+import { readParcelInputs, withParcelFileOptions, type ParcelInputOptions } from "../read-parcel-inputs.js";
 import { FLOORCAST_CAUTION } from "../../floorcast-caution.js";
 import { MODEL_FAMILIES } from "../../families/model-families.js";
 import { parseWhole } from "../../families/parse-whole.js";
@@ -43,19 +43,13 @@ const NUMERIC_OUTPUTS = MASSING_OUTPUT_COLUMNS.filter((c) => c !== "limitedBy");
  * @param ctx - the streams and exit status.
  */
 export function registerRankParcelsCommand(program: Command, ctx: CommandContext): void {
-  program
-    .command("rank-parcels")
+  withParcelFileOptions(program.command("rank-parcels"))
     .description(
       "Rank the parcels of a GeoJSON file by their best achievable objective, exactly and with a surrogate trained across parcels; " +
         "write GeoJSON with rank and capacity properties and a JSON/Markdown summary. Estimates for early feasibility studies, not a zoning determination.",
     )
-    .requiredOption("--input <parcels.geojson>", "FeatureCollection of Polygon features")
     .requiredOption("--out <ranked.geojson>", "GeoJSON to write: every feature with its massing, rank and capacity properties")
     .requiredOption("--summary <name>", "writes <name>.json and <name>.md")
-    .option("--zoning <zones.json>", "zoning table for features with a `zone` property")
-    .option("--streets <streets.geojson>", "street lines to infer lot-line kinds where `lotLines` is absent")
-    .option("--street-distance <metres>", "an edge whose midpoint lies within this distance of a street line faces it", "6")
-    .option("--coordinates <lonlat|metres>", "lonlat (RFC 7946) or metres (a projected CRS)", "lonlat")
     .option("--route <exact|surrogate|both>", "exact: an optimiser per parcel on the exact rule; surrogate: on a surrogate trained across parcels; both: compared", "both")
     .option("--objective <output>", `massing output to rank by (${NUMERIC_OUTPUTS.join(", ")})`, "gfa")
     .option("--minimise", "rank by the least value instead of the most")
