@@ -233,6 +233,16 @@ describe("rankParcels: the exact route alone", () => {
   });
 });
 
+describe("rankParcels: a minimised objective", () => {
+  const { parcels } = demoParcels();
+  it("ranks the least value first", async () => {
+    const r = await rankParcels(parcels.slice(0, 5), { route: "exact", budget: 10, seed: 1, optimizer: "lhs", objective: { output: "coverage", sense: "min" } });
+    const byRank = [...r.parcels].sort((a, b) => a.exact!.rank - b.exact!.rank).map((p) => p.exact!.value!);
+    for (let i = 1; i < byRank.length; i++) expect(byRank[i]!).toBeGreaterThanOrEqual(byRank[i - 1]!);
+    expect(r.objective).toEqual({ output: "coverage", sense: "min" });
+  });
+});
+
 describe("rankParcels: bad options name the field", () => {
   const { parcels } = demoParcels();
   it.each([
@@ -244,6 +254,9 @@ describe("rankParcels: bad options name the field", () => {
     [parcels, { route: "exact", shortlist: 13 }, RangeError, /rankParcels: shortlist must be an integer in \[1, 12\]/],
     [parcels, { route: "exact", optimizer: "nsga2" }, RangeError, /rankParcels: optimizer must optimise one objective/],
     [parcels, { route: "surrogate" }, TypeError, /rankParcels: surrogate\.dir/],
+    [parcels, { route: "exact", objective: { output: "limitedBy", sense: "max" } }, RangeError, /rankParcels: objective\.output must be one of lotArea/],
+    [parcels, { route: "exact", objective: { output: "gfa", sense: "up" } }, RangeError, /rankParcels: objective\.sense must be max or min/],
+    [parcels, { route: "exact", constraints: [{ output: "storeys", op: "<=", value: 3 }] }, RangeError, /rankParcels: constraints\.0\.output/],
     [parcels, { route: "surrogate", surrogate: { dir: tmpdir(), trainingParcels: 0 } }, RangeError, /surrogate\.trainingParcels/],
   ] as const)("%#", async (ps, options, type, message) => {
     const p = rankParcels(ps as never, options as never);

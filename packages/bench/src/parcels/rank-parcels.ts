@@ -1,4 +1,4 @@
-import type { MassingInput } from "@floorcast/sampler";
+import { MASSING_OUTPUT_COLUMNS, type MassingInput } from "@floorcast/sampler";
 import { FLOORCAST_CAUTION } from "../floorcast-caution.js";
 import type { FitOptions } from "../families/model-family.js";
 import { kendallTau } from "../harness/kendall-tau.js";
@@ -119,6 +119,13 @@ export async function rankParcels(parcels: readonly { readonly id: string; reado
   checkCount("budget", budget, 1, 1e7);
   checkCount("seed", seed, 0, 2 ** 31);
   checkCount("shortlist", shortlist, 1, n);
+  const outputs = MASSING_OUTPUT_COLUMNS.filter((c) => c !== "limitedBy") as readonly string[];
+  if (typeof objective !== "object" || objective === null) throw new TypeError(`${fn}: objective must be an object { output, sense }`);
+  if (!outputs.includes(objective.output)) throw new RangeError(`${fn}: objective.output must be one of ${outputs.join(", ")}, got ${JSON.stringify(objective.output)}`);
+  if (objective.sense !== "max" && objective.sense !== "min") throw new RangeError(`${fn}: objective.sense must be max or min, got ${JSON.stringify(objective.sense)}`);
+  for (const [k, c] of (options.constraints ?? []).entries()) {
+    if (!outputs.includes(c?.output)) throw new RangeError(`${fn}: constraints.${k}.output must be one of ${outputs.join(", ")}, got ${JSON.stringify(c?.output)}`);
+  }
   const entry = optimizerNamed(options.optimizer ?? "pso");
   if (entry.objectives !== "single") throw new RangeError(`${fn}: optimizer must optimise one objective; ${entry.name} gives a front`);
   const problem: OptimisationProblem = { variables: PARCEL_DESIGN_VARIABLES, objectives: [objective], constraints: options.constraints ?? [] };
