@@ -53,7 +53,9 @@ describe("floorcast rank-parcels", () => {
       expect(f.properties.fc_capacitySurrogate).toBe(p.surrogate.value);
       expect(md).toMatch(new RegExp(`\\| ${p.exact.rank} \\| ${p.id} \\|`));
     }
-    expect(md).toMatch(new RegExp(`\\| surrogate, re-evaluated choice \\| ${summary.agreement.reevaluated.spearman.toFixed(3)} \\|`));
+    expect(md).toMatch(new RegExp(`\\| surrogate: its choices re-evaluated exactly \\| ${summary.agreement.reevaluated.spearman.toFixed(3)} \\|`));
+    expect(md).toMatch(new RegExp(`\\| the zone's own controls, no search \\| ${summary.agreement.zone.spearman.toFixed(3)} \\|`));
+    expect(run.out).toMatch(/zone's own controls \(12 evaluations, no search\) against the exact ranking: Spearman rho/);
     // --work keeps the training CSV, its manifest and the model file
     expect(existsSync(join(dir, "work", "parcels-train-2.csv"))).toBe(true);
     expect(existsSync(join(dir, "work", "parcels-model-2.json"))).toBe(true);

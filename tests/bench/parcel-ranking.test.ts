@@ -164,11 +164,14 @@ describe("rankParcels on the Quillmere demo parcels (small budgets)", () => {
     const ranks = ranking.parcels.map((p) => p.exact!.rank);
     expect([...ranks].sort((a, b) => a - b)).toEqual(parcels.map((_, i) => i + 1));
     for (const p of ranking.parcels) for (const q of ranking.parcels) if (p.exact!.value! > q.exact!.value!) expect(p.exact!.rank).toBeLessThan(q.exact!.rank);
+    const zone = ranking.parcels.map((p) => p.zoneValue!);
     const a = ranking.agreement!;
-    expect(a.reevaluated.spearman).toBe(spearmanRho(exact, surr));
-    expect(a.reevaluated.kendall).toBe(kendallTau(exact, surr));
-    expect(a.reevaluated.topOverlap).toBe(topKOverlap(exact, surr, 3));
-    expect(a.predicted.spearman).toBe(spearmanRho(exact, pred));
+    expect(a.reevaluated!.spearman).toBe(spearmanRho(exact, surr));
+    expect(a.reevaluated!.kendall).toBe(kendallTau(exact, surr));
+    expect(a.reevaluated!.topOverlap).toBe(topKOverlap(exact, surr, 3));
+    expect(a.predicted!.spearman).toBe(spearmanRho(exact, pred));
+    expect(a.zone.spearman).toBe(spearmanRho(exact, zone));
+    expect(a.zone.kendall).toBe(kendallTau(exact, zone));
   });
 
   it.skipIf(!hasScipy)("the reported rho and tau-b match scipy.stats on the reported values", () => {
@@ -176,14 +179,26 @@ describe("rankParcels on the Quillmere demo parcels (small budgets)", () => {
     const surr = ranking.parcels.map((p) => p.surrogate!.value!);
     const ref = runReference<{ results: { spearman: number; kendall: number }[] }>("rank_correlation.py", { cases: [{ x: exact, y: surr }] });
     // scipy 1.10 (Debian python3-scipy); both compute in double precision from the same ranks: 1e-12
-    expect(Math.abs(ranking.agreement!.reevaluated.spearman - ref.results[0]!.spearman)).toBeLessThan(1e-12);
-    expect(Math.abs(ranking.agreement!.reevaluated.kendall - ref.results[0]!.kendall)).toBeLessThan(1e-12);
+    expect(Math.abs(ranking.agreement!.reevaluated!.spearman - ref.results[0]!.spearman)).toBeLessThan(1e-12);
+    expect(Math.abs(ranking.agreement!.reevaluated!.kendall - ref.results[0]!.kendall)).toBeLessThan(1e-12);
   });
 
-  it("the surrogate ranking agrees with the exact one on the demo file (rho ≥ 0.8, the top parcel shared)", () => {
-    // Measured 0.99 with budget 150 (README); the bar is set well below so that seeds and small budgets pass
-    // while a surrogate that learned nothing across parcels (rho near 0) fails.
-    expect(ranking.agreement!.reevaluated.spearman).toBeGreaterThanOrEqual(0.8);
+  it("the baseline is the exact rule at the zone's own controls, and no search finds less", () => {
+    for (const [i, p] of ranking.parcels.entries()) {
+      const z = parcels[i]!.input;
+      expect(p.zoneValue).toBe(evaluateMassing(z).gfa);
+      // the zone's own controls are one design of the box (no extra yards, full shares, the zone's floor height)
+      // the optimiser may miss it, so only the optimum over the box is bounded: within 1% of it or above (measured 0.2%)
+      expect(p.exact!.value!).toBeGreaterThanOrEqual(0.99 * p.zoneValue!);
+    }
+  });
+
+  it("the surrogate's own predictions rank the parcels (rho ≥ 0.8) and the re-evaluated top parcel is the exact one", () => {
+    // The predictions alone are the test of what the surrogate learned across parcels: measured 0.97 with budget 150
+    // (README) and 0.39 below zero when trained on one parcel only; the bar sits between. The re-evaluated ranking is
+    // not such a test: the exact value of any reasonable design already ranks these parcels (the zone baseline).
+    console.log(`rank agreement (budget ${budget}): ${JSON.stringify(ranking.agreement)}`);
+    expect(ranking.agreement!.predicted!.spearman).toBeGreaterThanOrEqual(0.8);
     const top = (key: "exact" | "surrogate") => ranking.parcels.find((p) => p[key]!.rank === 1)!.id;
     expect(top("surrogate")).toBe(top("exact"));
   });
@@ -192,6 +207,7 @@ describe("rankParcels on the Quillmere demo parcels (small budgets)", () => {
     const e = ranking.evaluations;
     // particle swarm spends exactly its budget on each parcel
     expect(e.exact).toBe(budget * parcels.length);
+    expect(e.zone).toBe(parcels.length);
     expect(e.surrogate!.training).toBe(48);
     // at least the chosen design per parcel, at most the 3 candidates
     expect(e.surrogate!.reevaluation).toBeGreaterThanOrEqual(parcels.length);
@@ -224,7 +240,9 @@ describe("rankParcels: the exact route alone", () => {
     const a = await rankParcels(some, { route: "exact", budget: 15, seed: 7, optimizer: "random" });
     const b = await rankParcels([...some].reverse(), { route: "exact", budget: 15, seed: 7, optimizer: "random" });
     expect(a.surrogate).toBeNull();
-    expect(a.agreement).toBeNull();
+    expect(a.agreement!.reevaluated).toBeNull();
+    expect(a.agreement!.predicted).toBeNull();
+    expect(a.evaluations.zone).toBe(4);
     for (const p of a.parcels) {
       const q = b.parcels.find((x) => x.id === p.id)!;
       expect(q.exact!.value).toBe(p.exact!.value);

@@ -133,6 +133,7 @@ function parcelReport(): ParcelRankingReport {
   const parcel = (id: string, value: number | null, rank: number) => ({
     index: rank - 1,
     id,
+    zoneValue: value === null ? null : value * 0.8,
     exact: { value, design: null, outputs: null, evaluations: 10, rank },
     surrogate: null,
   });
@@ -153,7 +154,7 @@ function parcelReport(): ParcelRankingReport {
       budget: 10,
       shortlist: 1,
       parcels: [parcel("low", 1000, 2), parcel("high", 3000, 1), parcel("none", null, 3)],
-      evaluations: { exact: 30, surrogate: null },
+      evaluations: { zone: 3, exact: 30, surrogate: null },
       surrogate: null,
       agreement: null,
     },

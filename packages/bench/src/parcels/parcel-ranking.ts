@@ -28,6 +28,8 @@ export interface RankedParcel {
   /** Position in the parcel list (file order among evaluated parcels). */
   readonly index: number;
   readonly id: string;
+  /** Exact objective at the zone's own controls (no deeper yards, full caps, the zone's floor height); null when infeasible. */
+  readonly zoneValue: number | null;
   readonly exact: ParcelOptimum | null;
   readonly surrogate: SurrogateParcelOptimum | null;
 }
@@ -55,13 +57,18 @@ export interface ParcelRanking {
   readonly shortlist: number;
   readonly parcels: readonly RankedParcel[];
   readonly evaluations: {
+    /** One exact evaluation per parcel at the zone's own controls (the no-search baseline). */
+    readonly zone: number;
     readonly exact: number | null;
     readonly surrogate: { readonly training: number; readonly reevaluation: number; readonly total: number } | null;
   };
   /** The surrogate route: training parcels, rows and family. */
   readonly surrogate: { readonly model: string; readonly trainingParcels: readonly string[]; readonly rows: number } | null;
-  /** Against the exact ranking (both routes run): by re-evaluated values and by the surrogate's predictions. */
-  readonly agreement: { readonly reevaluated: RankAgreement; readonly predicted: RankAgreement } | null;
+  /**
+   * Against the exact ranking: the surrogate route by re-evaluated values and by its predictions alone (both routes
+   * run), and the no-search baseline, the values at the zone's own controls (exact route run).
+   */
+  readonly agreement: { readonly zone: RankAgreement; readonly reevaluated: RankAgreement | null; readonly predicted: RankAgreement | null } | null;
 }
 
 /** A parcel ranking as a report carries it: the parcel file's name, the ranking and each parcel's outline (local metres). */

@@ -8,6 +8,7 @@ import { surrogateEvaluator } from "../harness/surrogate-evaluator.js";
 import { topKOverlap } from "../harness/top-k-overlap.js";
 import type { Objective, OptimisationProblem, OutputConstraint } from "../optimise/optimisation-problem.js";
 import { optimizerNamed } from "../optimise/optimizers.js";
+import { scoreOutputs } from "../optimise/evaluation-session.js";
 import { parcelDescriptors } from "./parcel-descriptors.js";
 import { PARCEL_DESIGN_VARIABLES } from "./parcel-design-variables.js";
 import { parcelEvaluator } from "./parcel-evaluator.js";
@@ -99,8 +100,9 @@ function spreadParcels(zones: readonly MassingInput[], m: number): number[] {
  * model file → loadSurrogate), runs the optimiser per parcel on it, and re-evaluates its choice exactly
  * (reevaluateSurrogateOptimum: the next candidates when exactly infeasible). With both, the surrogate route's
  * rankings (by re-evaluated and by predicted values) are compared with the exact one: Spearman's rho, Kendall's
- * tau-b and the top-k overlap, as the site-selection benchmark reports them. Estimates for early feasibility
- * studies, not a zoning determination.
+ * tau-b and the top-k overlap, as the site-selection benchmark reports them; so is the no-search baseline (one exact
+ * evaluation per parcel at the zone's own controls), which says how much of the ranking the parcels' sizes and zones
+ * already decide. Estimates for early feasibility studies, not a zoning determination.
  * @param parcels - id and massing input (metres, zone's controls) of each parcel, ≥ 2.
  * @param options - route, objective, optimiser, budget, seed, shortlist, surrogate settings, progress.
  * @returns the ranking, the evaluations each route spent and the agreement.
@@ -187,23 +189,32 @@ export async function rankParcels(parcels: readonly { readonly id: string; reado
     }
   }
 
+  // the no-search baseline: one exact evaluation per parcel at the zone's own controls
+  const zoneDesign = (z: MassingInput) => ({ frontYardExtra: 0, sideYardExtra: 0, rearYardExtra: 0, heightShare: 1, coverageShare: 1, floorHeight: z.floorHeight });
+  const zoneValues: (number | null)[] = [];
+  for (const z of zones) {
+    const e = scoreOutputs(problem, zoneDesign(z), (await parcelEvaluator(z).evaluate([zoneDesign(z)]))[0]!);
+    zoneValues.push(e.feasible ? e.objectives[0]! : null);
+  }
   const exactRanks = exact ? ranksOf(exact.map((e) => (e.value === null ? null : sign * e.value))) : null;
   const surrRanks = surrogate ? ranksOf(surrogate.map((e) => (e.value === null ? null : sign * e.value))) : null;
   const predRanks = surrogate ? ranksOf(surrogate.map((e) => (e.predicted === null || !Number.isFinite(e.predicted) ? null : sign * e.predicted))) : null;
   const ranked: RankedParcel[] = parcels.map((p, i) => ({
     index: i,
     id: p.id,
+    zoneValue: zoneValues[i]!,
     exact: exact ? { ...exact[i]!, rank: exactRanks![i]! } : null,
     surrogate: surrogate ? { ...surrogate[i]!, rank: surrRanks![i]!, predictedRank: predRanks![i]! } : null,
   }));
   const sum = (v: readonly { evaluations: number }[]): number => v.reduce((t, e) => t + e.evaluations, 0);
   const reevaluation = surrogate ? sum(surrogate) : 0;
   let agree: ParcelRanking["agreement"] = null;
-  if (exact && surrogate) {
+  if (exact) {
     const e = scoresOf(exact.map((x) => x.value), sign);
     agree = {
-      reevaluated: agreement(e, scoresOf(surrogate.map((x) => x.value), sign), shortlist),
-      predicted: agreement(e, scoresOf(surrogate.map((x) => (x.predicted !== null && Number.isFinite(x.predicted) ? x.predicted : null)), sign), shortlist),
+      zone: agreement(e, scoresOf(zoneValues, sign), shortlist),
+      reevaluated: surrogate ? agreement(e, scoresOf(surrogate.map((x) => x.value), sign), shortlist) : null,
+      predicted: surrogate ? agreement(e, scoresOf(surrogate.map((x) => (x.predicted !== null && Number.isFinite(x.predicted) ? x.predicted : null)), sign), shortlist) : null,
     };
   }
   return {
@@ -217,6 +228,7 @@ export async function rankParcels(parcels: readonly { readonly id: string; reado
     shortlist,
     parcels: ranked,
     evaluations: {
+      zone: n,
       exact: exact ? sum(exact) : null,
       surrogate: trained ? { training: trained.rows, reevaluation, total: trained.rows + reevaluation } : null,
     },

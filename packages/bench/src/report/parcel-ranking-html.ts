@@ -2,11 +2,10 @@ import type { ParcelRankingReport } from "../parcels/parcel-ranking.js";
 import { escapeHtml } from "./escape-html.js";
 import { formatNumber } from "./format-number.js";
 import { htmlTable } from "./html-table.js";
+import { parcelAgreementHeader, parcelAgreementRows } from "./parcel-agreement-rows.js";
 import { parcelCapacityPlan } from "./parcel-capacity-plan.js";
 import type { PageSection } from "./render-page.js";
 
-const rho = (v: number): string => (Number.isFinite(v) ? v.toFixed(3) : "—");
-const share = (v: number): string => `${Math.round(v * 100)}%`;
 
 /**
  * The HTML section of a parcel ranking: what was ranked, the plan of the parcels coloured by their capacity
@@ -30,16 +29,11 @@ export function parcelRankingSection(report: ParcelRankingReport): PageSection {
     ),
   ];
   const e = r.evaluations;
-  const rows: (string | number)[][] = [];
-  if (e.exact !== null) rows.push(["exact", "1.000", "1.000", "100%", e.exact]);
   if (e.surrogate !== null && r.surrogate) {
-    const a = r.agreement;
-    rows.push(["surrogate, re-evaluated choice", a ? rho(a.reevaluated.spearman) : "—", a ? rho(a.reevaluated.kendall) : "—", a ? share(a.reevaluated.topOverlap) : "—", `${e.surrogate.total} (${e.surrogate.training} training + ${e.surrogate.reevaluation} re-evaluation)`]);
-    rows.push(["surrogate, predicted value", a ? rho(a.predicted.spearman) : "—", a ? rho(a.predicted.kendall) : "—", a ? share(a.predicted.topOverlap) : "—", "the same"]);
     parts.push(`<p>Surrogate: ${escapeHtml(r.surrogate.model)} trained across parcels on parcel descriptors and the design variables, from ${r.surrogate.rows} exact evaluations on ${r.surrogate.trainingParcels.length} parcels (${escapeHtml(r.surrogate.trainingParcels.join(", "))}).</p>`);
   }
-  parts.push(htmlTable(["route", "Spearman rho", "Kendall tau-b", `top-${r.shortlist} overlap`, "exact evaluations"], rows));
-  const header = ["rank", "parcel", ...(e.exact !== null ? [`exact best ${o.output}`] : []), ...(e.surrogate !== null ? ["surrogate rank", `surrogate choice, exact ${o.output}`, `predicted ${o.output}`] : [])];
+  parts.push(htmlTable(parcelAgreementHeader(r), parcelAgreementRows(r)));
+  const header = ["rank", "parcel", `${o.output} at the zone's controls`, ...(e.exact !== null ? [`exact best ${o.output}`] : []), ...(e.surrogate !== null ? ["surrogate rank", `surrogate choice, exact ${o.output}`, `predicted ${o.output}`] : [])];
   const order = [...r.parcels].sort((a, b) => main(a).rank - main(b).rank);
   parts.push(
     htmlTable(
@@ -47,6 +41,7 @@ export function parcelRankingSection(report: ParcelRankingReport): PageSection {
       order.map((p) => [
         main(p).rank,
         p.id,
+        formatNumber(p.zoneValue, 5),
         ...(p.exact ? [formatNumber(p.exact.value, 5)] : []),
         ...(p.surrogate ? [p.surrogate.rank, formatNumber(p.surrogate.value, 5), formatNumber(p.surrogate.predicted, 5)] : []),
       ]),

@@ -1,9 +1,8 @@
 import type { ParcelRanking } from "../parcels/parcel-ranking.js";
 import { formatNumber } from "./format-number.js";
 import { markdownTable } from "./markdown-table.js";
+import { parcelAgreementHeader, parcelAgreementRows } from "./parcel-agreement-rows.js";
 
-const rho = (v: number): string => (Number.isFinite(v) ? v.toFixed(3) : "—");
-const share = (v: number): string => `${Math.round(v * 100)}%`;
 
 /**
  * A parcel ranking as Markdown: what was ranked and how (objective, optimiser, budget, seed, the surrogate's
@@ -24,25 +23,20 @@ export function parcelRankingMarkdown(ranking: ParcelRanking, title: string, lev
     "",
   );
   const e = ranking.evaluations;
-  const rows: string[][] = [];
-  if (e.exact !== null) rows.push(["exact (optimiser on the exact rule)", "1.000", "1.000", "100%", String(e.exact)]);
   if (e.surrogate !== null) {
-    const a = ranking.agreement;
     const s = ranking.surrogate!;
     out.push(`Surrogate: ${s.model}, trained on ${s.rows} exact evaluations of ${s.trainingParcels.length} parcels (${s.trainingParcels.join(", ")}), then re-evaluated exactly at its choice on every parcel.`, "");
-    rows.push(["surrogate, re-evaluated choice", a ? rho(a.reevaluated.spearman) : "—", a ? rho(a.reevaluated.kendall) : "—", a ? share(a.reevaluated.topOverlap) : "—", `${e.surrogate.total} (${e.surrogate.training} training + ${e.surrogate.reevaluation} re-evaluation)`]);
-    rows.push(["surrogate, predicted value", a ? rho(a.predicted.spearman) : "—", a ? rho(a.predicted.kendall) : "—", a ? share(a.predicted.topOverlap) : "—", `${e.surrogate.total} (the same run)`]);
   }
-  out.push(markdownTable(["route", "Spearman rho", "Kendall tau-b", `top-${ranking.shortlist} overlap`, "exact evaluations"], rows), "");
+  out.push(markdownTable(parcelAgreementHeader(ranking), parcelAgreementRows(ranking)), "");
   const order = [...ranking.parcels].sort((a, b) => (a.exact ?? a.surrogate)!.rank - (b.exact ?? b.surrogate)!.rank);
-  const header = ["rank", "parcel"];
+  const header = ["rank", "parcel", `${o.output} at the zone's controls`];
   if (e.exact !== null) header.push(`exact best ${o.output}`);
   if (e.surrogate !== null) header.push("surrogate rank", `surrogate choice, exact ${o.output}`, `predicted ${o.output}`, "training parcel");
   out.push(
     markdownTable(
       header,
       order.map((p) => {
-        const r = [String((p.exact ?? p.surrogate)!.rank), p.id];
+        const r = [String((p.exact ?? p.surrogate)!.rank), p.id, formatNumber(p.zoneValue, 5)];
         if (p.exact) r.push(formatNumber(p.exact.value, 5));
         if (p.surrogate) r.push(String(p.surrogate.rank), formatNumber(p.surrogate.value, 5), formatNumber(p.surrogate.predicted, 5), p.surrogate.trained ? "yes" : "no");
         return r;

@@ -13,6 +13,7 @@ import { parseWhole } from "../../families/parse-whole.js";
 import { OPTIMIZERS } from "../../optimise/optimizers.js";
 import { rankParcelCollection } from "../../parcels/rank-parcel-collection.js";
 import { parcelRankingMarkdown } from "../../report/parcel-ranking-markdown.js";
+import type { RankAgreement } from "../../parcels/parcel-ranking.js";
 
 interface RankParcelsCommandOptions extends ParcelInputOptions {
   out: string;
@@ -117,10 +118,12 @@ export function registerRankParcelsCommand(program: Command, ctx: CommandContext
         const lines = [`${cmd}: ${n} parcels of ${basename(opts.input)} ranked by ${r.objective.sense === "max" ? "most" : "least"} ${r.objective.output} → ${opts.out}, ${summary.json}, ${summary.md}`];
         if (r.evaluations.exact !== null) lines.push(`  exact route: ${r.evaluations.exact} exact evaluations`);
         if (r.evaluations.surrogate !== null) lines.push(`  surrogate route: ${r.evaluations.surrogate.total} exact evaluations (${r.evaluations.surrogate.training} training + ${r.evaluations.surrogate.reevaluation} re-evaluation)`);
-        if (r.agreement) {
-          const a = r.agreement.reevaluated;
-          lines.push(`  against the exact ranking: Spearman rho ${a.spearman.toFixed(3)}, Kendall tau-b ${a.kendall.toFixed(3)}, top-${r.shortlist} overlap ${Math.round(a.topOverlap * 100)}%`);
-        }
+        const say = (what: string, a: RankAgreement | null | undefined): void => {
+          if (a) lines.push(`  ${what} against the exact ranking: Spearman rho ${a.spearman.toFixed(3)}, Kendall tau-b ${a.kendall.toFixed(3)}, top-${r.shortlist} overlap ${Math.round(a.topOverlap * 100)}%`);
+        };
+        say("surrogate (choices re-evaluated)", r.agreement?.reevaluated);
+        say("surrogate (predictions alone)", r.agreement?.predicted);
+        say(`zone's own controls (${r.evaluations.zone} evaluations, no search)`, r.agreement?.zone);
         ctx.stdout.write(`${lines.join("\n")}\n${FLOORCAST_CAUTION}\n`);
         if (ranked.failed > 0) {
           ctx.stderr.write(`${cmd}: ${ranked.failed} of ${n + ranked.failed} features could not be evaluated and are not ranked (see their fc_error property)\n`);
