@@ -52,3 +52,4 @@ export { rankedParcelCollection } from "../parcels/ranked-parcel-collection.js";
 export { rankParcelCollection } from "../parcels/rank-parcel-collection.js";
 export type { RankedParcelFile } from "../parcels/rank-parcel-collection.js";
 export { rankDemoParcels, DEFAULT_PARCELS_DIR } from "../parcels/rank-demo-parcels.js";
+export type { DemoParcelRankingOptions } from "../parcels/rank-demo-parcels.js";

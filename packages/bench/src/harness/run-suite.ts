@@ -92,7 +92,7 @@ export async function runSuite(options: RunSuiteOptions): Promise<{ report: Benc
     let full = report;
     if (options.parcels !== undefined) {
       options.progress?.write("parcel ranking: the Quillmere demo parcels, exact and surrogate routes\n");
-      full = { ...report, parcels: await rankDemoParcels(options.parcels.budget, options.parcels.dir) };
+      full = { ...report, parcels: await rankDemoParcels({ budget: options.parcels.budget, ...(options.parcels.dir === undefined ? {} : { dir: options.parcels.dir }) }) };
     }
     const paths = await writeBenchReport(full, options.out, claim);
     return { report: full, paths };
