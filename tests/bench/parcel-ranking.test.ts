@@ -228,6 +228,7 @@ describe("rankParcels on the Quillmere demo parcels (small budgets)", () => {
       expect(f.properties.fc_rank).toBe(p.exact!.rank);
       expect(f.properties.fc_capacity).toBe(p.exact!.value);
       expect(f.properties.fc_rankSurrogate).toBe(p.surrogate!.rank);
+      expect(f.properties.fc_rankPredicted).toBe(p.surrogate!.predictedRank);
       expect(f.properties.fc_gfa).toBeDefined(); // the massing results stay
     }
   });

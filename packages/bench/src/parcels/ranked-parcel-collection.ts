@@ -6,7 +6,8 @@ import type { ParcelRanking } from "./parcel-ranking.js";
  * The evaluated parcel collection (evaluateParcelFile's output, input coordinates) with each ranked parcel's
  * ranking as properties: `fc_rank` and `fc_capacity` (the exact route's rank and best objective value, or the
  * surrogate route's when only it ran), `fc_bestDesign` (the design reaching it), `fc_rankSurrogate`,
- * `fc_capacitySurrogate` (the surrogate's choice re-evaluated exactly), `fc_capacityPredicted` and
+ * `fc_capacitySurrogate` (the surrogate's choice re-evaluated exactly), `fc_capacityPredicted`, `fc_rankPredicted` (rank by
+ * the surrogate's predictions alone) and
  * `fc_trainingParcel` (surrogate route), and `fc_rankObjective` (the objective ranked). Features that were
  * not evaluated keep their `fc_error`; plate features are left as they are. The collection carries
  * FLOORCAST_CAUTION in `fc_caution`.
@@ -40,6 +41,7 @@ export function rankedParcelCollection(
       extra.fc_rankSurrogate = p.surrogate.rank;
       extra.fc_capacitySurrogate = p.surrogate.value;
       extra.fc_capacityPredicted = p.surrogate.predicted;
+      extra.fc_rankPredicted = p.surrogate.predictedRank;
       extra.fc_trainingParcel = p.surrogate.trained;
     }
     return { ...feature, properties: { ...props, ...extra } };
