@@ -1,6 +1,10 @@
 import type { ParcelRanking, RankAgreement } from "../parcels/parcel-ranking.js";
 
-/** The header of {@link parcelAgreementRows}' table. */
+/**
+ * The header of {@link parcelAgreementRows}' table.
+ * @param ranking - rankParcels' result (for its shortlist length).
+ * @returns the column titles.
+ */
 export function parcelAgreementHeader(ranking: ParcelRanking): string[] {
   return ["ranking", "Spearman rho", "Kendall tau-b", `top-${ranking.shortlist} overlap`, "exact evaluations"];
 }
