@@ -15,6 +15,7 @@ import {
   PARCEL_DESIGN_VARIABLES,
   parcelDescriptors,
   parcelDesignInput,
+  parcelEvaluator,
   rankParcels,
   rankedParcelCollection,
   spearmanRho,
@@ -121,6 +122,18 @@ describe("parcelDesignInput", () => {
     // no coverage cap: the share of 1
     expect(parcelDesignInput(L_LOT, { frontYardExtra: 0, sideYardExtra: 0, rearYardExtra: 0, heightShare: 1, coverageShare: 0.8, floorHeight: 3 }).maxCoverage).toBe(0.8);
   });
+  it("parcelEvaluator: the exact rule's numeric outputs; a design the rule refuses gives no outputs (infeasible), never a throw", async () => {
+    const ev = parcelEvaluator(L_LOT);
+    const good = { frontYardExtra: 0, sideYardExtra: 0, rearYardExtra: 0, heightShare: 1, coverageShare: 1, floorHeight: 3 };
+    const [out, refused] = await ev.evaluate([good, { ...good, heightShare: 0 }]);
+    // derived (README's worked check): B = 173 m² at these yards; 12 m ÷ 3 m = 4 storeys of 173 m² with no caps
+    expect(out!.buildableArea).toBeCloseTo(173, 9);
+    expect(out!.gfa).toBeCloseTo(4 * 173, 9);
+    expect(out!.limitedBy).toBeUndefined();
+    expect(refused).toEqual({});
+    expect(ev.count).toBe(2);
+  });
+
   it("names a missing or non-finite design value", () => {
     expect(() => parcelDesignInput(L_LOT, { frontYardExtra: Number.NaN })).toThrow(/parcelDesignInput: design\.frontYardExtra must be a finite number/);
     expect(() => parcelDesignInput(L_LOT, { frontYardExtra: 0, sideYardExtra: 0, rearYardExtra: 0, heightShare: 1, coverageShare: 1 })).toThrow(/design\.floorHeight/);
