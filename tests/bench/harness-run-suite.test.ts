@@ -42,7 +42,9 @@ describe("runSuite: report.json structure, resume", () => {
   const problemsDir = tinySuite();
   const out = mkdtempSync(join(tmpdir(), "fc-bench-"));
   it("writes report.json as the README's report.json section describes, with Markdown and HTML beside it", async () => {
-    const { report, paths } = await runSuite({ suite: "tiny", quick: true, out, peers: false, problemsDir, overrides });
+    // parcels: the demo's parcel ranking (the Quillmere parcel file, both routes) at a tiny budget
+    const parcels = { budget: 10, dir: fileURLToPath(new URL("../../datasets/parcels/", import.meta.url)) };
+    const { report, paths } = await runSuite({ suite: "tiny", quick: true, out, peers: false, problemsDir, overrides, parcels });
     const json = JSON.parse(readFileSync(paths.json, "utf8"));
     expect(json.kind).toBe("floorcast.bench-report");
     expect(json.problems.map((p: { name: string }) => p.name)).toEqual(["larkspur-fit-gfa", "standard-forrester"]);
@@ -74,6 +76,11 @@ describe("runSuite: report.json structure, resume", () => {
     }
     expect(html).toMatch(/Plan and section of the optimal massing/);
     expect((html.match(/<svg/g) ?? []).length).toBeGreaterThanOrEqual(4);
+    expect(json.parcels.file).toBe("quillmere-parcels.geojson");
+    expect(json.parcels.ranking.parcels).toHaveLength(12);
+    expect(json.parcels.outlines).toHaveLength(12);
+    expect(json.parcels.ranking.evaluations.exact).toBe(12 * 10);
+    for (const text of [md, html]) expect(text).toMatch(/Parcels ranked by capacity: quillmere-parcels\.geojson/);
     expect(html).not.toMatch(/<script/);
   });
   it.skipIf(!hasChromium)("the HTML page opens in headless Chromium (Debian chromium) with no errors, every figure drawn, nothing fetched", async () => {
@@ -82,8 +89,10 @@ describe("runSuite: report.json structure, resume", () => {
       expect(errors).toEqual([]);
       expect(requests).toEqual([]);
       const figures = await page.locator("figure > svg").count();
-      // per problem: gap vs size and evaluations to target; the massing problem adds two plan-and-section drawings
-      expect(figures).toBe(2 + 2 + 2);
+      // per problem: gap vs size and evaluations to target; the massing problem adds two plan-and-section drawings;
+      // the parcel ranking adds its plan, one polygon per parcel
+      expect(figures).toBe(2 + 2 + 2 + 1);
+      expect(await page.locator("svg.parcel-capacity-plan polygon").count()).toBe(12);
       expect(await page.locator("figure > figcaption").count()).toBe(figures);
       expect(await page.locator(".caution").innerText()).toMatch(/not a zoning determination.*licensed professionals decide/s);
     });

@@ -52,6 +52,8 @@ describe("the packed packages, installed into a fresh project", () => {
     const shipped = (folder: string) => bench.filter((f) => f.startsWith(`dist/demo/${folder}/`)).map((f) => f.slice(`dist/demo/${folder}/`.length)).sort();
     expect(shipped("problems")).toEqual(readdirSync(join(root, "datasets/problems")).sort());
     expect(shipped("scenarios")).toEqual(readdirSync(join(root, "datasets/scenarios")).sort());
+    // the demo's parcel file, its zoning table and streets (the generator script stays in the repository)
+    expect(shipped("parcels")).toEqual(readdirSync(join(root, "datasets/parcels")).filter((f) => !f.endsWith(".mjs")).sort());
     const surrogate = JSON.parse(readFileSync(join(app, "node_modules/@floorcast/surrogate/package.json"), "utf8"));
     expect(surrogate.dependencies["@tensorflow/tfjs"]).toBeUndefined();
     expect(surrogate.peerDependenciesMeta["@tensorflow/tfjs"]).toEqual({ optional: true });
@@ -78,6 +80,11 @@ describe("the packed packages, installed into a fresh project", () => {
       .sort();
     expect(report.problems.map((p) => p.name).sort()).toEqual(demoProblems);
     for (const p of report.problems) expect(p.notes.join(" ")).toMatch(/turned off \(--no-peers\)/);
+    // the shipped parcel file is ranked and drawn as a plan coloured by capacity
+    const parcels = (JSON.parse(readFileSync(join(work, "demo/report.json"), "utf8")) as { parcels: { file: string; ranking: { parcels: unknown[] } } }).parcels;
+    expect(parcels.file).toBe("quillmere-parcels.geojson");
+    expect(parcels.ranking.parcels).toHaveLength(12);
+    expect(readFileSync(join(work, "demo/report.html"), "utf8")).toMatch(/class="parcel-capacity-plan"/);
   }, 900_000);
 
   it("the README's library quick start runs against the installed packages", () => {

@@ -14,6 +14,7 @@ afterAll(() => rmSync(dir, { recursive: true, force: true }));
 const root = fileURLToPath(new URL("../../", import.meta.url));
 const scenario = join(root, "datasets/scenarios/larkspur-terraces.json");
 const branin = join(root, "datasets/problems/standard-branin.json");
+const parcelFiles = ["--input", join(root, "datasets/parcels/quillmere-parcels.geojson"), "--zoning", join(root, "datasets/parcels/quillmere-zoning.json"), "--streets", join(root, "datasets/parcels/quillmere-streets.geojson")];
 let fileNo = 0;
 const file = (text: string, ext = "csv") => {
   const p = join(dir, `f${fileNo++}.${ext}`);
@@ -52,10 +53,13 @@ const numericOptions: [string, (v: string) => string[]][] = [
   ["assess --seed", (v) => ["assess", "--model", model, "--data", goodCsv, "--target", "y", "--seed", v, "--out", outPath("d")]],
   ["optimize --budget", (v) => ["optimize", "--problem", branin, "--exact", "--optimizer", "random", "--budget", v, "--out", outPath("d")]],
   ["optimize --seed", (v) => ["optimize", "--problem", branin, "--exact", "--optimizer", "random", "--budget", "5", "--seed", v, "--out", outPath("d")]],
+  ["rank-parcels --budget", (v) => ["rank-parcels", ...parcelFiles, "--budget", v, "--out", outPath("geojson"), "--summary", outPath("s")]],
+  ["rank-parcels --training-rows", (v) => ["rank-parcels", ...parcelFiles, "--training-rows", v, "--out", outPath("geojson"), "--summary", outPath("s")]],
   ["bench --seeds", (v) => ["bench", "--suite", "standard", "--problem", "standard-forrester", "--quick", "--no-peers", "--seeds", v, "--out", outPath("d")]],
 ];
 // Real-valued options: NaN, ±Infinity and values outside their range.
 const realOptions: [string, (v: string) => string[], string[]][] = [
+  ["rank-parcels --street-distance", (v) => ["rank-parcels", ...parcelFiles, "--street-distance", v, "--route", "exact", "--out", outPath("geojson"), "--summary", outPath("s")], ["-1", "1e309"]],
   ["fit --noise", (v) => ["fit", "--data", goodCsv, "--inputs", "a,b", "--target", "y", "--restarts", "1", "--noise", v, "--out", outPath("json")], ["-1", "1e309", "-1e-9"]],
   ["fit --learning-rate", (v) => ["fit", "--data", goodCsv, "--inputs", "a,b", "--target", "y", "--model", "nn", "--epochs", "2", "--learning-rate", v, "--out", outPath("json")], ["0", "-1", "1e309"]],
   ["fit --conformal", (v) => ["fit", "--data", goodCsv, "--inputs", "a,b", "--target", "y", "--restarts", "1", "--conformal", v, "--out", outPath("json")], ["0", "1", "1.5", "-0.1", "1e309"]],
@@ -70,12 +74,12 @@ describe("every floorcast command under hostile input (in-process)", () => {
   it("the commands tested here are the commands `floorcast --help` lists", async () => {
     const r = await run(["--help"]);
     expect(r.code).toBe(0);
-    const listed = [...r.out.matchAll(/^ {2}([a-z]+) /gm)].map((m) => m[1]).filter((c) => c !== "help").sort();
-    expect(listed).toEqual(["assess", "bench", "demo", "design", "fit", "massing", "merge", "optimize", "parcels", "predict", "sample"]);
+    const listed = [...r.out.matchAll(/^ {2}([a-z-]+) /gm)].map((m) => m[1]).filter((c) => c !== "help").sort();
+    expect(listed).toEqual(["assess", "bench", "demo", "design", "fit", "massing", "merge", "optimize", "parcels", "predict", "rank-parcels", "sample"]);
   });
 
   it("exit status 2 with a one-line message for an unknown option, on every command", async () => {
-    for (const c of ["assess", "bench", "demo", "design", "fit", "massing", "merge", "optimize", "parcels", "predict", "sample"]) {
+    for (const c of ["assess", "bench", "demo", "design", "fit", "massing", "merge", "optimize", "parcels", "predict", "rank-parcels", "sample"]) {
       const r = await run([c, "--no-such-option"]);
       expectCleanOutcome(r, [2], c);
       // commander names the first problem it meets: the unknown option, or a required option left out.
@@ -89,6 +93,8 @@ describe("every floorcast command under hostile input (in-process)", () => {
     const cases: string[][] = [
       ["massing", "--input", missing],
       ["parcels", "--input", missing, "--out", outPath("geojson")],
+      ["rank-parcels", "--input", missing, "--out", outPath("geojson"), "--summary", outPath("s")],
+      ["rank-parcels", ...parcelFiles.slice(0, 2), "--zoning", missing, "--out", outPath("geojson"), "--summary", outPath("s")],
       ["sample", "--scenario", missing, "--n", "4", "--seed", "1", "--out", outPath()],
       ["merge", missing, "--out", outPath()],
       ["fit", "--data", missing, "--inputs", "a", "--target", "y", "--out", outPath("json")],
@@ -112,6 +118,7 @@ describe("every floorcast command under hostile input (in-process)", () => {
       ["sample", "--scenario", scenario, "--n", "4", "--seed", "1", "--design", "lhs", "--out", `${nowhere}.csv`],
       ["fit", "--data", goodCsv, "--inputs", "a,b", "--target", "y", "--restarts", "1", "--out", `${nowhere}.json`],
       ["predict", "--model", model, "--data", goodCsv, "--out", `${nowhere}.csv`],
+      ["rank-parcels", ...parcelFiles, "--route", "exact", "--out", `${nowhere}.geojson`, "--summary", nowhere],
     ];
     for (const args of cases) expectCleanOutcome(await run(args), [2], args.join(" "));
   });

@@ -6,7 +6,7 @@ import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import type { Page } from "playwright-core";
-import { renderBenchHtml } from "@floorcast/bench";
+import { FLOORCAST_CAUTION, renderBenchHtml, type ParcelRankingReport } from "@floorcast/bench";
 import { headlineTable } from "../../packages/bench/src/harness/headline-table.js";
 import { formatTextTable } from "../../packages/bench/src/harness/format-text-table.js";
 import { hardCaseReport, SERIES } from "./bench-report-fixture.js";
@@ -124,6 +124,72 @@ describe.skipIf(!hasChromium)("bench report page in headless Chromium: the hard 
       const body = rows.slice(1);
       expect(body.length).toBeGreaterThan(0);
       for (const r of body) expect(r.split("\t")[6]).toBe("—"); // median refined
+    });
+  });
+});
+
+/** Three parcels, exact route only: the most (3000 m²), the least (1000 m²) and one without a feasible design. */
+function parcelReport(): ParcelRankingReport {
+  const parcel = (id: string, value: number | null, rank: number) => ({
+    index: rank - 1,
+    id,
+    zoneValue: value === null ? null : value * 0.8,
+    exact: { value, design: null, outputs: null, evaluations: 10, rank },
+    surrogate: null,
+  });
+  return {
+    file: "three-parcels.geojson",
+    outlines: [
+      [[0, 0], [20, 0], [20, 30], [0, 30]],
+      [[25, 0], [45, 0], [45, 30], [25, 30]],
+      [[50, 0], [70, 0], [70, 15], [60, 15], [60, 30], [50, 30]],
+    ],
+    ranking: {
+      kind: "floorcast.parcel-ranking",
+      formatVersion: 1,
+      caution: FLOORCAST_CAUTION,
+      objective: { output: "gfa", sense: "max" },
+      optimizer: "pso",
+      seed: 1,
+      budget: 10,
+      shortlist: 1,
+      parcels: [parcel("low", 1000, 2), parcel("high", 3000, 1), parcel("none", null, 3)],
+      evaluations: { zone: 3, exact: 30, surrogate: null },
+      surrogate: null,
+      agreement: null,
+    },
+  };
+}
+
+describe.skipIf(!hasChromium)("bench report page in headless Chromium: the plan of parcels coloured by capacity", () => {
+  let dir = "";
+  let file = "";
+  beforeAll(async () => {
+    dir = mkdtempSync(join(tmpdir(), "floorcast-parcel-plan-"));
+    file = join(dir, "report.html");
+    writeFileSync(file, await renderBenchHtml({ ...hardCaseReport(), parcels: parcelReport() }));
+  });
+  afterAll(() => rmSync(dir, { recursive: true, force: true }));
+
+  it("draws each parcel in its colour: the most capacity at the top of the ramp, the least at the bottom, none grey", async () => {
+    await withOfflinePage(file, async ({ page, errors, requests }) => {
+      expect(errors).toEqual([]);
+      expect(requests).toEqual([]);
+      const plan = page.locator("svg.parcel-capacity-plan");
+      expect(await plan.locator("polygon").count()).toBe(3);
+      expect(await plan.locator("title").allTextContents()).toEqual(["low: rank 2, best gfa 1000", "high: rank 1, best gfa 3000", "none: rank 3, best gfa —"]);
+      // viridis ends (matplotlib): #fde725 at the top, #440154 at the bottom; grey #bbbbbb without a value. A 20 × 30 m
+      // lot spans about 160 × 240 px at this plan's scale (600 px for 70 m, derived); the colour bar adds a few hundred
+      // pixels of each end colour, so each count must exceed 10,000 only where a parcel is filled
+      const [top, bottom, grey] = await countColours(page, await plan.screenshot(), ["#fde725", "#440154", "#bbbbbb"], 6);
+      expect(top).toBeGreaterThan(10_000);
+      expect(bottom).toBeGreaterThan(10_000);
+      expect(grey).toBeGreaterThan(10_000);
+      const text = await plan.locator("text").allTextContents();
+      expect(text).toEqual(expect.arrayContaining(["low · 2", "high · 1", "none · 3", "1000", "3000", "best gfa"]));
+      const caption = await page.locator("figure", { has: plan }).locator("figcaption").innerText();
+      expect(caption).toMatch(/coloured by its best gfa from the exact route/);
+      expect(caption).toMatch(/not a zoning determination/);
     });
   });
 });

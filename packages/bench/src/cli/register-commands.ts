@@ -20,6 +20,7 @@ const COMMANDS: readonly { readonly name: string; readonly summary: string; read
   { name: "predict", summary: "predict with a saved surrogate for every row of a CSV", load: async () => (await import("./commands/predict.js")).registerPredictCommand },
   { name: "design", summary: "write a space-filling design in the unit cube to CSV", load: async () => (await import("./commands/design.js")).registerDesignCommand },
   { name: "parcels", summary: "evaluate the exact rule on the parcels of a GeoJSON file, results as properties", load: async () => (await import("./commands/parcels.js")).registerParcelsCommand },
+  { name: "rank-parcels", summary: "rank a GeoJSON file's parcels by their best objective, exactly and with a surrogate", load: async () => (await import("./commands/rank-parcels.js")).registerRankParcelsCommand },
 ];
 
 /**

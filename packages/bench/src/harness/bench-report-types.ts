@@ -1,3 +1,4 @@
+import type { ParcelRankingReport } from "../parcels/parcel-ranking.js";
 import type { MassingInput, MassingResult } from "@floorcast/sampler";
 import type { Design, Outputs } from "../optimise/optimisation-problem.js";
 import type { ReportedSource } from "./reevaluate-surrogate-optimum.js";
@@ -147,4 +148,6 @@ export interface BenchReport {
   readonly environment: { readonly node: string; readonly cpus: number; readonly peers: boolean };
   readonly problems: readonly ProblemReport[];
   readonly seconds: number;
+  /** The demo's parcel file ranked by capacity (`floorcast demo`), drawn as a plan in the HTML report. */
+  readonly parcels?: ParcelRankingReport;
 }

@@ -10,6 +10,7 @@ import { benchSettings } from "./bench-settings.js";
 import { PEER_PYTHON, PeerProcess } from "./peer-process.js";
 import { runBench } from "./run-bench.js";
 import { benchReportPaths, writeBenchReport } from "./write-bench-report.js";
+import { rankDemoParcels } from "../parcels/rank-demo-parcels.js";
 
 /** Options of {@link runSuite} (what `floorcast bench` and `floorcast demo` take). */
 export interface RunSuiteOptions {
@@ -25,6 +26,11 @@ export interface RunSuiteOptions {
   readonly peers?: boolean;
   /** Problems directory (default {@link DEFAULT_PROBLEMS_DIR}, the problems shipped with floorcast). */
   readonly problemsDir?: string;
+  /**
+   * Rank the demo parcel file by capacity and add its plan to the report (`floorcast demo`): evaluations per parcel,
+   * and the folder of the parcel files (default DEFAULT_PARCELS_DIR, the files shipped with floorcast).
+   */
+  readonly parcels?: { readonly budget: number; readonly dir?: string };
   /** Progress messages (stderr). */
   readonly progress?: Writable;
   /** Overrides for tests: training sizes, test size, budgets. */
@@ -35,7 +41,8 @@ export interface RunSuiteOptions {
  * Runs a suite end to end — for every problem: the exact optimum, then per surrogate, training
  * size and seed: sample, fit, assess, optimise on the surrogate, re-evaluate exactly, refine — with
  * the peers when Debian's python3-sklearn and python3-scipy are present; writes each finished
- * problem as it goes (resumable) and then report.json, report.md and report.html into `out`.
+ * problem as it goes (resumable), with `parcels` ranks the demo parcel file (rankDemoParcels), and then
+ * writes report.json, report.md and report.html into `out`.
  * @param options - suite, problem, seeds, quick, output directory.
  * @returns the report and the paths written.
  */
@@ -82,8 +89,13 @@ export async function runSuite(options: RunSuiteOptions): Promise<{ report: Benc
       ...(progress ? { onProblem: (p: BenchProblem, state: "start" | "skip" | "done", i: number, n: number) => progress.problem(p.name, state, i, n) } : {}),
     });
     progress?.stop();
-    const paths = await writeBenchReport(report, options.out, claim);
-    return { report, paths };
+    let full = report;
+    if (options.parcels !== undefined) {
+      options.progress?.write("parcel ranking: the Quillmere demo parcels, exact and surrogate routes\n");
+      full = { ...report, parcels: await rankDemoParcels({ budget: options.parcels.budget, ...(options.parcels.dir === undefined ? {} : { dir: options.parcels.dir }) }) };
+    }
+    const paths = await writeBenchReport(full, options.out, claim);
+    return { report: full, paths };
   } finally {
     await claim.release();
     progress?.stop();

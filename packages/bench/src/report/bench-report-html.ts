@@ -11,6 +11,7 @@ import { headlineTable } from "../harness/headline-table.js";
 import { massingDrawingSpec, massingSectionTop } from "./massing-drawing-spec.js";
 import { formatDesign } from "../harness/format-design.js";
 import { formatPercent } from "../harness/format-percent.js";
+import { parcelRankingSection } from "./parcel-ranking-html.js";
 
 const pct = formatPercent;
 const isMassing = (input: unknown): input is MassingInput => typeof input === "object" && input !== null && "parcel" in input;
@@ -56,7 +57,8 @@ async function problemSection(p: ProblemReport): Promise<PageSection> {
  * The bench report as a self-contained HTML page (the trust report's page layout and figure
  * helpers): the caution, how to read the gap, the headline table, then per problem its tables,
  * figures (gap against training size, evaluations to target, fronts, ranking) and the plan and
- * section of the exact and surrogate-driven optimal massing.
+ * section of the exact and surrogate-driven optimal massing, and, when the report has one, the parcel ranking
+ * with its plan of parcels coloured by capacity.
  * @param report - the bench report.
  */
 export async function renderBenchHtml(report: BenchReport): Promise<string> {
@@ -72,6 +74,7 @@ export async function renderBenchHtml(report: BenchReport): Promise<string> {
   };
   const sections = [intro];
   for (const p of report.problems) sections.push(await problemSection(p));
+  if (report.parcels) sections.push(parcelRankingSection(report.parcels));
   return renderPage({
     title: `floorcast benchmark: suite “${report.suite}”`,
     subtitle: `${report.problems.length} problems · ${report.environment.cpus} CPUs · peers ${report.environment.peers ? "present" : "absent"}`,

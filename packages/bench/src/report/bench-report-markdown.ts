@@ -3,10 +3,10 @@ import { fitRatio } from "../harness/fit-ratio.js";
 import { headlineTable } from "../harness/headline-table.js";
 import { formatDesign } from "../harness/format-design.js";
 import { formatPercent } from "../harness/format-percent.js";
+import { markdownTable } from "./markdown-table.js";
+import { parcelRankingMarkdown } from "./parcel-ranking-markdown.js";
 
-const cell = (s: string): string => s.replace(/\|/g, "\\|");
-const table = (header: readonly string[], rows: readonly (readonly string[])[]): string =>
-  [`| ${header.map(cell).join(" | ")} |`, `| ${header.map(() => "---").join(" | ")} |`, ...rows.map((r) => `| ${r.map(cell).join(" | ")} |`)].join("\n");
+const table = markdownTable;
 const pct = formatPercent;
 const fmt = (v: number | null | undefined): string => (v === null || v === undefined || !Number.isFinite(v) ? "—" : String(Number(v.toPrecision(4))));
 
@@ -60,6 +60,7 @@ export function renderBenchMarkdown(report: BenchReport): string {
     "",
     ...h.notes.flatMap((n) => [n, ""]),
     ...report.problems.map(problemSection).flatMap((s) => [s, ""]),
+    ...(report.parcels ? [parcelRankingMarkdown(report.parcels.ranking, `Parcels ranked by capacity: ${report.parcels.file}`, 2)] : []),
     `Run: ${report.environment.cpus} CPUs, Node ${report.environment.node}, peers ${report.environment.peers ? "present" : "absent"}, ${report.seconds.toFixed(1)} s in this process.`,
     "",
     `> ${report.caution}`,

@@ -15,3 +15,8 @@ export { renderTrustHtml } from "./trust-report-html.js";
 export { renderBenchMarkdown } from "./bench-report-markdown.js";
 export { renderBenchHtml } from "./bench-report-html.js";
 export { massingDrawingSpec } from "./massing-drawing-spec.js";
+export { markdownTable } from "./markdown-table.js";
+export { parcelCapacityPlan } from "./parcel-capacity-plan.js";
+export type { PlanParcel } from "./parcel-capacity-plan.js";
+export { parcelRankingMarkdown } from "./parcel-ranking-markdown.js";
+export { parcelRankingSection } from "./parcel-ranking-html.js";

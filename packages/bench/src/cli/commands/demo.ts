@@ -7,7 +7,7 @@ import { FLOORCAST_CAUTION } from "../../floorcast-caution.js";
 
 /**
  * `floorcast demo`: the demo suite end to end (sample, fit GP and NN, assess, optimise, report) at
- * the quick sizes, with progress on the terminal; prints the headline table and where the report is.
+ * the quick sizes, plus the demo parcel file ranked by capacity (drawn as a plan in the report), with progress on the terminal; prints the headline table and where the report is.
  * @param program - the root command.
  * @param ctx - the streams and exit status.
  */
@@ -22,7 +22,7 @@ export function registerDemoCommand(program: Command, ctx: CommandContext): void
     .action(async (opts: { out: string; peers: boolean; force?: boolean }) => {
       const t0 = performance.now();
       ctx.stderr.write(`floorcast demo: the Quillmere demo suite, quick sizes. ${FLOORCAST_CAUTION}\n`);
-      const { report, paths } = await runSuite({ suite: "demo", quick: true, out: opts.out, force: opts.force === true, peers: opts.peers, progress: ctx.stderr });
+      const { report, paths } = await runSuite({ suite: "demo", quick: true, out: opts.out, force: opts.force === true, peers: opts.peers, parcels: { budget: 100 }, progress: ctx.stderr });
       const seconds = (performance.now() - t0) / 1000;
       ctx.stdout.write(`\n${formatTextTable(headlineTable(report))}\n\n`);
       ctx.stdout.write(`${FLOORCAST_CAUTION}\n\n`);
