@@ -9,7 +9,8 @@ import { reevaluateSurrogateOptimum } from "../../packages/bench/src/harness/ree
 import { runSingleTrial } from "../../packages/bench/src/harness/run-single-trial.js";
 import { sampleTrainingSet } from "../../packages/bench/src/harness/sample-training-set.js";
 import { scoreOutputs } from "../../packages/bench/src/optimise/evaluation-session.js";
-import type { Design, Evaluator, OptimisationProblem, Outputs } from "../../packages/bench/src/optimise/optimisation-problem.js";
+import type { Evaluator } from "@floorcast/sampler";
+import type { Design, OptimisationProblem, Outputs } from "../../packages/bench/src/optimise/optimisation-problem.js";
 import type { BenchProblem } from "../../packages/bench/src/problem/bench-problem.js";
 import type { BenchTrainer } from "../../packages/bench/src/harness/bench-trainer.js";
 import { problemDataset } from "../../packages/bench/src/problem/problem-dataset.js";

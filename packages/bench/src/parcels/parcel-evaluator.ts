@@ -23,6 +23,9 @@ export function parcelEvaluator(zone: MassingInput): CountingEvaluator {
     }
   };
   return {
+    name: "exact: parcel",
+    concurrency: 1,
+    close: async () => {},
     get count() {
       return count;
     },

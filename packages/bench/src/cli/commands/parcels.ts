@@ -6,7 +6,6 @@ import { FLOORCAST_CAUTION } from "../../floorcast-caution.js";
 import { UsageError } from "../usage-error.js";
 import { readParcelInputs, withParcelFileOptions } from "../read-parcel-inputs.js";
 import { evaluateParcelFile } from "../../parcels/evaluate-parcel-file.js";
-import { FLOORCAST_CAUTION } from "../../floorcast-caution.js";
 
 interface ParcelsOptions {
   input: string;

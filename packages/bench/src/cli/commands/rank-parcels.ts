@@ -9,7 +9,7 @@ import { UsageError } from "../usage-error.js";
 import { readParcelInputs, withParcelFileOptions, type ParcelInputOptions } from "../read-parcel-inputs.js";
 import { FLOORCAST_CAUTION } from "../../floorcast-caution.js";
 import { MODEL_FAMILIES } from "../../families/model-families.js";
-import { parseWhole } from "../../families/parse-whole.js";
+import { parseWhole } from "../parse-whole.js";
 import { OPTIMIZERS } from "../../optimise/optimizers.js";
 import { rankParcelCollection } from "../../parcels/rank-parcel-collection.js";
 import { parcelRankingMarkdown } from "../../report/parcel-ranking-markdown.js";
