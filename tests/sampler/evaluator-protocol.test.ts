@@ -83,7 +83,7 @@ describe("closing", () => {
     const script = `
       import { commandEvaluator } from "@floorcast/sampler";
       const e = commandEvaluator(${JSON.stringify(`${node} ${JSON.stringify(program)} ok -1`)});
-      await e.evaluate({ frontage: 2, depth: 3 }, { sample: 0 });
+      await e.evaluate([{ frontage: 2, depth: 3 }], { samples: [0] });
       await e.finish();
       await e.close();
       console.log(JSON.stringify(process.getActiveResourcesInfo()));`;
