@@ -16,8 +16,8 @@ export interface MinAffineTrendOptions {
 const FN = "fitMinAffineTrend";
 const MAX_ITERATIONS = 50;
 const FOLDS = 5;
-/** Ridge on the slopes, unit-cube units: keeps a piece's normal equations solvable on nearly collinear rows. */
-const RIDGE = 1e-8;
+/** Ridge on the slopes (× rows), unit-cube units: keeps a piece's normal equations solvable on collinear rows or a constant input, with a bias far below round-off of the fitted values (derived). */
+const RIDGE = 1e-12;
 
 /** Solves the small dense system A z = b in place (Gaussian elimination with partial pivoting). */
 function solve(a: number[][], b: number[]): number[] {
