@@ -161,7 +161,8 @@ export async function fitPlateStack(data: PlateStackData, options: PlateStackOpt
         geometryInputs,
         coverageInput,
         draws,
-        pointMode: options.pointMode ?? (draws.length > 0 ? "expected" : "plugin"),
+        // without draws (an inner model with no sd, or draws: 0) the mean over draws is the plug-in value: say so
+        pointMode: draws.length > 0 ? (options.pointMode ?? "expected") : "plugin",
       },
       training: {
         n: data.x.length,
