@@ -50,6 +50,8 @@ describe("fitMinAffineTrend", () => {
     const trend = fitMinAffineTrend(x, x.map((r) => 2 * r[0]!), { seed: 0 });
     for (const r of x) expect(minAffineAt(trend, r)).toBeCloseTo(2 * r[0]!, 8);
     expect(() => fitMinAffineTrend([[1]], [1])).toThrow(/fitMinAffineTrend: x and y/);
+    expect(() => fitMinAffineTrend("rows" as unknown as number[][], [1, 2])).toThrow(TypeError);
+    expect(() => fitMinAffineTrend([[1], [2]], [1, 2], null as unknown as object)).toThrow(/fitMinAffineTrend: options/);
     expect(() => fitMinAffineTrend([[1], [2]], [1])).toThrow(RangeError);
     expect(() => fitMinAffineTrend([[1], [Number.NaN]], [1, 2])).toThrow(/fitMinAffineTrend: x must be rows/);
     expect(() => fitMinAffineTrend([[1], [2]], [1, Infinity])).toThrow(RangeError);

@@ -121,9 +121,12 @@ function fitPieces(x: readonly number[][], y: readonly number[], rows: readonly 
  * @param y - one value per row.
  * @param options - most pieces, starts, seed.
  * @returns the trend, pieces in the original input units.
- * @throws RangeError naming the field for mismatched or non-finite data or bad options.
+ * @throws TypeError when x, y or options have the wrong type; RangeError naming the field for mismatched or
+ *   non-finite data or bad options.
  */
 export function fitMinAffineTrend(x: readonly (readonly number[])[], y: readonly number[], options: MinAffineTrendOptions = {}): MinAffineTrend {
+  if (!Array.isArray(x) || !Array.isArray(y) || !x.every((r) => Array.isArray(r))) throw new TypeError(`${FN}: x must be an array of rows and y an array`);
+  if (typeof options !== "object" || options === null) throw new TypeError(`${FN}: options must be an object`);
   const n = x.length;
   if (n < 2 || y.length !== n) throw new RangeError(`${FN}: x and y must have the same number of rows (≥ 2), got ${n} and ${y.length}`);
   const d = x[0]!.length;
