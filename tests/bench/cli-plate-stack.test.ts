@@ -2,7 +2,10 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import { evaluateMassing, quadParcel, readManifest } from "@floorcast/sampler";
+import { evaluateMassing, quadParcel, readManifest, readTable } from "@floorcast/sampler";
+import { loadSurrogate } from "@floorcast/surrogate";
+import { loadPredictor } from "@floorcast/surrogate/predict";
+import { refitTrainer } from "../../packages/bench/dist/cli/assess/refit-trainer.js";
 import { runCli } from "./run-cli.js";
 
 let dir = "";
@@ -91,4 +94,67 @@ describe("sample --plate-profile → fit --model plate-stack → predict", () =>
     expect(t.code).toBe(2);
     expect(t.err).toMatch(/facadeLength is not one of them/);
   });
+});
+
+describe("fit --model plate-stack --inner nn; assess --folds refits a plate stack", () => {
+  const inputs = "frontage,setbackSide,maxFar";
+  const query = [
+    [22, 1.5, 2.5],
+    [16, 3.5, 1.2],
+    [29, 0.5, 3.8],
+  ];
+  it("--inner nn fits MLP inner models; the file loads with loadSurrogate and loadPredictor, which agree", async () => {
+    const fit = await runCli([
+      "fit", "--data", p("train.csv"), "--inputs", inputs, "--target", "gfa,floors", "--model", "plate-stack",
+      "--inner", "nn", "--layers", "4", "--epochs", "5", "--backend", "cpu", "--seed", "2", "--out", p("nn.json"),
+    ]);
+    expect(fit.code, fit.err).toBe(0);
+    const text = readFileSync(p("nn.json"), "utf8");
+    const file = JSON.parse(text);
+    expect(file.payload.quantities.lotArea.model.modelType).toBe("mlp");
+    expect(file.payload.quantities.baseWidth.model.modelType).toBe("mlp");
+    // an MLP gives no sd: no draws, the plug-in point (README "Plate-stack surrogate")
+    expect(file.payload.draws).toEqual([]);
+    expect(file.payload.pointMode).toBe("plugin");
+    const a = loadSurrogate(text).predict(query);
+    const b = loadPredictor(text).predict(query);
+    // both evaluate the inner MLPs with the predictor's float64 forward pass and the same rule: identical numbers
+    expect(b.mean).toEqual(a.mean);
+    for (const row of a.mean) {
+      expect(Number.isFinite(row[0])).toBe(true);
+      expect(Number.isInteger(row[1])).toBe(true); // whole floors from the rule at the inner means
+    }
+  }, 600_000);
+
+  it("the refit of a plate-stack file on its own rows and seed reproduces the file (settings carried over)", async () => {
+    const fit = await runCli([
+      "fit", "--data", p("train.csv"), "--inputs", inputs, "--target", "gfa", "--model", "plate-stack",
+      "--point", "plugin", "--draws", "16", "--width-trend", "none", "--seed", "4", "--out", p("ps.json"),
+    ]);
+    expect(fit.code, fit.err).toBe(0);
+    const file = JSON.parse(readFileSync(p("ps.json"), "utf8"));
+    expect("trend" in file.payload.quantities.baseWidth).toBe(false);
+    const t = await readTable(p("train.csv"), { inputs: inputs.split(","), targets: ["gfa"] });
+    const again = await refitTrainer(file, "ps.json", p("train.csv"))({ inputs: inputs.split(","), targets: ["gfa"], x: t.x, y: t.y }, 4);
+    const refit = again.toJSON() as { payload: unknown };
+    expect(refit.payload).toEqual(file.payload);
+  }, 600_000);
+
+  it("assess --folds 3 refits the plate stack per fold from --train's plate profile; a CSV without one is named", async () => {
+    const fit = await runCli(["fit", "--data", p("train.csv"), "--inputs", inputs, "--target", "gfa", "--model", "plate-stack", "--draws", "16", "--out", p("cv.json")]);
+    expect(fit.code, fit.err).toBe(0);
+    const out = p("cv-report");
+    const r = await runCli(["assess", "--model", p("cv.json"), "--data", p("train.csv"), "--target", "gfa", "--train", p("train.csv"), "--folds", "3", "--out", out]);
+    expect(r.code, r.err).toBe(0);
+    const report = JSON.parse(readFileSync(join(out, "report.json"), "utf8"));
+    expect(report.crossValidation.method).toBe("k-fold");
+    expect(report.crossValidation.folds).toBe(3);
+    expect(report.crossValidation.metrics.n).toBe(24);
+    // out-of-fold predictions of rows away from a step are the exact rule on near-exact geometry, so at least half
+    // are within 0.1% (derived; the in-sample check above allows 3%); a misplaced step costs a whole floor
+    expect(report.crossValidation.metrics.medianRelError).toBeLessThan(1e-3);
+    const plain = await runCli(["assess", "--model", p("cv.json"), "--data", p("plain.csv"), "--target", "gfa", "--train", p("plain.csv"), "--folds", "2", "--out", p("cv-plain")]);
+    expect(plain.code).toBe(2);
+    expect(plain.err).toMatch(/assess: --model plate-stack needs the plate-profile columns; .*plain\.csv lacks rule_floorHeight/);
+  }, 600_000);
 });

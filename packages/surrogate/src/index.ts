@@ -88,15 +88,18 @@ export type { FittedQuantity, PlateStackParts } from "./plate-stack/plate-stack-
 export { plateStackColumns } from "./plate-stack/plate-stack-training-rows.js";
 export type { PlateStackData } from "./plate-stack/plate-stack-training-rows.js";
 export { qmcNormalDraws } from "./plate-stack/qmc-normal-draws.js";
+export { fitMinAffineTrend } from "./plate-stack/fit-min-affine-trend.js";
+export type { MinAffineTrendOptions } from "./plate-stack/fit-min-affine-trend.js";
 export { plateStackModelFileSchema, plateStackPayloadSchema } from "./model-file/plate-stack-model-file-schema.js";
 export type { PlateStackModelFile } from "./model-file/plate-stack-model-file-schema.js";
 export {
   PLATE_STACK_OUTPUTS,
   PLATE_STACK_RULE_NAME,
   evaluatePlateStack,
+  minAffineAt,
   stackPlates,
 } from "./predict/index.js";
-export type { PlateStackEvaluation, PlateStackPayload, StackRule, StackResult, StackLimit } from "./predict/index.js";
+export type { MinAffineTrend, PlateStackEvaluation, PlateStackPayload, StackRule, StackResult, StackLimit } from "./predict/index.js";
 // General composite: surrogates of named intermediate outputs combined by the caller's function (composite/)
 export { CompositeSurrogate } from "./composite/composite-surrogate.js";
 export type { CombineFunction, Combiner } from "./composite/composite-surrogate.js";

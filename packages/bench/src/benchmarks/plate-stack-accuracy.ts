@@ -3,8 +3,9 @@
  * python3-sklearn) on an 8-input dataset of Quillmere quad lots (Hollin Quads: frontage, depth, rear ratio, skew,
  * three yards and FAR; floor height 3.2 m, height cap 28 m, coverage 65%, least plate width 8 m), target gfa.
  * Everything floorcast does goes through the user's path — `floorcast sample --plate-profile` → CSV + manifest →
- * `floorcast fit` (gp; plate-stack, expected and plug-in point modes) → model file → `floorcast predict` — and the
- * test RMSEs, median absolute errors and plate-stack's 90% interval coverage are printed side by side in one run.
+ * `floorcast fit` (gp; plate-stack, expected and plug-in point modes, with its default min-affine width trend and
+ * with `--width-trend none`) → model file → `floorcast predict` — and the test RMSEs, median absolute errors, the
+ * learned base-plate width's errors and plate-stack's 90% interval coverage are printed side by side in one run.
  * Run: `npm run bench:plate-stack -- [n]` (default n = 500 training rows; 1,000 random test rows).
  * Estimates for early feasibility studies only: not a zoning determination.
  */
@@ -14,6 +15,7 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { readTable } from "@floorcast/sampler";
+import { loadSurrogate, minAffineAt, type MinAffineTrend, type PlateStackSurrogate } from "@floorcast/surrogate";
 import { main } from "../cli/main.js";
 import { FLOORCAST_CAUTION } from "../floorcast-caution.js";
 
@@ -53,6 +55,8 @@ const fits: [string, string[]][] = [
   ["gp.json", ["--model", "gp"]],
   ["plate-stack.json", ["--model", "plate-stack"]],
   ["plate-stack-plugin.json", ["--model", "plate-stack", "--point", "plugin"]],
+  ["plate-stack-no-trend.json", ["--model", "plate-stack", "--width-trend", "none"]],
+  ["plate-stack-no-trend-plugin.json", ["--model", "plate-stack", "--width-trend", "none", "--point", "plugin"]],
 ];
 const seconds: Record<string, number> = {};
 for (const [out, args] of fits) {
@@ -84,6 +88,8 @@ const sk = spawnSync("/usr/bin/python3", [`${root}tests/reference/gp_sklearn.py`
 const gp = await predictions("gp.json");
 const ps = await predictions("plate-stack.json");
 const plug = await predictions("plate-stack-plugin.json");
+const noTrend = await predictions("plate-stack-no-trend.json");
+const noTrendPlug = await predictions("plate-stack-no-trend-plugin.json");
 const skMean = sk.status === 0 ? (JSON.parse(sk.stdout) as { mean: number[] }).mean : null;
 const base = rmse(gp.mean, y);
 console.log(`plate-stack vs GPs: Hollin Quads (8 inputs), n = ${n} training rows (lhs-maximin), 1,000 random test rows, target gfa (m²)`);
@@ -97,6 +103,25 @@ if (skMean) row("scikit-learn gp", skMean, undefined);
 else console.log(`scikit-learn gp: not run (${sk.stderr.trim().split("\n").pop()})`);
 row("plate-stack (expected)", ps.mean, seconds["plate-stack.json"]);
 row("plate-stack (plugin)", plug.mean, seconds["plate-stack-plugin.json"]);
+row("  no width trend (expected)", noTrend.mean, seconds["plate-stack-no-trend.json"]);
+row("  no width trend (plugin)", noTrendPlug.mean, seconds["plate-stack-no-trend-plugin.json"]);
+// the learned base-plate least width against the test rows' own (plateWidth_1), where the 8 m minimum decides
+const widthTable = await readTable(p("test.csv"), { inputs, targets: ["plateWidth_1"] });
+const width = widthTable.y.map((r) => r[0]!);
+const near = width.flatMap((w, i) => (Math.abs(w - 8) < 1 ? [i] : []));
+console.log("learned base-plate width on the test rows   RMSE (m)   RMSE where |w − 8 m| < 1 m   wrong side of 8 m (inner mean)");
+for (const [label, model] of [["min-affine trend (default)", "plate-stack.json"], ["no trend", "plate-stack-no-trend.json"]] as const) {
+  const ps = loadSurrogate(readFileSync(p(model), "utf8")) as PlateStackSurrogate;
+  const file = ps.toJSON();
+  const q = file.payload.quantities.baseWidth as { trend?: MinAffineTrend };
+  const inner = ps.inner("baseWidth")!;
+  const rows = widthTable.x.map((r) => inner.inputs.map((name) => r[inputs.indexOf(name)]!));
+  const w = inner.predict(rows).mean.map((r, i) => r[0]! + (q.trend === undefined ? 0 : minAffineAt(q.trend, rows[i]!)));
+  const wrong = w.filter((v, i) => v >= 8 !== width[i]! >= 8).length;
+  console.log(
+    `${label.padEnd(43)} ${rmse(w, width).toFixed(3).padStart(8)}   ${rmse(near.map((i) => w[i]!), near.map((i) => width[i]!)).toFixed(3).padStart(26)} (${near.length} rows)   ${wrong}`,
+  );
+}
 const covered = ps.mean.filter((m, i) => Math.abs(y[i]! - m) <= 1.6448536269514722 * ps.sd[i]!).length / y.length;
 console.log(`plate-stack 90% interval (mean ± 1.645 sd, Monte Carlo through the rule): covers ${(100 * covered).toFixed(1)}% of test rows`);
 console.log(`\n${FLOORCAST_CAUTION}`);

@@ -35,8 +35,12 @@ export interface ModelFamily {
   fitCsv?(path: string, inputs: readonly string[], targets: readonly string[], opts: FitOptions, seed: number, say: (line: string) => void): Promise<Surrogate>;
   /** The model file `modelType` this family writes, e.g. "gp" (the nn family writes "mlp"). */
   readonly modelType: string;
-  /** A trainer refitting a model of this family with the settings its file records (assess --folds), when it can. */
-  refit?(file: { readonly payload?: unknown; readonly training?: Readonly<Record<string, unknown>> }): SurrogateTrainer;
+  /**
+   * A trainer refitting a model of this family with the settings its file records (assess --folds), when it can.
+   * `trainCsv` is the training CSV the rows come from (assess --train), for a family that reads more of it than
+   * the input and target columns (the plate profile).
+   */
+  refit?(file: { readonly payload?: unknown; readonly training?: Readonly<Record<string, unknown>> }, trainCsv?: string): SurrogateTrainer;
 }
 
 /**

@@ -5,7 +5,7 @@ import { createVariableCodec, type VariableCodec } from "@floorcast/sampler";
 import { EvaluationSession } from "./evaluation-session.js";
 import { expectedImprovement, probabilityOfFeasibility } from "./expected-improvement.js";
 import { objectiveLoss } from "./feasibility-rules.js";
-import { pollPoints } from "./pattern-search.js";
+import { maximiseAcquisition } from "./maximise-acquisition.js";
 import { createRng, unitSamples } from "./unit-samples.js";
 import { numberOption, validateProblem } from "./validate-problem.js";
 
@@ -143,27 +143,10 @@ export async function bayesianOptimisation(
           return Number.isNaN(best) ? pof : expectedImprovement(p.mean[r]![0]!, sd[r]![0]!, best) * pof;
         });
       };
-      const cands = unitSamples(nCand, dims, "random", rng).map((u) => codec.fromUnit(u));
-      const sc = score(cands);
-      const order = sc.map((s, i) => [s, i] as const).sort((a, b) => b[0] - a[0]).slice(0, nStarts);
-      // Pattern search on the model from every start at once (one predict call per step).
-      const starts = order.map(([s0, i0]) => ({ x: cands[i0]!, s: s0, delta: 0.05 }));
-      for (let steps = 0; steps < 60; steps++) {
-        const active = starts.filter((st) => st.delta > 1e-4);
-        if (active.length === 0) break;
-        const polls = active.map((st) => pollPoints(codec, st.x, st.delta));
-        const ps = score(polls.flat());
-        let at = 0;
-        active.forEach((st, a) => {
-          const mine = ps.slice(at, at + polls[a]!.length);
-          at += mine.length;
-          const k = mine.reduce((bi, v, i) => (v > mine[bi]! ? i : bi), 0);
-          if (mine.length > 0 && mine[k]! > st.s) [st.x, st.s] = [polls[a]![k]!, mine[k]!];
-          else st.delta /= 2;
-        });
-      }
-      let bestScore = -1;
-      for (const st of starts) if (st.s > bestScore) [next, bestScore] = [st.x, st.s];
+      // multi-start pattern search on the model from every start at once (one predict call per step)
+      const found = maximiseAcquisition(codec, score, rng, { candidates: nCand, starts: nStarts, maxSteps: 60, positiveOnly: false });
+      const bestScore = found.score;
+      next = found.x;
       if (eiTol > 0 && session.best && bestScore < eiTol * Math.max(1, Math.abs(best))) return session.result("converged");
       if (bestScore <= 0) next = undefined;
     }

@@ -2,7 +2,7 @@ import type { Evaluator } from "@floorcast/sampler";
 import { PLATE_STACK_OUTPUTS, fitPlateStack, plateStackColumns, type GaussianProcessOptions, type PlateStackSurrogate } from "@floorcast/surrogate";
 import type { CommonOptions, EvaluatedDesign, OptimisationProblem, OptimisationResult } from "./optimisation-problem.js";
 import { EvaluationSession } from "./evaluation-session.js";
-import { pollPoints } from "./pattern-search.js";
+import { maximiseAcquisition } from "./maximise-acquisition.js";
 import { createRng, unitSamples } from "./unit-samples.js";
 import { numberOption, validateProblem } from "./validate-problem.js";
 
@@ -96,29 +96,8 @@ export async function plateStackBayesianOptimisation(
           return acc / samples[r]!.length;
         });
       };
-      const cands = unitSamples(nCand, dims, "random", rng).map((u) => codec.fromUnit(u));
-      const sc = score(cands);
-      const starts = sc
-        .map((s, i) => [s, i] as const)
-        .sort((a, b) => b[0] - a[0])
-        .slice(0, nStarts)
-        .map(([s, i]) => ({ x: cands[i]!, s, delta: 0.05 }));
-      for (let steps = 0; steps < 40; steps++) {
-        const active = starts.filter((st) => st.delta > 1e-4 && st.s > 0);
-        if (active.length === 0) break;
-        const polls = active.map((st) => pollPoints(codec, st.x, st.delta));
-        const ps = score(polls.flat());
-        let at = 0;
-        active.forEach((st, a) => {
-          const mine = ps.slice(at, at + polls[a]!.length);
-          at += mine.length;
-          const k = mine.reduce((bi, v, i) => (v > mine[bi]! ? i : bi), 0);
-          if (mine.length > 0 && mine[k]! > st.s) [st.x, st.s] = [polls[a]![k]!, mine[k]!];
-          else st.delta /= 2;
-        });
-      }
-      let bestScore = 0;
-      for (const st of starts) if (st.s > bestScore) [next, bestScore] = [st.x, st.s];
+      const found = maximiseAcquisition(codec, score, rng, { candidates: nCand, starts: nStarts, maxSteps: 40, positiveOnly: true });
+      if (found.score > 0) next = found.x;
     }
     if (next === undefined) {
       const pool = unitSamples(64, dims, "random", rng).map((u) => codec.fromUnit(u)).filter((c) => !seen.has(c.join(",")));

@@ -12,7 +12,13 @@ const source = z.union([
 /** An inner quantity: a constant, or a complete gp/mlp model file (validated fully by loadSurrogate). */
 const inner = z.union([
   z.strictObject({ constant: finite }),
-  z.strictObject({ model: z.looseObject({ modelType: z.enum(["gp", "mlp"]) }) }),
+  z.strictObject({
+    model: z.looseObject({ modelType: z.enum(["gp", "mlp"]), inputs: z.array(z.string()) }),
+    trend: z.strictObject({ pieces: z.array(z.array(finite).min(1)).min(1) }).optional(),
+  }).refine((q) => q.trend === undefined || q.trend.pieces.every((p) => p.length === q.model.inputs.length + 1), {
+    message: "trend pieces must have one intercept and one slope per input of the inner model",
+    path: ["trend", "pieces"],
+  }),
 ]);
 const slot = z.enum(["floorHeight", "maxHeight", "maxFar", "maxCoverage", "minPlateWidth", "minPlateArea", "skyPlaneStart", "skyPlaneRatio"]);
 

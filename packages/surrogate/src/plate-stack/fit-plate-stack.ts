@@ -10,6 +10,8 @@ import type { SurrogateTrainer, TrainingData } from "../surrogate-types.js";
 import { innerTrainingSets, ruleOfRow, ruleSources, type PlateStackData } from "./plate-stack-training-rows.js";
 import { PlateStackSurrogate, type FittedQuantity } from "./plate-stack-surrogate.js";
 import { qmcNormalDraws } from "./qmc-normal-draws.js";
+import { fitMinAffineTrend } from "./fit-min-affine-trend.js";
+import { minAffineAt } from "../predict/min-affine-trend.js";
 import { buildValidityDomain } from "../trust/validity-domain.js";
 
 /** Options of {@link fitPlateStack}. */
@@ -28,6 +30,11 @@ export interface PlateStackOptions {
   readonly pointMode?: "expected" | "plugin";
   /** At most this many storey rows train the cut-plate models (a seeded subset; default 800). */
   readonly maxCutRows?: number;
+  /**
+   * Trend of the plate widths (default "min-affine"): a least of affine pieces fitted first (fitMinAffineTrend),
+   * the inner model learning the remainder; "none": the inner model learns the width itself.
+   */
+  readonly widthTrend?: "min-affine" | "none";
 }
 
 const FN = "fitPlateStack";
@@ -55,13 +62,16 @@ function thin(set: TrainingData, max: number, seed: number): TrainingData {
   return { ...set, x: keep.map((i) => set.x[i]!), y: keep.map((i) => set.y[i]!) };
 }
 
-async function fitQuantity(set: TrainingData, trainer: SurrogateTrainer, seed: number): Promise<FittedQuantity | undefined> {
+async function fitQuantity(set: TrainingData, trainer: SurrogateTrainer, seed: number, trended = false): Promise<FittedQuantity | undefined> {
   if (set.x.length === 0) return undefined;
   const y = set.y.map((r) => r[0]!);
   const scale = Math.max(1, ...y.map(Math.abs));
   if (y.every((v) => Math.abs(v - y[0]!) <= 1e-12 * scale)) return { constant: y[0]! };
   if (set.inputs.length === 0) throw new RangeError(`${FN}: ${set.targets[0]} varies but no geometry input is left to learn it from`);
-  return { model: await trainer(set, seed) };
+  if (!trended) return { model: await trainer(set, seed) };
+  const trend = fitMinAffineTrend(set.x, y, { seed });
+  const rest = set.y.map((r, i) => [r[0]! - minAffineAt(trend, set.x[i]!)]);
+  return { model: await trainer({ ...set, y: rest }, seed), trend };
 }
 
 /**
@@ -117,12 +127,17 @@ export async function fitPlateStack(data: PlateStackData, options: PlateStackOpt
   const trainer: SurrogateTrainer =
     options.innerTrainer ?? ((d, s) => Promise.resolve(fitGaussianProcess(d, { ...options.gp, seed: s })));
   const maxCut = options.maxCutRows ?? 800;
+  const widthTrend = options.widthTrend ?? "min-affine";
+  if (widthTrend !== "min-affine" && widthTrend !== "none") {
+    throw new RangeError(`${FN}: options.widthTrend must be "min-affine" or "none", got ${String(widthTrend)}`);
+  }
+  const trended = widthTrend === "min-affine";
   const quantities: Record<string, FittedQuantity | undefined> = {
     lotArea: await fitQuantity(sets.lotArea, trainer, seed),
     buildableArea: await fitQuantity(sets.buildableArea, trainer, seed + 1),
-    baseWidth: needWidth ? await fitQuantity(sets.baseWidth, trainer, seed + 2) : undefined,
+    baseWidth: needWidth ? await fitQuantity(sets.baseWidth, trainer, seed + 2, trended) : undefined,
     cutArea: await fitQuantity(thin(sets.cutArea, maxCut, seed), trainer, seed + 3),
-    cutWidth: needWidth ? await fitQuantity(thin(sets.cutWidth, maxCut, seed), trainer, seed + 4) : undefined,
+    cutWidth: needWidth ? await fitQuantity(thin(sets.cutWidth, maxCut, seed), trainer, seed + 4, trended) : undefined,
   };
   const uncertain = Object.values(quantities).some((q) => q !== undefined && "model" in q && q.model.kind === "gp");
   const draws = uncertain && drawCount > 0 ? qmcNormalDraws(drawCount, PLATE_STACK_QUANTITIES.length, seed) : [];
@@ -146,7 +161,8 @@ export async function fitPlateStack(data: PlateStackData, options: PlateStackOpt
         geometryInputs,
         coverageInput,
         draws,
-        pointMode: options.pointMode ?? (draws.length > 0 ? "expected" : "plugin"),
+        // without draws (an inner model with no sd, or draws: 0) the mean over draws is the plug-in value: say so
+        pointMode: draws.length > 0 ? (options.pointMode ?? "expected") : "plugin",
       },
       training: {
         n: data.x.length,

@@ -21,7 +21,7 @@ export function plateStackFromFile(file: PlateStackModelFile, fileName: string, 
     }
     const model = loadNested(q.model, `${fileName} payload.quantities.${name}`);
     if (model.targets.length !== 1) throw new RangeError(`loadSurrogate: ${fileName}: payload.quantities.${name} must have one target`);
-    fitted[name] = { model };
+    fitted[name] = q.trend === undefined ? { model } : { model, trend: q.trend };
   }
   for (const name of [...rest.geometryInputs, ...(rest.coverageInput === null ? [] : [rest.coverageInput])]) {
     if (!file.inputs.includes(name)) throw new RangeError(`loadSurrogate: ${fileName}: payload names ${name}, not an input`);

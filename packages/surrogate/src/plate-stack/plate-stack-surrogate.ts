@@ -4,9 +4,13 @@ import { sealModelFile } from "../model-file/seal-model-file.js";
 import type { InnerQuantity, PlateStackPayload } from "../predict/plate-stack-payload.js";
 import { PLATE_STACK_OUTPUTS, evaluatePlateStack, latentSd, type InnerMoments, type PlateStackEvaluation } from "../predict/plate-stack-evaluate.js";
 import type { PlateStackModelFile } from "../model-file/plate-stack-model-file-schema.js";
+import type { MinAffineTrend } from "../predict/min-affine-trend.js";
 
-/** A learned quantity of a fitted plate stack: a constant or a fitted inner surrogate (one target). */
-export type FittedQuantity = { readonly constant: number } | { readonly model: Surrogate };
+/**
+ * A learned quantity of a fitted plate stack: a constant, or a fitted inner surrogate (one target), which with a
+ * `trend` learns the quantity minus the trend (the quantity is trend + the inner model's prediction).
+ */
+export type FittedQuantity = { readonly constant: number } | { readonly model: Surrogate; readonly trend?: MinAffineTrend };
 
 /** Everything a fitted plate stack is made of (built by fitPlateStack or loadSurrogate). */
 export interface PlateStackParts {
@@ -39,12 +43,12 @@ export class PlateStackSurrogate implements Surrogate {
     const quantities = Object.fromEntries(
       Object.entries(parts.quantities)
         .filter((e): e is [string, FittedQuantity] => e[1] !== undefined)
-        .map(([k, q]) => [k, "constant" in q ? q : { model: q.model.toJSON() }]),
+        .map(([k, q]) => [k, "constant" in q ? q : { model: q.model.toJSON(), ...(q.trend === undefined ? {} : { trend: q.trend }) }]),
     );
     this.#payload = { ...parts.file.payload, quantities } as unknown as PlateStackPayload;
   }
 
-  /** The fitted inner surrogate of a learned quantity (undefined when constant or not learned). */
+  /** The fitted inner surrogate of a learned quantity (undefined when constant or not learned; with a trend it predicts the remainder). */
   inner(name: string): Surrogate | undefined {
     const q = this.#parts.quantities[name];
     return q !== undefined && "model" in q ? q.model : undefined;

@@ -10,6 +10,8 @@ export type { ConformalPayload } from "./conformal-payload.js";
 export type { PlateStackPayload, RuleSource, InnerQuantity, PlateStackQuantities } from "./plate-stack-payload.js";
 export { PLATE_STACK_QUANTITIES, INSET_INPUT } from "./plate-stack-payload.js";
 export { PLATE_STACK_OUTPUTS, evaluatePlateStack } from "./plate-stack-evaluate.js";
+export { minAffineAt } from "./min-affine-trend.js";
+export type { MinAffineTrend } from "./min-affine-trend.js";
 export type { InnerMoments, InnerPredict, PlateStackEvaluation } from "./plate-stack-evaluate.js";
 export { PLATE_STACK_RULE_NAME, coveredBaseArea, stackPlates, storeyInset, storeysAllowed } from "./plate-stack-rule.js";
 export type { StackLimit, StackResult, StackRule } from "./plate-stack-rule.js";

@@ -2,6 +2,7 @@ import type { InnerQuantity, PlateStackPayload, RuleSource } from "./plate-stack
 import { INSET_INPUT, PLATE_STACK_QUANTITIES } from "./plate-stack-payload.js";
 import type { StackLimit, StackRule } from "./plate-stack-rule.js";
 import { coveredBaseArea, stackPlates, storeyInset, storeysAllowed } from "./plate-stack-rule.js";
+import { minAffineAt } from "./min-affine-trend.js";
 
 /** Mean and sd of one learned quantity for a batch of rows (sd all 0 when the inner model gives none). */
 export interface InnerMoments {
@@ -92,7 +93,7 @@ function outputsOf(rule: StackRule, lot: number, buildable: number, r: ReturnTyp
  * @param payload - the plate-stack payload.
  * @param inputs - the model's input names.
  * @param x - rows × inputs, original units.
- * @param predict - predicts one learned quantity.
+ * @param predictInner - predicts one learned quantity's inner model (evaluatePlateStack adds its trend).
  * @param keepSamples - also return every draw's outputs (for Monte Carlo acquisition functions).
  * @returns point predictions, sd, floor-count probabilities and the limiting reason per row.
  */
@@ -100,7 +101,7 @@ export function evaluatePlateStack(
   payload: PlateStackPayload,
   inputs: readonly string[],
   x: readonly (readonly number[])[],
-  predict: InnerPredict,
+  predictInner: InnerPredict,
   keepSamples = false,
 ): PlateStackEvaluation {
   const col = new Map(inputs.map((name, j) => [name, j] as const));
@@ -110,6 +111,12 @@ export function evaluatePlateStack(
   const withCoverage = x.map((row, i) =>
     payload.coverageInput === null ? geo[i]! : [...geo[i]!, row[col.get(payload.coverageInput)!]!],
   );
+  // a quantity with a trend: the inner model predicts the remainder
+  const predict = (name: string, quantity: InnerQuantity, rows: number[][]): InnerMoments => {
+    const m = predictInner(name, quantity, rows);
+    const trend = "trend" in quantity ? quantity.trend : undefined;
+    return trend === undefined ? m : { mean: m.mean.map((v, r) => v + minAffineAt(trend, rows[r]!)), sd: m.sd };
+  };
   const lot = predict("lotArea", q.lotArea, geo);
   const buildable = predict("buildableArea", q.buildableArea, geo);
   const baseWidth = q.baseWidth === undefined ? undefined : predict("baseWidth", q.baseWidth, withCoverage);

@@ -1,3 +1,4 @@
+import type { MinAffineTrend } from "./min-affine-trend.js";
 import type { ModelFileShape } from "./model-file-shape.js";
 
 /**
@@ -9,8 +10,11 @@ export type RuleSource =
   | { readonly input: string }
   | { readonly input: string; readonly levels: readonly number[] };
 
-/** A learned quantity: constant over the training data, or an inner model file (gp or mlp). */
-export type InnerQuantity = { readonly constant: number } | { readonly model: ModelFileShape };
+/**
+ * A learned quantity: constant over the training data, or an inner model file (gp or mlp); with a `trend` (the
+ * widths by default) the quantity is trend(x) + the inner model's prediction, its sd the inner model's.
+ */
+export type InnerQuantity = { readonly constant: number } | { readonly model: ModelFileShape; readonly trend?: MinAffineTrend };
 
 /** The learned quantities of a plate stack and the inputs each one reads. */
 export interface PlateStackQuantities {

@@ -37,6 +37,16 @@ function checkPayload(file: ModelFileShape): PlateStackPayload {
   return p as unknown as PlateStackPayload;
 }
 
+/** Checks a quantity's trend: pieces of one intercept and one slope per input of its inner model, all finite. */
+function checkTrend(field: string, trend: unknown, inputs: number): void {
+  const pieces = objectField(FN, field, trend).pieces;
+  const ok =
+    Array.isArray(pieces) &&
+    pieces.length > 0 &&
+    pieces.every((p) => Array.isArray(p) && p.length === inputs + 1 && p.every((v) => typeof v === "number" && Number.isFinite(v)));
+  if (!ok) throw new RangeError(`${FN}: ${field}.pieces must be rows of ${inputs + 1} finite numbers (intercept, one slope per input)`);
+}
+
 /**
  * Builds a predictor for a "plate-stack" model file: each inner model file is loaded with `load`, and the stacking
  * rule named by the file (floorcast's own code, never code from the file) is applied exactly (evaluatePlateStack).
@@ -52,8 +62,11 @@ export function createPlateStackPredictor(file: ModelFileShape, load: (inner: un
     const q = (payload.quantities as unknown as Record<string, InnerQuantity | undefined>)[name];
     if (q === undefined) continue;
     const v = objectField(FN, `payload.quantities.${name}`, q);
-    if (v.model !== undefined) inner.set(name, load(v.model));
-    else if (typeof v.constant !== "number" || !Number.isFinite(v.constant)) {
+    if (v.model !== undefined) {
+      const model = load(v.model);
+      inner.set(name, model);
+      if (v.trend !== undefined) checkTrend(`payload.quantities.${name}.trend`, v.trend, model.inputs.length);
+    } else if (typeof v.constant !== "number" || !Number.isFinite(v.constant)) {
       throw new RangeError(`${FN}: payload.quantities.${name} must be { constant } or { model }`);
     }
   }

@@ -7,17 +7,19 @@ type FileLike = { modelType?: string; payload?: Record<string, unknown>; trainin
 /**
  * A trainer that refits a model of the same family and settings as a model file, for cross-validation
  * and learning curves: a registered family's own refit (MODEL_FAMILIES: a GP with the file's kernel and ARD choice;
- * an MLP with the file's hidden layer widths, activation and recorded training settings); an ensemble with as many members,
+ * an MLP with the file's hidden layer widths, activation and recorded training settings; a plate stack with the
+ * file's inner family, point mode, draws and width trend, on the plate profile of each row in the training CSV); an ensemble with as many members,
  * each refitted like its first member; a split-conformal wrapper with the same coverage, score and
  * calibration fraction around a base refitted like its own.
  * @param file - the parsed model file.
  * @param fileName - for messages.
+ * @param trainCsv - the training CSV (assess --train), for a family that reads its plate profile (plate-stack).
  * @returns the trainer.
  */
-export function refitTrainer(file: unknown, fileName: string): SurrogateTrainer {
+export function refitTrainer(file: unknown, fileName: string, trainCsv?: string): SurrogateTrainer {
   const f = (file ?? {}) as FileLike;
   const family = MODEL_FAMILIES.find((m) => m.modelType === f.modelType);
-  if (family?.refit) return family.refit(f);
+  if (family?.refit) return family.refit(f, trainCsv);
   if (f.modelType === "ensemble") {
     const members = (f.payload as { members: unknown[] }).members;
     const member = refitTrainer(members[0], `${fileName} payload.members[0]`);

@@ -117,7 +117,7 @@ async function runAssess(opts: AssessOptions, ctx: CommandContext): Promise<void
   const notes: string[] = [];
   let crossValidation: CrossValidationResult | null = null;
   if (trainData && folds !== undefined) {
-    crossValidation = await kFoldCrossValidation(refitTrainer(json, basename(opts.model)), trainData, { folds, seed });
+    crossValidation = await kFoldCrossValidation(refitTrainer(json, basename(opts.model), opts.train), trainData, { folds, seed });
   } else if (trainData && hasLeaveOneOut(model)) {
     if (sameTrainingRows(model, trainData, domain)) crossValidation = leaveOneOutValidation(model, trainData);
     else notes.push(`Leave-one-out skipped: ${basename(opts.train!)} is not the model's own training data in its order (use --folds for k-fold).`);
@@ -128,7 +128,7 @@ async function runAssess(opts: AssessOptions, ctx: CommandContext): Promise<void
   if (trainData && opts.learningCurve) {
     const sizes = opts.sizes!.split(",").map((s) => int("--sizes", s.trim(), 2));
     const testData: TrainingData = { inputs, targets: [opts.target], x: test.x, y: test.y };
-    curve = await learningCurve(refitTrainer(json, basename(opts.model)), trainData, testData, { target: opts.target, sizes, seed });
+    curve = await learningCurve(refitTrainer(json, basename(opts.model), opts.train), trainData, testData, { target: opts.target, sizes, seed });
   }
   const { report, figures } = buildTrustReport({
     model,
