@@ -21,9 +21,10 @@ const ALLOWED = new Set([
 ]);
 
 function files(dir: string, keep: (name: string) => boolean): string[] {
-  return readdirSync(dir, { withFileTypes: true, recursive: true })
-    .filter((e) => e.isFile() && keep(e.name))
-    .map((e) => relative(root, join(e.parentPath, e.name)).split("\\").join("/"));
+  return readdirSync(dir, { withFileTypes: true }).flatMap((e) => {
+    if (e.isDirectory()) return files(join(dir, e.name), keep);
+    return e.isFile() && keep(e.name) ? [relative(root, join(dir, e.name)).split("\\").join("/")] : [];
+  });
 }
 const sources = ["sampler", "surrogate", "bench"].flatMap((p) => [
   ...files(join(root, "packages", p, "src"), (n) => n.endsWith(".ts")),
