@@ -1,4 +1,4 @@
-import { evaluateMassing, quadParcel, type MassingInput } from "@floorcast/sampler";
+import { evaluateMassing, FLOORCAST_CAUTION, quadParcel, type MassingInput } from "@floorcast/sampler";
 import type { BenchReport, ProblemReport, SurrogateOptimumRecord } from "../../packages/bench/src/harness/bench-report-types.js";
 import { summariseGaps } from "../../packages/bench/src/harness/summarise-gaps.js";
 
@@ -86,7 +86,7 @@ export function hardCaseReport(): BenchReport {
   return {
     kind: "floorcast.bench-report",
     formatVersion: 1,
-    caution: "Estimates for early feasibility studies only: not a zoning determination. Local codes and licensed professionals decide.",
+    caution: FLOORCAST_CAUTION,
     suite: "demo",
     options: { refineBudget: 20 },
     environment: { node: process.version, cpus: 2, peers: true },

@@ -7,6 +7,7 @@ import seedrandom from "seedrandom";
 import { runCli } from "./run-cli.js";
 import { fitGaussianProcess, loadSurrogate, regressionMetrics } from "@floorcast/surrogate";
 import { FLOORCAST_CAUTION } from "@floorcast/bench";
+import { expectOnlyCaution } from "./helpers/only-caution.js";
 
 // A toy floor-area-like response with a regime switch (FAR binds above frontage 50): invented, derived.
 const gfa = (a: number, b: number) => Math.min(2 * a * b, 2000 + 10 * b);
@@ -57,7 +58,9 @@ describe("floorcast assess", () => {
     const html = await readFile(join(out, "report.html"), "utf8");
     expect(html.match(/<figure>/g)).toHaveLength(6);
     const md = await readFile(join(out, "report.md"), "utf8");
-    expect(md).toMatch(/not a zoning determination/);
+    // every kind of the report carries the one caution word for word, and no other caution wording
+    expect(report.caution).toBe(FLOORCAST_CAUTION);
+    for (const [kind, text] of [["report.json", await readFile(join(out, "report.json"), "utf8")], ["report.md", md], ["report.html", html]]) expectOnlyCaution(text!, kind!);
   });
 
   it("uses the GP's closed-form leave-one-out when --train is its training data, and its stored inputs for the domain", async () => {

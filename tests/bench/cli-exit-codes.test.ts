@@ -7,6 +7,7 @@ import { fileURLToPath } from "node:url";
 import { expectCleanOutcome } from "./reliability-cli-run.js";
 import { runCli } from "./run-cli.js";
 import { FLOORCAST_CAUTION } from "@floorcast/bench";
+import { expectOnlyCaution } from "./helpers/only-caution.js";
 import { HOSTILE_PROGRAM } from "../sampler/helpers/hostile-evaluator.js";
 
 // The README's exit-status table, cell by cell: each case is one command run that must end with that status.
@@ -107,7 +108,8 @@ describe("exit statuses: the README's table, for every command", () => {
         const r = await runCli(args());
         expectCleanOutcome(r, [Number(code)], `${command} ${code}`);
         // every command that shows results shows the one caution (design writes a unit-cube design, no result)
-        if (code === "0" && command !== "design") expect(`${r.out}${r.err}`, command).toContain(FLOORCAST_CAUTION);
+        // word for word, and no other caution wording on stdout or stderr
+        if (code === "0" && command !== "design") expectOnlyCaution(`${r.out}${r.err}`, command);
       }, 180_000);
     }
   }

@@ -7,6 +7,7 @@ import { fileURLToPath } from "node:url";
 import { runCli } from "./run-cli.js";
 import { loadSurrogate } from "@floorcast/surrogate";
 import { FLOORCAST_CAUTION } from "@floorcast/bench";
+import { expectOnlyCaution } from "./helpers/only-caution.js";
 
 const bin = fileURLToPath(new URL("../../packages/bench/bin/floorcast.js", import.meta.url));
 const run = (args: string[]) => spawnSync(process.execPath, [bin, ...args], { encoding: "utf8" });
@@ -46,6 +47,7 @@ describe("floorcast fit / predict", () => {
     expect(fit.stdout).toMatch(/not a zoning determination/);
     // the model file carries the one caution constant, sealed under its checksum (loadSurrogate below verifies it)
     expect((JSON.parse(readFileSync(p("m.json"), "utf8")) as { caution?: string }).caution).toBe(FLOORCAST_CAUTION);
+    expectOnlyCaution(readFileSync(p("m.json"), "utf8"), "model file");
     const pred = run(["predict", "--model", p("m.json"), "--data", p("query.csv"), "--out", p("pred.csv")]);
     expect(pred.status).toBe(0);
     const out = readCsv(p("pred.csv"));

@@ -3,6 +3,8 @@ import { execFileSync } from "node:child_process";
 import { readFileSync } from "node:fs";
 import { runCli } from "./run-cli.js";
 import { fileURLToPath } from "node:url";
+import { FLOORCAST_CAUTION } from "@floorcast/sampler";
+import { expectOnlyCaution } from "./helpers/only-caution.js";
 
 const bin = fileURLToPath(new URL("../../packages/bench/bin/floorcast.js", import.meta.url));
 
@@ -10,7 +12,21 @@ describe("floorcast --help", () => {
   it("prints usage with the feasibility caution and exits 0", () => {
     const out = execFileSync(process.execPath, [bin, "--help"], { encoding: "utf8" });
     expect(out).toMatch(/Usage: floorcast/);
-    expect(out).toMatch(/not a zoning determination/);
+    // the one caution, word for word, once, at the end (no command description spells its own)
+    expect(out.trimEnd().endsWith(`\n\n${FLOORCAST_CAUTION}`)).toBe(true);
+    expectOnlyCaution(out, "floorcast --help");
+    expect(out.split(FLOORCAST_CAUTION)).toHaveLength(2);
+  });
+  it("every command's help ends with the same caution, once", async () => {
+    const commands = [...execFileSync(process.execPath, [bin, "--help"], { encoding: "utf8" }).matchAll(/^  ([a-z-]+) /gm)].map((m) => m[1]!).filter((c) => c !== "help");
+    expect(commands).toEqual(expect.arrayContaining(["massing", "parcels", "rank-parcels", "assess", "sample"]));
+    for (const command of commands) {
+      const r = await runCli([command, "--help"]);
+      expect(r.code, command).toBe(0);
+      expect(r.out.trimEnd().endsWith(`\n\n${FLOORCAST_CAUTION}`), command).toBe(true);
+      expect(r.out.split(FLOORCAST_CAUTION), command).toHaveLength(2);
+      expectOnlyCaution(r.out, `floorcast ${command} --help`);
+    }
   });
   it("--version and -V print the version of @floorcast/bench and exit 0", () => {
     const { version } = JSON.parse(readFileSync(new URL("../../packages/bench/package.json", import.meta.url), "utf8")) as { version: string };

@@ -3,7 +3,8 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 import proj4 from "proj4";
-import { claimOutput } from "@floorcast/sampler";
+import { claimOutput, FLOORCAST_CAUTION } from "@floorcast/sampler";
+import { expectOnlyCaution } from "./helpers/only-caution.js";
 import { referenceAvailable, runReference } from "../reference/python.js";
 import { runCli } from "./run-cli.js";
 
@@ -61,8 +62,10 @@ describe("floorcast parcels: GeoJSON round trip", async () => {
   it("computes the good parcels, reports the bad ones in place, exits 1", () => {
     expect(run.code).toBe(1);
     expect(run.err).toMatch(/4 of 6 features could not be evaluated/);
-    expect(run.out).toMatch(/not a zoning determination/);
-    expect(result.fc_caution).toMatch(/not a zoning determination/);
+    // the one caution word for word on stdout and in the collection's fc_caution, and no other caution wording
+    expect(run.out.trimEnd().split("\n").at(-1)).toBe(FLOORCAST_CAUTION);
+    expect(result.fc_caution).toBe(FLOORCAST_CAUTION);
+    expectOnlyCaution(readFileSync(out, "utf8"), "parcels GeoJSON");
     expect(byId.get("multi")!.properties.fc_error).toMatch(/geometry must be a Polygon, got "MultiPolygon"/);
     expect(byId.get("nocontrols")!.properties.fc_error).toMatch(/missing controls: setbacks, floorHeight, maxHeight/);
     expect(byId.get("bowtie")!.properties.fc_error).toMatch(/not simple/);

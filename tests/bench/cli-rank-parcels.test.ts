@@ -6,6 +6,8 @@ import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { runCli, type CliOutcome } from "./run-cli.js";
+import { FLOORCAST_CAUTION } from "@floorcast/sampler";
+import { expectOnlyCaution } from "./helpers/only-caution.js";
 
 const DEMO = fileURLToPath(new URL("../../datasets/parcels/", import.meta.url));
 const FILES = [
@@ -34,13 +36,15 @@ describe("floorcast rank-parcels", () => {
     expect(run.out).toMatch(/exact route: 360 exact evaluations/);
     expect(run.out).toMatch(/surrogate route: \d+ exact evaluations \(40 training \+ \d+ re-evaluation\)/);
     expect(run.out).toMatch(/Spearman rho -?\d\.\d{3}, Kendall tau-b -?\d\.\d{3}, top-3 overlap \d+%/);
-    expect(run.out).toMatch(/not a zoning determination/);
+    expect(run.out.trimEnd().split("\n").at(-1)).toBe(FLOORCAST_CAUTION);
     const geo = JSON.parse(readFileSync(join(dir, "ranked.geojson"), "utf8"));
     const summary = JSON.parse(readFileSync(join(dir, "ranking.json"), "utf8"));
     const md = readFileSync(join(dir, "ranking.md"), "utf8");
-    expect(geo.fc_caution).toMatch(/not a zoning determination/);
-    expect(summary.caution).toMatch(/not a zoning determination/);
-    expect(md.match(/not a zoning determination/g)).toHaveLength(2);
+    // the one caution word for word in every output, and no other caution wording
+    expect(geo.fc_caution).toBe(FLOORCAST_CAUTION);
+    expect(summary.caution).toBe(FLOORCAST_CAUTION);
+    expect(md.split(FLOORCAST_CAUTION)).toHaveLength(3); // at the top and at the end
+    for (const f of ["ranked.geojson", "ranking.json", "ranking.md"]) expectOnlyCaution(readFileSync(join(dir, f), "utf8"), f);
     expect(summary.kind).toBe("floorcast.parcel-ranking");
     expect(summary.file).toBe("quillmere-parcels.geojson");
     const ranks = geo.features.map((f: { properties: { fc_rank: number } }) => f.properties.fc_rank);

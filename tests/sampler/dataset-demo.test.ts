@@ -4,7 +4,8 @@ import { mkdtempSync, readFileSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
-import { loadScenario, manifestPathFor, readManifest, readTable } from "@floorcast/sampler";
+import { FLOORCAST_CAUTION, loadScenario, manifestPathFor, readManifest, readTable } from "@floorcast/sampler";
+import { expectOnlyCaution } from "../bench/helpers/only-caution.js";
 import { referenceAvailable, runReference } from "../reference/python.js";
 
 const datasets = fileURLToPath(new URL("../../datasets/", import.meta.url));
@@ -40,6 +41,9 @@ describe("committed demo datasets", () => {
       const s = await loadScenario(join(datasets, d.scenario));
       expect(m.scenario).toEqual({ name: s.name, file: s.fileName, sha256: s.sha256 });
       expect(m).toMatchObject({ design: d.design, seed: d.seed, n: d.n, rows: d.n });
+      // the one caution, word for word, and no other caution wording in the file
+      expect(m.caution, d.out).toBe(FLOORCAST_CAUTION);
+      expectOnlyCaution(readFileSync(manifestPathFor(join(datasets, d.out)), "utf8"), d.out);
     }
   });
   it("every limitedBy regime occurs in the demo data, and the coverage cap binds in Quillmere Core", async () => {

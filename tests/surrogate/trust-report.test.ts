@@ -1,6 +1,14 @@
 import { describe, expect, it } from "vitest";
 import seedrandom from "seedrandom";
-import { buildTrustReport, buildValidityDomain, intervalCoverage, kFoldCrossValidation, regressionMetrics, type TrainingData } from "@floorcast/surrogate";
+import {
+  buildTrustReport,
+  buildValidityDomain,
+  intervalCoverage,
+  kFoldCrossValidation,
+  regressionMetrics,
+  TRUST_REPORT_DEFAULT_CAUTION,
+  type TrainingData,
+} from "@floorcast/surrogate";
 import { olsModel, olsTrainer } from "./trust-toy-trainer.js";
 
 function data(n: number, seed: string): TrainingData {
@@ -32,8 +40,10 @@ describe("buildTrustReport", () => {
     });
     expect(report.kind).toBe("floorcast.trust-report");
     expect(report.formatVersion).toBe(1);
-    expect(report.caution).toMatch(/not a zoning determination/);
-    expect(report.caution).toMatch(/licensed professionals/);
+    // without a caution from the caller, the documented default (pinned equal to FLOORCAST_CAUTION in
+    // tests/bench/caution-single-source.test.ts); the surrogate's own remark is the last note
+    expect(report.caution).toBe(TRUST_REPORT_DEFAULT_CAUTION);
+    expect(report.notes.at(-1)).toMatch(/^A surrogate approximates the exact floor-area rule; re-check any design/);
     const pred = model.predict(test.x).mean.map((r) => r[0]!);
     expect(report.metrics).toEqual(regressionMetrics(y, pred));
     expect(Object.keys(report.byRegime!).sort()).toEqual(["far", "height"]);
@@ -69,6 +79,13 @@ describe("buildTrustReport", () => {
     expect(report.domain!.outsideRows).toEqual(expect.arrayContaining([10, 11]));
     expect(report.domain!.metricsOutside!.n).toBe(report.domain!.nOutside);
     expect(report.domain!.metricsInside!.n + report.domain!.nOutside).toBe(12);
+  });
+
+  it("carries the caller's caution word for word, and rejects one that is not a non-empty string", () => {
+    const caution = "Caller's caution text.";
+    expect(buildTrustReport({ model, target: "gfa", x: test.x, y, caution }).report.caution).toBe(caution);
+    expect(() => buildTrustReport({ model, target: "gfa", x: test.x, y, caution: 3 as never })).toThrow(new TypeError("buildTrustReport: caution must be a string"));
+    expect(() => buildTrustReport({ model, target: "gfa", x: test.x, y, caution: " " })).toThrow(new RangeError("buildTrustReport: caution must not be empty"));
   });
 
   it("rejects a bad target, ragged or non-finite inputs, empty sets and a non-model; skips calibration for sd ≤ 0", () => {

@@ -1,6 +1,5 @@
 /**
- * The one caution every result floorcast shows a user carries (CLI output, optimum and benchmark files, reports):
- * surrogate and exact massing numbers inform early feasibility studies and decide nothing (common practice).
+ * The one caution every result floorcast shows a user carries, re-exported from `@floorcast/sampler` where it is
+ * defined (so `@floorcast/bench`'s export of the same name keeps working).
  */
-export const FLOORCAST_CAUTION =
-  "Estimates for early feasibility studies only: not a zoning determination. Local codes and licensed professionals decide.";
+export { FLOORCAST_CAUTION } from "@floorcast/sampler";

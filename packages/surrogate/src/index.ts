@@ -27,6 +27,7 @@ export { DomainError } from "./trust/domain-error.js";
 export { collectDiagnostics } from "./trust/model-diagnostics.js";
 export type { DiagnosticValue, TrustDiagnostics } from "./trust/model-diagnostics.js";
 export { buildTrustReport } from "./trust/trust-report.js";
+export { TRUST_REPORT_DEFAULT_CAUTION } from "./trust/trust-report-caution.js";
 export type { TrustFigureData, TrustReport } from "./trust/trust-report.js";
 // Gaussian-process surrogate, scaling, linear algebra and the model file (gp/, scaling/, linalg/, model-file/)
 export { createInputScaling, inputSpan, scaleInputs } from "./scaling/input-scaling.js";

@@ -33,9 +33,9 @@ export async function main(argv: readonly string[], io?: Partial<CommandContext>
     },
   };
   const program = new Command("floorcast")
-    .description(
-      `Fast, validated surrogates of an exact floor-area (massing) calculation.\n${FLOORCAST_CAUTION}`,
-    )
+    .description("Fast, validated surrogates of an exact floor-area (massing) calculation.")
+    // every help page (the top level's and each command's) ends with the one caution, once
+    .addHelpText("afterAll", `\n${FLOORCAST_CAUTION}`)
     .version(CLI_VERSION, "-V, --version", "print the version of floorcast and exit")
     .exitOverride()
     .configureOutput({

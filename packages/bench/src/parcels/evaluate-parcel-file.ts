@@ -1,4 +1,4 @@
-import { DATASET_CAUTION, evaluateMassing } from "@floorcast/sampler";
+import { evaluateMassing, FLOORCAST_CAUTION } from "@floorcast/sampler";
 import type { LotLine, MassingInput, MassingResult, Point } from "@floorcast/sampler";
 import { inferLotLines } from "./infer-lot-lines.js";
 import type { StreetLine } from "./infer-lot-lines.js";
@@ -205,7 +205,7 @@ export function evaluateParcelFile(collection: unknown, options: ParcelFileOptio
   const { features: _drop, ...members } = fc;
   void _drop;
   return {
-    collection: { ...members, fc_caution: DATASET_CAUTION, features: [...features, ...plateFeatures] },
+    collection: { ...members, fc_caution: FLOORCAST_CAUTION, features: [...features, ...plateFeatures] },
     evaluated,
     failed,
   };

@@ -1,10 +1,6 @@
 import { z } from "zod";
 import { inputSchemaEntrySchema } from "../space/input-schema.js";
 
-/** Shown in every manifest: what the numbers are and are not. */
-export const DATASET_CAUTION =
-  "Estimates for early feasibility studies, not a zoning determination; local codes and licensed professionals decide.";
-
 const sha = z.string().regex(/^[0-9a-f]{64}$/, "must be a hex SHA-256");
 const count = z.number().int().nonnegative();
 
@@ -12,6 +8,7 @@ const count = z.number().int().nonnegative();
 export const datasetManifestSchema = z.strictObject({
   kind: z.literal("floorcast.dataset-manifest"),
   formatVersion: z.literal(1),
+  /** The caution (FLOORCAST_CAUTION when written by floorcast). */
   caution: z.string(),
   scenario: z.strictObject({ name: z.string(), file: z.string(), sha256: sha }),
   design: z.string(),

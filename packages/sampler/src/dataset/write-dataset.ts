@@ -6,7 +6,8 @@ import type { DesignKind } from "../design/create-design.js";
 import type { Evaluator, EvaluatorFunction } from "../evaluator/evaluator.js";
 import { resolveEvaluator } from "../evaluator/resolve-evaluator.js";
 import type { Scenario } from "../scenario/scenario.js";
-import { DATASET_CAUTION, type DatasetManifest } from "./dataset-manifest.js";
+import type { DatasetManifest } from "./dataset-manifest.js";
+import { FLOORCAST_CAUTION } from "../floorcast-caution.js";
 import { formatManifest } from "./format-manifest.js";
 import { inputSchemaOf } from "../space/input-schema.js";
 import { manifestPathFor } from "./manifest-path-for.js";
@@ -152,7 +153,7 @@ async function writeClaimed(scenario: Scenario, options: WriteDatasetOptions, cl
   const manifest: DatasetManifest = {
     kind: "floorcast.dataset-manifest",
     formatVersion: 1,
-    caution: DATASET_CAUTION,
+    caution: FLOORCAST_CAUTION,
     ...settings,
     columns: header,
     inputSchema: inputSchemaOf(scenario.parameters),

@@ -9,6 +9,7 @@ import type { LearningCurve } from "./learning-curve.js";
 import { metricsByRegime } from "./metrics-by-regime.js";
 import { collectDiagnostics, type TrustDiagnostics } from "./model-diagnostics.js";
 import { regressionMetrics, type RegressionMetrics } from "./regression-metrics.js";
+import { TRUST_REPORT_DEFAULT_CAUTION } from "./trust-report-caution.js";
 import type { ValidityDomain } from "./validity-domain.js";
 
 /** The trust report's JSON (kind "floorcast.trust-report", formatVersion 1). NaN values serialise as null. */
@@ -64,9 +65,8 @@ export interface TrustFigureData {
   readonly sd: readonly number[] | null;
 }
 
-const CAUTION =
-  "These are estimates for early feasibility studies, not a zoning determination: local codes and licensed professionals decide. " +
-  "A surrogate approximates the exact floor-area rule; re-check any design you act on with the exact evaluator.";
+/** The remark every trust report ends its notes with. */
+const SURROGATE_REMARK = "A surrogate approximates the exact floor-area rule; re-check any design you act on with the exact evaluator.";
 
 /**
  * Builds the trust report of a surrogate on an independent test set: metrics, metrics by regime,
@@ -83,6 +83,8 @@ const CAUTION =
  * @param args.design - training design quality (min distance, centred discrepancy) for the diagnostics.
  * @param args.sources - file names for the record.
  * @param args.notes - the caller's remarks, placed first in `notes`.
+ * @param args.caution - the caution the report carries (floorcast passes FLOORCAST_CAUTION of `@floorcast/sampler`);
+ *   default TRUST_REPORT_DEFAULT_CAUTION, the same text.
  * @returns the report and the figure data.
  */
 export function buildTrustReport(args: {
@@ -98,6 +100,7 @@ export function buildTrustReport(args: {
   design?: { minDistance?: number | null; centredDiscrepancy?: number | null };
   sources?: { model?: string; data?: string };
   notes?: readonly string[];
+  caution?: string;
 }): { report: TrustReport; figures: TrustFigureData } {
   const fn = "buildTrustReport";
   const { model, target } = args;
@@ -107,6 +110,9 @@ export function buildTrustReport(args: {
   checkMatrix(fn, "x", args.x, model.inputs.length);
   const y = checkVector(fn, "y", args.y, args.x.length);
   if (y.length === 0) throw new RangeError(`${fn}: the test set must have at least one row`);
+  const caution = args.caution ?? TRUST_REPORT_DEFAULT_CAUTION;
+  if (typeof caution !== "string") throw new TypeError(`${fn}: caution must be a string`);
+  if (caution.trim().length === 0) throw new RangeError(`${fn}: caution must not be empty`);
   const notes: string[] = [...(args.notes ?? [])];
   const pred = model.predict(args.x);
   const mean = pred.mean.map((r) => r[j]!);
@@ -152,10 +158,11 @@ export function buildTrustReport(args: {
       metricsOutside: pick([...check.outside]),
     };
   } else notes.push("Domain of validity unknown: the model carries none and no training data was given.");
+  notes.push(SURROGATE_REMARK);
   const report: TrustReport = {
     kind: "floorcast.trust-report",
     formatVersion: 1,
-    caution: CAUTION,
+    caution,
     model: { kind: model.kind, inputs: [...model.inputs], targets: [...model.targets], source: args.sources?.model ?? null },
     target,
     data: { n: y.length, source: args.sources?.data ?? null },

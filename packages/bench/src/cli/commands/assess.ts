@@ -142,6 +142,7 @@ async function runAssess(opts: AssessOptions, ctx: CommandContext): Promise<void
     ...(design ? { design } : {}),
     sources: { model: basename(opts.model), data: basename(opts.data) },
     notes,
+    caution: FLOORCAST_CAUTION,
   });
   await claim.put(join(opts.out, "report.json"), JSON.stringify(report, null, 2) + "\n");
   // the renderers (and the chart packages) load only when a report is written

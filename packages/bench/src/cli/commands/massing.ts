@@ -60,8 +60,7 @@ export function registerMassingCommand(program: Command, ctx: CommandContext): v
   program
     .command("massing")
     .description(
-      "Evaluate the exact massing rule on JSON Lines of massing inputs (one result line per input line). " +
-        "Estimates for early feasibility studies, not a zoning determination.",
+      "Evaluate the exact massing rule on JSON Lines of massing inputs (one result line per input line; the caution goes to stderr).",
     )
     .option("--input <file>", "read JSON Lines from this file instead of stdin (- is stdin)")
     .option("--plates", "include the floor plates (polygons, floor by floor) in each result")

@@ -30,8 +30,7 @@ interface ParcelsOptions {
 export function registerParcelsCommand(program: Command, ctx: CommandContext): void {
   withParcelFileOptions(program.command("parcels"))
     .description(
-      "Evaluate the massing rule on the parcels of a GeoJSON file; write GeoJSON with the results as properties. " +
-        "Estimates for early feasibility studies, not a zoning determination.",
+      "Evaluate the massing rule on the parcels of a GeoJSON file; write GeoJSON with the results as properties.",
     )
     .requiredOption("--out <result.geojson>", "GeoJSON to write")
     .option("--plates", "add every parcel's floor plates as Polygon features")

@@ -47,7 +47,7 @@ export function registerRankParcelsCommand(program: Command, ctx: CommandContext
   withParcelFileOptions(program.command("rank-parcels"))
     .description(
       "Rank the parcels of a GeoJSON file by their best achievable objective, exactly and with a surrogate trained across parcels; " +
-        "write GeoJSON with rank and capacity properties and a JSON/Markdown summary. Estimates for early feasibility studies, not a zoning determination.",
+        "write GeoJSON with rank and capacity properties and a JSON/Markdown summary.",
     )
     .requiredOption("--out <ranked.geojson>", "GeoJSON to write: every feature with its massing, rank and capacity properties")
     .requiredOption("--summary <name>", "writes <name>.json and <name>.md")
