@@ -41,6 +41,43 @@ function inset(s: Stage, h: number, extent: number): Stage {
 }
 
 /**
+ * The offset of `cur` between 0 (area above the target) and `h` (area `below.area` under it) whose area
+ * is within `tol` of the target. A(δ) is decreasing and convex with A′ = −P (see solveCoveragePieces),
+ * so a Newton step from the low end (area A₀, perimeter P₀), δ + (A₀ − target) / P₀, stays at or
+ * below the root, and the chord through the two ends hits the target at or above it. Each step offsets
+ * `cur` by the Newton point, or by the chord's point when the last Newton step did not halve the bracket,
+ * or by the midpoint when either falls outside the bracket (round-off); the bracket end on the same side
+ * of the target moves there. Converges in a few steps where bisection needs about forty. When the bracket
+ * shrinks to round-off without reaching the target (A steps there), the end nearer the target is returned.
+ */
+function refine(cur: Stage, h: number, below: Stage, target: number, tol: number, extent: number): Float64Array[] {
+  let lo = 0;
+  let loStage = cur;
+  let hi = h;
+  let hiStage = below;
+  let chord = false;
+  for (let b = 0; b < 200; b++) {
+    const over = loStage.area - target;
+    let x = chord ? lo + (over * (hi - lo)) / (loStage.area - hiStage.area) : lo + over / loStage.perimeter;
+    if (!(x > lo && x < hi)) x = (lo + hi) / 2;
+    const width = hi - lo;
+    const next = inset(cur, x, extent);
+    if (Math.abs(next.area - target) <= tol) return next.pieces;
+    if (next.area > target) {
+      lo = x;
+      loStage = next;
+    } else {
+      hi = x;
+      hiStage = next;
+    }
+    if (width <= 1e-15 * (1 + hi)) break;
+    chord = !chord && hi - lo > width / 2;
+  }
+  // The bracket closed on a step of A (the float vertex recovery of a near-degenerate offset): the end nearer the target.
+  return loStage.area - target <= target - hiStage.area ? loStage.pieces : hiStage.pieces;
+}
+
+/**
  * The coverage cap on a buildable area of one or more pieces: one uniform inward offset δ of every
  * edge of every piece, with mitred corners (see mitreInset), solved so that the total area equals
  * `target` to within `tolerance`.
@@ -53,7 +90,8 @@ function inset(s: Stage, h: number, extent: number): Stage {
  * lands on the root. A(δ) is decreasing and convex (A′ = −P, and P shrinks; derived), so when an edge
  * vanishes within a step the quadratic (which keeps the vanished edge at negative length) stays at
  * or below A and the step stops short of the root; the next step starts from there. A step that
- * overshoots anyway (below the target) is bisected back from the last offset above it.
+ * overshoots anyway (below the target) is refined from the last offset above it by safeguarded Newton
+ * and chord steps (see refine).
  * @param pieces - counter-clockwise simple rings of the buildable area, total area > target.
  * @param target - wanted area (> 0).
  * @param tolerance - allowed |area − target|.
@@ -75,20 +113,8 @@ export function solveCoveragePieces(
     // step when the quadratic has no root (its minimum is above the target).
     let h = disc >= 0 ? (2 * f) / (cur.perimeter + Math.sqrt(disc)) : f / cur.perimeter;
     if (!(h > 0) || !Number.isFinite(h)) return cur.pieces;
-    let next = inset(cur, h, extent);
-    if (next.area < target - tolerance * 1e-3) {
-      // Overshoot: bisect h back between the current offset (above the target) and this one.
-      let lo = 0;
-      let hi = h;
-      for (let b = 0; b < 200; b++) {
-        const mid = (lo + hi) / 2;
-        next = inset(cur, mid, extent);
-        if (Math.abs(next.area - target) <= tolerance * 1e-3 || hi - lo <= 1e-15 * (1 + hi)) return next.pieces;
-        if (next.area > target) lo = mid;
-        else hi = mid;
-      }
-      return next.pieces;
-    }
+    const next = inset(cur, h, extent);
+    if (next.area < target - tolerance * 1e-3) return refine(cur, h, next, target, tolerance * 1e-3, extent);
     cur = next;
   }
   return cur.pieces;
