@@ -34,6 +34,12 @@ function stage(pieces: Float64Array[]): Stage {
   return { pieces, convex: pieces.map(ringIsConvex), area, perimeter, turn };
 }
 
+/** Smaller root h of turn·h² − P·h + over = 0 (the stage's area model; see solveCoveragePieces), or the Newton step over / P when it has none. */
+function quadraticStep(s: Stage, over: number): number {
+  const disc = s.perimeter * s.perimeter - 4 * s.turn * over;
+  return disc >= 0 ? (2 * over) / (s.perimeter + Math.sqrt(disc)) : over / s.perimeter;
+}
+
 function inset(s: Stage, h: number, extent: number): Stage {
   const out: Float64Array[] = [];
   for (let p = 0; p < s.pieces.length; p++) mitreInset(s.pieces[p]!, s.convex[p]!, h, extent, out);
@@ -58,7 +64,7 @@ function refine(cur: Stage, h: number, below: Stage, target: number, tol: number
   let chord = false;
   for (let b = 0; b < 200; b++) {
     const over = loStage.area - target;
-    let x = chord ? lo + (over * (hi - lo)) / (loStage.area - hiStage.area) : lo + over / loStage.perimeter;
+    let x = chord ? lo + (over * (hi - lo)) / (loStage.area - hiStage.area) : lo + quadraticStep(loStage, over);
     if (!(x > lo && x < hi)) x = (lo + hi) / 2;
     const width = hi - lo;
     const next = inset(cur, x, extent);
@@ -108,10 +114,9 @@ export function solveCoveragePieces(
   for (let stepNo = 0; stepNo < MAX_STEPS; stepNo++) {
     const f = cur.area - target;
     if (f <= tolerance * 1e-3) return cur.pieces;
-    const disc = cur.perimeter * cur.perimeter - 4 * cur.turn * f;
     // Smaller root of turn·h² − P·h + f = 0, written to stay accurate for any sign of turn; a Newton
     // step when the quadratic has no root (its minimum is above the target).
-    let h = disc >= 0 ? (2 * f) / (cur.perimeter + Math.sqrt(disc)) : f / cur.perimeter;
+    const h = quadraticStep(cur, f);
     if (!(h > 0) || !Number.isFinite(h)) return cur.pieces;
     const next = inset(cur, h, extent);
     if (next.area < target - tolerance * 1e-3) return refine(cur, h, next, target, tolerance * 1e-3, extent);
