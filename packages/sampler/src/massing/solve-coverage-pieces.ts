@@ -50,11 +50,13 @@ function inset(s: Stage, h: number, extent: number): Stage {
  * The offset of `cur` between 0 (area above the target) and `h` (area `below.area` under it) whose area
  * is within `tol` of the target. A(δ) is decreasing and convex with A′ = −P (see solveCoveragePieces),
  * so a Newton step from the low end (area A₀, perimeter P₀), δ + (A₀ − target) / P₀, stays at or
- * below the root, and the chord through the two ends hits the target at or above it. Each step offsets
- * `cur` by the Newton point, or by the chord's point when the last Newton step did not halve the bracket,
- * or by the midpoint when either falls outside the bracket (round-off); the bracket end on the same side
- * of the target moves there. Converges in a few steps where bisection needs about forty. When the bracket
- * shrinks to round-off without reaching the target (A steps there), the end nearer the target is returned.
+ * below the root, and the chord through the two ends hits the target at or above it. The first step
+ * from a new low end takes its quadratic area model's root (exact when no edge vanishes on the way),
+ * later ones Newton's; every other step, when the last one did not halve the bracket, takes the chord's
+ * point, and the midpoint when a point falls outside the bracket (round-off). Each step offsets the
+ * low end's offset (offsets compose, as in the main loop), so once past the edge that vanished the
+ * steps are mostly plain moved-line rings, not Clipper2 differences. When the bracket shrinks to
+ * round-off without reaching the target (A steps there), the end nearer the target is returned.
  */
 function refine(cur: Stage, h: number, below: Stage, target: number, tol: number, extent: number): Float64Array[] {
   let lo = 0;
@@ -62,16 +64,24 @@ function refine(cur: Stage, h: number, below: Stage, target: number, tol: number
   let hi = h;
   let hiStage = below;
   let chord = false;
+  // The quadratic step from `cur` is `h`, which overshot.
+  let triedQuadratic = true;
   for (let b = 0; b < 200; b++) {
     const over = loStage.area - target;
-    let x = chord ? lo + (over * (hi - lo)) / (loStage.area - hiStage.area) : lo + quadraticStep(loStage, over);
+    let x: number;
+    if (chord) x = lo + (over * (hi - lo)) / (loStage.area - hiStage.area);
+    else if (!triedQuadratic) {
+      x = lo + quadraticStep(loStage, over);
+      triedQuadratic = true;
+    } else x = lo + over / loStage.perimeter;
     if (!(x > lo && x < hi)) x = (lo + hi) / 2;
     const width = hi - lo;
-    const next = inset(cur, x, extent);
+    const next = inset(loStage, x - lo, extent);
     if (Math.abs(next.area - target) <= tol) return next.pieces;
     if (next.area > target) {
       lo = x;
       loStage = next;
+      triedQuadratic = false;
     } else {
       hi = x;
       hiStage = next;
