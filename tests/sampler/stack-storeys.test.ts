@@ -36,7 +36,7 @@ function stack(
   return s;
 }
 
-describe("stackStoreys (step 3 of the massing rule, shared by both paths)", () => {
+describe("stackStoreys (step 3 of the massing rule on simple lots)", () => {
   it("stops at the height limit: 3 m storeys under 10 m give 3 floors (derived: 9 ≤ 10 < 12)", () => {
     const s = stack(() => 50);
     expect(stackStoreys(s)).toEqual({ floors: 3, gfa: 150, footprintArea: 50, facadeLength: 42, limitedBy: "height" });

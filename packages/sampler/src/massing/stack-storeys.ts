@@ -33,10 +33,13 @@ export interface StackedStoreys {
 }
 
 /**
- * Step 3 of the massing rule, shared by the convex and the simple-lot paths: storeys k = 1, 2, … with
- * top z = k × floorHeight are stacked while z ≤ maxHeight (+1e-9 m), B is not empty, the storey's plate
- * passes (area and width tests, applied by the path) and the GFA stays within the FAR cap; the first
- * test that fails names `limitedBy` (README, "The massing rule (version 1)").
+ * Step 3 of the massing rule on simple lots: storeys k = 1, 2, … with top z = k × floorHeight are
+ * stacked while z ≤ maxHeight (+1e-9 m), B is not empty, the storey's plate passes (area and width
+ * tests, applied by the path) and the GFA stays within the FAR cap; the first test that fails names
+ * `limitedBy` (README, "The massing rule (version 1)"). The convex path in evaluateMassing keeps the
+ * same loop written inline: calling this function from there measured 6–13 % slower on convex lots,
+ * so a change to the stopping rule must be made in both (tests/sampler/massing-simple-lots.test.ts
+ * checks that the two paths agree on convex lots).
  * @param s - the limits and the storey plates.
  * @returns floors built, their GFA, floor 1's area and facade length, and what stopped the stack.
  */
