@@ -37,16 +37,7 @@ export interface LotFrame {
 /** Relative tolerance under which a turn counts as straight (neither convex nor re-entrant). */
 const STRAIGHT = 1e-12;
 
-interface FrameBuffers {
-  readonly ux: Float64Array;
-  readonly uy: Float64Array;
-  readonly len: Float64Array;
-  readonly nx: Float64Array;
-  readonly ny: Float64Array;
-  readonly c: Float64Array;
-  readonly reflexStart: Uint8Array;
-  readonly reflexEnd: Uint8Array;
-}
+type FrameBuffers = Pick<LotFrame, "ux" | "uy" | "len" | "nx" | "ny" | "c" | "reflexStart" | "reflexEnd">;
 
 /** Per-edge arrays by vertex count, reused from one evaluation to the next (one evaluation at a time). */
 const buffers = new Map<number, FrameBuffers>();
