@@ -88,6 +88,21 @@ function onIntersection(b1: Point64, t1: Point64, b2: Point64, t2: Point64, ip: 
   ip.z = store(x, y);
 }
 
+/** Whether b is a zero-width spike between a and c (or a repeated vertex); see dropSpikes. */
+function isSpike(ax: number, ay: number, bx: number, by: number, cx: number, cy: number, tol: number): boolean {
+  const ex = bx - ax;
+  const ey = by - ay;
+  const fx2 = cx - bx;
+  const fy2 = cy - by;
+  if ((ex === 0 && ey === 0) || (fx2 === 0 && fy2 === 0)) return true;
+  if (ex * fx2 + ey * fy2 >= 0) return false;
+  // Distance from the shorter edge's far end to the longer edge's line.
+  const le = Math.hypot(ex, ey);
+  const lf = Math.hypot(fx2, fy2);
+  const dist = le <= lf ? Math.abs(fx2 * (ay - by) - fy2 * (ax - bx)) / lf : Math.abs(ex * (cy - by) - ey * (cx - bx)) / le;
+  return dist <= tol;
+}
+
 /**
  * Removes the rounding's zero-width spikes from a ring: a vertex where the ring folds back on itself
  * (its two edges opposite, the shorter one's far end within `tol` of the longer one's line), and repeated
@@ -96,26 +111,21 @@ function onIntersection(b1: Point64, t1: Point64, b2: Point64, t2: Point64, ip: 
  */
 function dropSpikes(ring: Float64Array, tol: number): Float64Array {
   const m = ring.length >> 1;
+  // Usually there is none: no removal can start unless some cyclic triple of the ring is a spike.
+  let any = false;
+  for (let i = 0; i < m && !any; i++) {
+    const a = i === 0 ? m - 1 : i - 1;
+    const b = i + 1 === m ? 0 : i + 1;
+    any = isSpike(ring[2 * a]!, ring[2 * a + 1]!, ring[2 * i]!, ring[2 * i + 1]!, ring[2 * b]!, ring[2 * b + 1]!, tol);
+  }
+  if (!any) return ring;
   const xs: number[] = [];
   const ys: number[] = [];
-  const spike = (ax: number, ay: number, bx: number, by: number, cx: number, cy: number): boolean => {
-    const ex = bx - ax;
-    const ey = by - ay;
-    const fx2 = cx - bx;
-    const fy2 = cy - by;
-    if ((ex === 0 && ey === 0) || (fx2 === 0 && fy2 === 0)) return true;
-    if (ex * fx2 + ey * fy2 >= 0) return false;
-    // Distance from the shorter edge's far end to the longer edge's line.
-    const le = Math.hypot(ex, ey);
-    const lf = Math.hypot(fx2, fy2);
-    const dist = le <= lf ? Math.abs(fx2 * (ay - by) - fy2 * (ax - bx)) / lf : Math.abs(ex * (cy - by) - ey * (cx - bx)) / le;
-    return dist <= tol;
-  };
   for (let i = 0; i < m; i++) {
     xs.push(ring[2 * i]!);
     ys.push(ring[2 * i + 1]!);
     let k = xs.length;
-    while (k >= 3 && spike(xs[k - 3]!, ys[k - 3]!, xs[k - 2]!, ys[k - 2]!, xs[k - 1]!, ys[k - 1]!)) {
+    while (k >= 3 && isSpike(xs[k - 3]!, ys[k - 3]!, xs[k - 2]!, ys[k - 2]!, xs[k - 1]!, ys[k - 1]!, tol)) {
       xs.splice(k - 2, 1);
       ys.splice(k - 2, 1);
       k--;
@@ -126,11 +136,11 @@ function dropSpikes(ring: Float64Array, tol: number): Float64Array {
   while (changed && xs.length >= 3) {
     changed = false;
     const k = xs.length;
-    if (spike(xs[k - 2]!, ys[k - 2]!, xs[k - 1]!, ys[k - 1]!, xs[0]!, ys[0]!)) {
+    if (isSpike(xs[k - 2]!, ys[k - 2]!, xs[k - 1]!, ys[k - 1]!, xs[0]!, ys[0]!, tol)) {
       xs.pop();
       ys.pop();
       changed = true;
-    } else if (spike(xs[k - 1]!, ys[k - 1]!, xs[0]!, ys[0]!, xs[1]!, ys[1]!)) {
+    } else if (isSpike(xs[k - 1]!, ys[k - 1]!, xs[0]!, ys[0]!, xs[1]!, ys[1]!, tol)) {
       xs.shift();
       ys.shift();
       changed = true;

@@ -19,6 +19,9 @@ function segmentsMeet(xy: Float64Array, a: number, b: number, c: number, d: numb
   const cy = xy[2 * c + 1]!;
   const dx = xy[2 * d]!;
   const dy = xy[2 * d + 1]!;
+  // Bounding boxes strictly apart: no common point (exact comparisons, no rounding).
+  if (Math.max(ax, bx) < Math.min(cx, dx) || Math.max(cx, dx) < Math.min(ax, bx)) return false;
+  if (Math.max(ay, by) < Math.min(cy, dy) || Math.max(cy, dy) < Math.min(ay, by)) return false;
   const o1 = orient(ax, ay, bx, by, cx, cy);
   const o2 = orient(ax, ay, bx, by, dx, dy);
   const o3 = orient(cx, cy, dx, dy, ax, ay);

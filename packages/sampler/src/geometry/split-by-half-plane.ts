@@ -1,5 +1,9 @@
 let ts = new Float64Array(32);
 let order: number[] = [];
+/** Arc coordinates, one arc after another (reused from call to call). */
+let pts = new Float64Array(64);
+/** Start and end (exclusive) of arc j in `pts`: arcAt[2j], arcAt[2j + 1]. */
+let arcAt = new Int32Array(32);
 
 /**
  * Intersects a counter-clockwise simple ring with the closed half-plane a·x + b·y ≥ c and returns the
@@ -30,8 +34,12 @@ export function splitByHalfPlane(ring: Float64Array, a: number, b: number, c: nu
     return true;
   }
   if (inside === 0) return true;
-  const arcs: number[][] = [];
-  let cur: number[] | null = null;
+  // Every vertex once, plus at most two crossings per arc (at most m arcs).
+  if (pts.length < 6 * m) pts = new Float64Array(12 * m);
+  if (arcAt.length < 2 * m) arcAt = new Int32Array(4 * m);
+  let k = 0;
+  let w = 0;
+  let arcStart = -1;
   let pi = start;
   let px = ring[2 * pi]!;
   let py = ring[2 * pi + 1]!;
@@ -44,42 +52,49 @@ export function splitByHalfPlane(ring: Float64Array, a: number, b: number, c: nu
     const pin = pd >= -eps;
     const qin = qd >= -eps;
     if (!pin && qin) {
-      cur = [];
+      arcStart = w;
       if (qd > eps) {
         const t = pd / (pd - qd);
-        cur.push(px + t * (qx - px), py + t * (qy - py));
+        pts[w++] = px + t * (qx - px);
+        pts[w++] = py + t * (qy - py);
       }
-      cur.push(qx, qy);
+      pts[w++] = qx;
+      pts[w++] = qy;
     } else if (pin && qin) {
-      cur!.push(qx, qy);
+      pts[w++] = qx;
+      pts[w++] = qy;
     } else if (pin && !qin) {
       if (pd > eps) {
         const t = pd / (pd - qd);
-        cur!.push(px + t * (qx - px), py + t * (qy - py));
+        pts[w++] = px + t * (qx - px);
+        pts[w++] = py + t * (qy - py);
       }
       // An arc that never leaves the line has no area.
       let deep = false;
-      for (let k = 0; k < cur!.length && !deep; k += 2) deep = a * cur![k]! + b * cur![k + 1]! - c > eps;
-      if (deep) arcs.push(cur!);
-      cur = null;
+      for (let v = arcStart; v < w && !deep; v += 2) deep = a * pts[v]! + b * pts[v + 1]! - c > eps;
+      if (deep) {
+        arcAt[2 * k] = arcStart;
+        arcAt[2 * k + 1] = w;
+        k++;
+      } else w = arcStart;
     }
     px = qx;
     py = qy;
     pd = qd;
   }
-  const k = arcs.length;
   if (k === 0) return true;
   if (k === 1) {
-    out.push(Float64Array.from(arcs[0]!));
+    out.push(pts.slice(arcAt[0]!, arcAt[1]!));
     return true;
   }
   // Positions along the line: entry of arc j at 2j, exit at 2j + 1.
   if (ts.length < 2 * k) ts = new Float64Array(4 * k);
   order = [];
   for (let j = 0; j < k; j++) {
-    const arc = arcs[j]!;
-    ts[2 * j] = b * arc[0]! - a * arc[1]!;
-    ts[2 * j + 1] = b * arc[arc.length - 2]! - a * arc[arc.length - 1]!;
+    const s0 = arcAt[2 * j]!;
+    const s1 = arcAt[2 * j + 1]!;
+    ts[2 * j] = b * pts[s0]! - a * pts[s0 + 1]!;
+    ts[2 * j + 1] = b * pts[s1 - 2]! - a * pts[s1 - 1]!;
     order.push(2 * j, 2 * j + 1);
   }
   order.sort((p, q) => ts[p]! - ts[q]!);
@@ -94,15 +109,23 @@ export function splitByHalfPlane(ring: Float64Array, a: number, b: number, c: nu
   const pieces: Float64Array[] = [];
   for (let j = 0; j < k; j++) {
     if (used[j] === 1) continue;
-    const pts: number[] = [];
+    let size = 0;
     let arc = j;
     while (used[arc] === 0) {
       used[arc] = 1;
-      for (const v of arcs[arc]!) pts.push(v);
+      size += arcAt[2 * arc + 1]! - arcAt[2 * arc]!;
       arc = next[arc]!;
     }
     if (arc !== j) return false;
-    pieces.push(Float64Array.from(pts));
+    const piece = new Float64Array(size);
+    let o = 0;
+    arc = j;
+    do {
+      piece.set(pts.subarray(arcAt[2 * arc]!, arcAt[2 * arc + 1]!), o);
+      o += arcAt[2 * arc + 1]! - arcAt[2 * arc]!;
+      arc = next[arc]!;
+    } while (arc !== j);
+    pieces.push(piece);
   }
   for (const p of pieces) out.push(p);
   return true;

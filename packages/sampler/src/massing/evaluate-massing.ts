@@ -160,7 +160,8 @@ export function evaluateMassing(input: MassingInput, options?: EvaluateMassingOp
     coverageCapped = true;
   }
 
-  // Step 3: floors.
+  // Step 3: floors. The same loop as stackStoreys (the simple-lot path's), kept inline here: calling it
+  // measured 6–13 % slower on convex lots.
   const limits: PlateLimits = {
     emptyArea: areaTol,
     minArea: (input.minPlateArea ?? 0) - areaTol,

@@ -5,9 +5,10 @@ import { polygonWidth } from "../geometry/polygon-width.js";
 import { ringArea, ringIsConvex, ringPerimeter } from "../geometry/ring-metrics.js";
 import { lotFrame } from "./lot-frame.js";
 import { massingTotals } from "./massing-totals.js";
-import type { LimitedBy, MassingInput, MassingResult, Point, StoreyPlate } from "./massing-types.js";
+import type { MassingInput, MassingResult, Point, StoreyPlate } from "./massing-types.js";
 import { skyCutPieces } from "./sky-cut-pieces.js";
 import { solveCoveragePieces } from "./solve-coverage-pieces.js";
+import { stackStoreys } from "./stack-storeys.js";
 import { yardPieces } from "./yard-pieces.js";
 
 /** Relative tolerance of the rule (as the convex path): areas 1e-9 × lot area, widths 1e-9 × √(lot area). */
@@ -146,44 +147,43 @@ export function evaluateSimpleLot(
     }
     return keptPieces(base, limits);
   };
-  let floors = 0;
-  let gfa = 0;
-  let footprintArea = 0;
-  let facadeLength = 0;
-  let limitedBy: LimitedBy;
-  for (let k = 1; ; k++) {
-    const z = k * floorHeight;
-    if (z > maxHeight + HEIGHT_TOL) {
-      limitedBy = "height";
-      break;
-    }
-    if (buildableArea <= areaTol) {
-      limitedBy = "setbacks";
-      break;
-    }
-    const plate = storeyPlate(z, limits);
-    if (plate.pieces.length === 0) {
-      limitedBy = "plate";
-      break;
-    }
-    if (gfa + plate.area > farCap) {
-      limitedBy = "far";
-      break;
-    }
-    gfa += plate.area;
-    floors = k;
-    if (k === 1) {
-      footprintArea = plate.area;
-      for (const r of plate.pieces) facadeLength += ringPerimeter(r);
-    }
-    if (plates !== undefined && plateFloors !== undefined) {
-      for (const r of plate.pieces) {
-        plates.push(toPoints(r, ox, oy));
-        plateFloors.push(k);
-      }
-    }
-  }
-  const result = massingTotals({ lotArea, buildableArea, footprintArea, floors, floorHeight, gfa, facadeLength, limitedBy, coverageCapped });
+  let last: Plate = { pieces: [], area: 0 };
+  const stack = stackStoreys({
+    floorHeight,
+    maxHeight,
+    buildableArea,
+    areaTol,
+    farCap,
+    plate(z) {
+      last = storeyPlate(z, limits);
+      return last.pieces.length === 0 ? -1 : last.area;
+    },
+    facade() {
+      let length = 0;
+      for (const r of last.pieces) length += ringPerimeter(r);
+      return length;
+    },
+    record:
+      plates === undefined || plateFloors === undefined
+        ? undefined
+        : (k) => {
+            for (const r of last.pieces) {
+              plates.push(toPoints(r, ox, oy));
+              plateFloors.push(k);
+            }
+          },
+  });
+  const result = massingTotals({
+    lotArea,
+    buildableArea,
+    footprintArea: stack.footprintArea,
+    floors: stack.floors,
+    floorHeight,
+    gfa: stack.gfa,
+    facadeLength: stack.facadeLength,
+    limitedBy: stack.limitedBy,
+    coverageCapped,
+  });
   const withPlates = plates === undefined ? result : { ...result, plates, plateFloors };
   if (!want.profile) return withPlates;
   // The profile: every storey the height limit allows, no plate or FAR test (every non-empty piece kept).

@@ -37,8 +37,33 @@ export interface LotFrame {
 /** Relative tolerance under which a turn counts as straight (neither convex nor re-entrant). */
 const STRAIGHT = 1e-12;
 
+type FrameBuffers = Pick<LotFrame, "ux" | "uy" | "len" | "nx" | "ny" | "c" | "reflexStart" | "reflexEnd">;
+
+/** Per-edge arrays by vertex count, reused from one evaluation to the next (one evaluation at a time). */
+const buffers = new Map<number, FrameBuffers>();
+
+function buffersFor(n: number): FrameBuffers {
+  let b = buffers.get(n);
+  if (b === undefined) {
+    b = {
+      ux: new Float64Array(n),
+      uy: new Float64Array(n),
+      len: new Float64Array(n),
+      nx: new Float64Array(n),
+      ny: new Float64Array(n),
+      c: new Float64Array(n),
+      reflexStart: new Uint8Array(n),
+      reflexEnd: new Uint8Array(n),
+    };
+    // Lots of up to 64 vertices keep their arrays; larger ones are rare and allocate each time.
+    if (n <= 64) buffers.set(n, b);
+  }
+  return b;
+}
+
 /**
- * Builds the frame of a simple lot.
+ * Builds the frame of a simple lot. The per-edge arrays are shared by every frame of the same vertex
+ * count: a frame is valid until the next call with that count (the evaluator uses one at a time).
  * @param xy - interleaved vertices (either orientation), already checked simple.
  * @param n - number of vertices.
  * @param lotLines - kind of edge i, in the order of `xy`.
@@ -46,6 +71,7 @@ const STRAIGHT = 1e-12;
  * @returns the frame.
  */
 export function lotFrame(xy: Float64Array, n: number, lotLines: readonly LotLine[], ccw: boolean): LotFrame {
+  const b = buffersFor(n);
   const v = new Float64Array(2 * n);
   const kinds: LotLine[] = new Array<LotLine>(n);
   for (let j = 0; j < n; j++) {
@@ -55,12 +81,7 @@ export function lotFrame(xy: Float64Array, n: number, lotLines: readonly LotLine
     // Reversed: new edge j runs from old vertex n−1−j to old vertex n−2−j, i.e. old edge n−2−j.
     kinds[j] = lotLines[ccw ? j : (2 * n - 2 - j) % n]!;
   }
-  const ux = new Float64Array(n);
-  const uy = new Float64Array(n);
-  const len = new Float64Array(n);
-  const nx = new Float64Array(n);
-  const ny = new Float64Array(n);
-  const c = new Float64Array(n);
+  const { ux, uy, len, nx, ny, c, reflexStart, reflexEnd } = b;
   let extent = 0;
   let minX = Infinity;
   let minY = Infinity;
@@ -85,8 +106,8 @@ export function lotFrame(xy: Float64Array, n: number, lotLines: readonly LotLine
     minY = Math.min(minY, py);
     maxY = Math.max(maxY, py);
   }
-  const reflexStart = new Uint8Array(n);
-  const reflexEnd = new Uint8Array(n);
+  reflexStart.fill(0);
+  reflexEnd.fill(0);
   for (let i = 0; i < n; i++) {
     const j = i + 1 === n ? 0 : i + 1;
     // Turn at vertex j from edge i to edge j: negative on a counter-clockwise ring = re-entrant.

@@ -65,9 +65,29 @@ export function skyCutPieces(f: LotFrame, base: readonly Float64Array[], streets
   return pieces;
 }
 
+/** Whether every vertex of `ring` is at least d − eps behind every street line (no street yard at depth d reaches inside it). */
+function behindEveryStreet(f: LotFrame, ring: Float64Array, streets: readonly number[], d: number): boolean {
+  for (const i of streets) {
+    const nx = f.nx[i]!;
+    const ny = f.ny[i]!;
+    const c = f.c[i]!;
+    for (let v = 0; v < ring.length; v += 2) if (nx * ring[v]! + ny * ring[v + 1]! - c < d - f.eps) return false;
+  }
+  return true;
+}
+
+/**
+ * base − street yards through Clipper2; base pieces wholly at least d behind every street line meet
+ * no yard's inside (a yard lies within d of its line) and are kept as they are, out of Clipper's work.
+ */
 function fullCut(f: LotFrame, base: readonly Float64Array[], streets: readonly number[], d: number): Float64Array[] {
   const yards: Float64Array[] = [];
   for (const i of streets) yardPieces(f, i, d, yards);
   if (yards.length === 0) return base.slice();
-  return exactClip("difference", base, yards, f.extent);
+  const kept: Float64Array[] = [];
+  const cut: Float64Array[] = [];
+  for (const ring of base) (behindEveryStreet(f, ring, streets, d) ? kept : cut).push(ring);
+  if (cut.length === 0) return kept;
+  for (const r of exactClip("difference", cut, yards, f.extent)) kept.push(r);
+  return kept;
 }
