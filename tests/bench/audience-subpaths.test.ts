@@ -6,7 +6,7 @@ import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import * as bench from "@floorcast/bench";
 
-// Importing the optimisers or the problem contract must not load the CLI parser, the chart packages, the progress
+// Importing the optimizers or the problem contract must not load the CLI parser, the chart packages, the progress
 // bars or tfjs: the loaded modules are recorded by a loader hook in a child process.
 
 const root = fileURLToPath(new URL("../../", import.meta.url));

@@ -40,7 +40,7 @@ function trial(surrogate: string, sampler: string, n: number, seed: number, gap:
     evaluations: n + 1,
     evaluationsBreakdown: { training: n, reevaluation: 1, refinement: refined ? 20 : 0, testSet: 200 },
     accuracy: [{ target: "gfa", rmse: 1, mae: 1, maxAbsError: 2, r2: 0.63, medianRelError: 0.01, p95RelError: 0.02 }] as never,
-    seconds: { sample: 0.1, fit: 0.2, assess: 0.1, optimise: 0.1, reevaluate: 0, refine: 0 },
+    seconds: { sample: 0.1, fit: 0.2, assess: 0.1, optimize: 0.1, reevaluate: 0, refine: 0 },
   };
 }
 

@@ -73,7 +73,7 @@ describe("floorcast optimize", () => {
     expect(Math.abs(o.optima[0].value - 0.39788735772973816)).toBeLessThan(1e-3);
     expect(o.exactEvaluations).toBe(o.evaluations);
   });
-  it("--surrogate optimises on a model file and reports the design's exact value", async () => {
+  it("--surrogate optimizes on a model file and reports the design's exact value", async () => {
     const x: number[][] = [];
     for (let i = 0; i <= 6; i++) for (let j = 0; j <= 6; j++) x.push([-5 + (15 * i) / 6, (15 * j) / 6]);
     const gp = fitGaussianProcess({ inputs: ["x1", "x2"], targets: ["f"], x, y: x.map((r) => [branin(r[0]!, r[1]!)]) }, { seed: 1 });

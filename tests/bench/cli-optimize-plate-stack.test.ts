@@ -14,7 +14,7 @@ const dir = mkdtempSync(join(tmpdir(), "floorcast-opt-plate-"));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
 describe("floorcast optimize --surrogate with a plate-stack model file", () => {
-  it("optimises larkspur-fit-gfa on the plate stack and reports an exactly re-evaluated optimum within 0.5% of 504 m²", async () => {
+  it("optimizes larkspur-fit-gfa on the plate stack and reports an exactly re-evaluated optimum within 0.5% of 504 m²", async () => {
     const file = join(DEFAULT_PROBLEMS_DIR, "larkspur-fit-gfa.json");
     const problem = await loadProblem(file);
     const train = await sampleTrainingSet(problem, 24, "train-7", dir);

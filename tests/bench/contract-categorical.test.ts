@@ -101,7 +101,7 @@ describe("sample → fit → optimize --surrogate on core-tower-gfa (a categoric
     const header = rows[0]!.split(",");
     const j = header.indexOf("floorHeight");
     const bad = rows[1]!.split(",");
-    bad[j] = "1"; // a level index, as the old optimiser coding fed it
+    bad[j] = "1"; // a level index, as the old optimizer coding fed it
     writeFileSync(join(dir, "bad.csv"), `${rows[0]}\n${bad.join(",")}\n`);
     const r = await runCli(["predict", "--model", join(dir, "gp.json"), "--data", join(dir, "bad.csv"), "--out", join(dir, "p.csv")]);
     expect(r.code).toBe(2);
@@ -137,7 +137,7 @@ describe("a log-scale parameter round-trips: scenario → manifest → model fil
     };
     writeFileSync(join(dir, "far-problem.json"), JSON.stringify(problem));
     const loaded = await loadProblem(join(dir, "far-problem.json"));
-    expect(loaded.optimisation.variables[0]).toEqual({ kind: "continuous", name: "maxFar", min: 3, max: 12, log: true });
+    expect(loaded.optimization.variables[0]).toEqual({ kind: "continuous", name: "maxFar", min: 3, max: 12, log: true });
     await ok(["optimize", "--problem", join(dir, "far-problem.json"), "--surrogate", join(dir, "far-gp.json"), "--budget", "200", "--out", join(dir, "far-out")]);
   }, 120_000);
 });

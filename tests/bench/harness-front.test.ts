@@ -2,12 +2,12 @@ import { describe, expect, it } from "vitest";
 import { frontHypervolume, frontReference } from "../../packages/bench/src/harness/front-hypervolume.js";
 import { frontEvaluationsToTarget } from "../../packages/bench/src/harness/front-evaluations-to-target.js";
 import { findExactOptimum } from "../../packages/bench/src/harness/find-exact-optimum.js";
-import type { Design, OptimisationProblem, Outputs } from "../../packages/bench/src/optimise/optimisation-problem.js";
+import type { Design, OptimizationProblem, Outputs } from "../../packages/bench/src/optimize/optimization-problem.js";
 import { problemDataset } from "../../packages/bench/src/problem/problem-dataset.js";
 import type { BenchProblem } from "../../packages/bench/src/problem/bench-problem.js";
 
 // maximise f1 = x and f2 = 1 − x² on x ∈ [0, 1]: every x is Pareto-optimal (derived)
-const op: OptimisationProblem = {
+const op: OptimizationProblem = {
   variables: [{ kind: "continuous", name: "x", min: 0, max: 1 }],
   objectives: [
     { output: "f1", sense: "max" },
@@ -24,7 +24,7 @@ const problem: BenchProblem = {
   suites: [],
   file: "",
   kind: "two-objective",
-  optimisation: op,
+  optimization: op,
   exact: { gridPoints: 101, refineEvaluations: 0 },
   outputs: ["f1", "f2"],
   trainingVariables: op.variables,
@@ -38,7 +38,7 @@ describe("front hypervolume and its reference point", () => {
   });
   it("the reference lies 10% of the front's range beyond its worst point in each objective (derived)", () => {
     expect(frontReference(op, [[1, 3], [2, 2], [3, 1]])).toEqual([0.8, 0.8]);
-    const min: OptimisationProblem = { ...op, objectives: op.objectives.map((o) => ({ ...o, sense: "min" as const })) };
+    const min: OptimizationProblem = { ...op, objectives: op.objectives.map((o) => ({ ...o, sense: "min" as const })) };
     expect(frontReference(min, [[1, 3], [3, 1]])).toEqual([3.2, 3.2]);
   });
   it("the exact front of the toy problem is the whole grid, and its hypervolume approaches the integral", async () => {

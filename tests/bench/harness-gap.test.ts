@@ -8,9 +8,9 @@ import { formatPercent } from "../../packages/bench/src/harness/format-percent.j
 import { reevaluateSurrogateOptimum } from "../../packages/bench/src/harness/reevaluate-surrogate-optimum.js";
 import { runSingleTrial } from "../../packages/bench/src/harness/run-single-trial.js";
 import { sampleTrainingSet } from "../../packages/bench/src/harness/sample-training-set.js";
-import { scoreOutputs } from "../../packages/bench/src/optimise/evaluation-session.js";
+import { scoreOutputs } from "../../packages/bench/src/optimize/evaluation-session.js";
 import type { Evaluator } from "@floorcast/sampler";
-import type { Design, OptimisationProblem, Outputs } from "../../packages/bench/src/optimise/optimisation-problem.js";
+import type { Design, OptimizationProblem, Outputs } from "../../packages/bench/src/optimize/optimization-problem.js";
 import type { BenchProblem } from "../../packages/bench/src/problem/bench-problem.js";
 import type { BenchTrainer } from "../../packages/bench/src/harness/bench-trainer.js";
 import { problemDataset } from "../../packages/bench/src/problem/problem-dataset.js";
@@ -47,7 +47,7 @@ describe("optimumGap", () => {
 });
 
 // A hand-made problem: maximise f = x subject to g = x ≤ 0.5, on x ∈ [0, 1].
-const problem: OptimisationProblem = {
+const problem: OptimizationProblem = {
   variables: [{ kind: "continuous", name: "x", min: 0, max: 1 }],
   objectives: [{ output: "f", sense: "max" }],
   constraints: [{ output: "g", op: "<=", value: 0.5 }],
@@ -108,7 +108,7 @@ describe("the harness never reports an exactly infeasible design as optimal", ()
       suites: [],
       file: "",
       kind: "single",
-      optimisation: problem,
+      optimization: problem,
       exact: { gridPoints: 11, refineEvaluations: 0 },
       outputs: ["f", "g"],
       trainingVariables: problem.variables,

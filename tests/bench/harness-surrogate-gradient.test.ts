@@ -1,8 +1,8 @@
-// The harness's surrogate evaluator passes a GP's analytic mean gradient on to gradient-based optimisers.
+// The harness's surrogate evaluator passes a GP's analytic mean gradient on to gradient-based optimizers.
 import { describe, expect, it } from "vitest";
 import { fitGaussianProcess } from "@floorcast/surrogate";
 import { createDesign } from "@floorcast/sampler";
-import { projectedGradient, surrogateEvaluator, type OptimisationProblem } from "@floorcast/bench";
+import { projectedGradient, surrogateEvaluator, type OptimizationProblem } from "@floorcast/bench";
 
 // Six-hump camel (Virtual Library of Simulation Experiments): minima −1.0316285 at ±(0.0898, −0.7127).
 const camel = (a: number, b: number): number => (4 - 2.1 * a * a + a ** 4 / 3) * a * a + a * b + (-4 + 4 * b * b) * b * b;
@@ -11,7 +11,7 @@ describe("surrogateEvaluator with an analytic gradient", () => {
   const unit = createDesign({ n: 50, dims: 2, design: "lhs-maximin", seed: 5 });
   const x = unit.map(([a, b]) => [-2 + 4 * a!, -1 + 2 * b!]);
   const gp = fitGaussianProcess({ inputs: ["a", "b"], targets: ["f"], x, y: x.map(([a, b]) => [camel(a!, b!)]) }, { seed: 3 });
-  const problem: OptimisationProblem = {
+  const problem: OptimizationProblem = {
     variables: [
       { kind: "continuous", name: "a", min: -2, max: 2 },
       { kind: "continuous", name: "b", min: -1, max: 1 },

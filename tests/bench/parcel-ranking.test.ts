@@ -201,7 +201,7 @@ describe("rankParcels on the Quillmere demo parcels (small budgets)", () => {
       const z = parcels[i]!.input;
       expect(p.zoneValue).toBe(evaluateMassing(z).gfa);
       // the zone's own controls are one design of the box (no extra yards, full shares, the zone's floor height)
-      // the optimiser may miss it, so only the optimum over the box is bounded: within 1% of it or above (measured 0.2%)
+      // the optimizer may miss it, so only the optimum over the box is bounded: within 1% of it or above (measured 0.2%)
       expect(p.exact!.value!).toBeGreaterThanOrEqual(0.99 * p.zoneValue!);
     }
   });
@@ -284,7 +284,7 @@ describe("rankParcels: bad options name the field", () => {
     [parcels, { route: "exact", budget: Number.NaN }, RangeError, /rankParcels: budget/],
     [parcels, { route: "exact", budget: "9" }, TypeError, /rankParcels: budget must be a number/],
     [parcels, { route: "exact", shortlist: 13 }, RangeError, /rankParcels: shortlist must be an integer in \[1, 12\]/],
-    [parcels, { route: "exact", optimizer: "nsga2" }, RangeError, /rankParcels: optimizer must optimise one objective/],
+    [parcels, { route: "exact", optimizer: "nsga2" }, RangeError, /rankParcels: optimizer must optimize one objective/],
     [parcels, { route: "surrogate" }, TypeError, /rankParcels: surrogate\.dir/],
     [parcels, { route: "exact", objective: { output: "limitedBy", sense: "max" } }, RangeError, /rankParcels: objective\.output must be one of lotArea/],
     [parcels, { route: "exact", objective: { output: "gfa", sense: "up" } }, RangeError, /rankParcels: objective\.sense must be max or min/],

@@ -10,7 +10,7 @@ import { floorcastTrainer } from "../../packages/bench/src/harness/floorcast-tra
 import { mkdtempSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { profiledExactEvaluator } from "../../packages/bench/src/harness/profiled-exact-evaluator.js";
-import { plateStackBayesianOptimisation } from "../../packages/bench/src/optimise/plate-stack-bayesian.js";
+import { plateStackBayesianOptimization } from "../../packages/bench/src/optimize/plate-stack-bayesian.js";
 import { sampleTrainingSet } from "../../packages/bench/src/harness/sample-training-set.js";
 
 const larkspur = await loadProblem(join(DEFAULT_PROBLEMS_DIR, "larkspur-fit-gfa.json"));
@@ -41,9 +41,9 @@ describe("plate-stack in the bench", () => {
   }, 600_000);
 });
 
-describe("Bayesian optimisation through the stacking rule", () => {
+describe("Bayesian optimization through the stacking rule", () => {
   it("reaches the larkspur optimum (504 m²) within 0.5% in at most 25 exact evaluations, the same way for a seed", async () => {
-    const run = () => plateStackBayesianOptimisation(larkspur.optimisation, profiledExactEvaluator(larkspur), { seed: 1, maxEvaluations: 25 });
+    const run = () => plateStackBayesianOptimization(larkspur.optimization, profiledExactEvaluator(larkspur), { seed: 1, maxEvaluations: 25 });
     const r = await run();
     const hit = r.trace.findIndex((v) => Number.isFinite(v) && (LARKSPUR_OPTIMUM - v) / LARKSPUR_OPTIMUM <= 0.005);
     expect(hit).toBeGreaterThanOrEqual(0);
@@ -52,8 +52,8 @@ describe("Bayesian optimisation through the stacking rule", () => {
   }, 600_000);
   it("refuses an evaluator without a plate profile and outputs the plate stack does not give", async () => {
     const plain = { evaluate: async (b: readonly Record<string, number | string>[]) => b.map((d) => larkspur.evaluate(d)) };
-    await expect(plateStackBayesianOptimisation(larkspur.optimisation, plain, { seed: 1, maxEvaluations: 12 })).rejects.toThrow(/reports no .*plate profile/);
-    const other = { ...larkspur.optimisation, objectives: [{ output: "facadeLength", sense: "max" as const }] };
-    await expect(plateStackBayesianOptimisation(other, profiledExactEvaluator(larkspur), { seed: 1, maxEvaluations: 12 })).rejects.toThrow(/facadeLength/);
+    await expect(plateStackBayesianOptimization(larkspur.optimization, plain, { seed: 1, maxEvaluations: 12 })).rejects.toThrow(/reports no .*plate profile/);
+    const other = { ...larkspur.optimization, objectives: [{ output: "facadeLength", sense: "max" as const }] };
+    await expect(plateStackBayesianOptimization(other, profiledExactEvaluator(larkspur), { seed: 1, maxEvaluations: 12 })).rejects.toThrow(/facadeLength/);
   });
 });

@@ -81,17 +81,17 @@ describe("problem files: errors name the file, the path and the problem", () => 
 });
 
 async function cornersBest(p: BenchProblem): Promise<number> {
-  const vars = p.optimisation.variables;
+  const vars = p.optimization.variables;
   const axes = vars.map((v) => (v.kind === "categorical" ? [...v.levels] : [v.min, v.max]));
-  const sense = p.optimisation.objectives[0]!.sense;
+  const sense = p.optimization.objectives[0]!.sense;
   let best = sense === "max" ? -Infinity : Infinity;
   const walk = (i: number, d: Record<string, number | string>): void => {
     if (i === vars.length) {
       const out = p.evaluate(d);
-      const feasible = (p.optimisation.constraints ?? []).every((c) =>
+      const feasible = (p.optimization.constraints ?? []).every((c) =>
         c.op === "<=" ? out[c.output]! <= c.value : out[c.output]! >= c.value,
       );
-      const v = out[p.optimisation.objectives[0]!.output]!;
+      const v = out[p.optimization.objectives[0]!.output]!;
       if (feasible && Number.isFinite(v)) best = sense === "max" ? Math.max(best, v) : Math.min(best, v);
       return;
     }
@@ -106,7 +106,7 @@ describe("the demo suite", async () => {
   it("has ≥ 3 single-objective, one two-objective (gfa vs openSpace) and one site-selection problem over ≥ 200 sites", () => {
     expect(demo.filter((p) => p.kind === "single").length).toBeGreaterThanOrEqual(3);
     const two = demo.filter((p) => p.kind === "two-objective");
-    expect(two.map((p) => p.optimisation.objectives.map((o) => o.output))).toContainEqual(["gfa", "openSpace"]);
+    expect(two.map((p) => p.optimization.objectives.map((o) => o.output))).toContainEqual(["gfa", "openSpace"]);
     const sites = demo.filter((p) => p.kind === "site-selection");
     expect(sites.length).toBe(1);
     expect(sites[0]!.sites!.sites.length).toBeGreaterThanOrEqual(200);
@@ -116,12 +116,12 @@ describe("the demo suite", async () => {
       const opt = await findExactOptimum(p);
       const value = opt.best!.objectives[0]!;
       const corner = await cornersBest(p);
-      const sense = p.optimisation.objectives[0]!.sense;
+      const sense = p.optimization.objectives[0]!.sense;
       // strictly better than every feasible corner, by more than 1% (a corner cannot be the optimum)
       if (sense === "max") expect(value).toBeGreaterThan(corner * 1.01);
       else expect(value).toBeLessThan(corner / 1.01);
       // and some numeric variable lies strictly inside its range
-      const inside = p.optimisation.variables.some((v) => {
+      const inside = p.optimization.variables.some((v) => {
         if (v.kind === "categorical") return false;
         const x = opt.best!.design[v.name] as number;
         return x > v.min + 0.01 * (v.max - v.min) && x < v.max - 0.01 * (v.max - v.min);
@@ -148,11 +148,11 @@ describe("the quads suite (plate-stack benchmarks)", async () => {
     expect(quads.length).toBeGreaterThanOrEqual(3);
     for (const p of quads) {
       expect(p.kind).toBe("single");
-      expect(p.optimisation.variables.length).toBeGreaterThanOrEqual(5);
-      expect(p.optimisation.variables.length).toBeLessThanOrEqual(6);
+      expect(p.optimization.variables.length).toBeGreaterThanOrEqual(5);
+      expect(p.optimization.variables.length).toBeLessThanOrEqual(6);
       expect(p.plateProfile).toBeDefined();
     }
-    expect(quads.some((p) => p.massingInput!(p.optimisation.variables.reduce((d, v) => ({ ...d, [v.name]: v.kind === "categorical" ? v.levels[0]! : v.min }), {})).skyPlane)).toBe(true);
+    expect(quads.some((p) => p.massingInput!(p.optimization.variables.reduce((d, v) => ({ ...d, [v.name]: v.kind === "categorical" ? v.levels[0]! : v.min }), {})).skyPlane)).toBe(true);
   });
   it("their exact optima fill the FAR cap in whole floors", async () => {
     // max GFA = FAR × lot area (DC Zoning Handbook, "Floor Area Ratio"); lot areas derived from quadParcel:

@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { createDesign, DESIGN_KINDS, isLatin, minPairwiseDistance, phiP, sobolPoints } from "@floorcast/sampler";
 import type { DesignKind } from "@floorcast/sampler";
-import { eseOptimise } from "../../packages/sampler/src/design/ese-optimise.js";
+import { eseOptimize } from "../../packages/sampler/src/design/ese-optimize.js";
 import { latinHypercube } from "../../packages/sampler/src/design/latin-hypercube.js";
 import seedrandom from "seedrandom";
 
@@ -82,7 +82,7 @@ describe("ESE maximin search (Jin, Chen & Sudjianto 2005)", () => {
     for (const seed of [1, 2, 3]) {
       const rng = seedrandom(String(seed));
       const start = latinHypercube(80, 5, rng, true);
-      const r = eseOptimise(start, rng, { outerIterations: 15 });
+      const r = eseOptimize(start, rng, { outerIterations: 15 });
       expect(isLatin(r.points)).toBe(true);
       // φp reported by the search agrees with the independent metric (1e-9: incremental sums, derived).
       expect(Math.abs(r.phiStart - phiP(start)) / phiP(start)).toBeLessThan(1e-9);
@@ -104,14 +104,14 @@ describe("ESE maximin search (Jin, Chen & Sudjianto 2005)", () => {
     expect(ratios[2]).toBeGreaterThan(1.3);
   });
 
-  it("also optimises non-default p (Math.pow path) and leaves 1-D / 2-point designs alone", () => {
+  it("also optimizes non-default p (Math.pow path) and leaves 1-D / 2-point designs alone", () => {
     const rng = seedrandom("p");
     const start = latinHypercube(30, 3, rng, false);
-    const r = eseOptimise(start, rng, { outerIterations: 5, p: 15 });
+    const r = eseOptimize(start, rng, { outerIterations: 5, p: 15 });
     expect(phiP(r.points, 15)).toBeLessThan(phiP(start, 15));
     expect(isLatin(r.points)).toBe(true);
     const line = latinHypercube(10, 1, rng, true);
-    expect(eseOptimise(line, rng).points).toEqual(line);
+    expect(eseOptimize(line, rng).points).toEqual(line);
   });
 });
 

@@ -84,7 +84,7 @@ describe("designRows", () => {
   });
 });
 
-describe("progress of the optimised designs", () => {
+describe("progress of the optimized designs", () => {
   it("createDesign reports steps done, rising to the total, for lhs-maximin and lhs-maximin-cd only", () => {
     for (const design of ["lhs-maximin", "lhs-maximin-cd"] as const) {
       const calls: [number, number][] = [];

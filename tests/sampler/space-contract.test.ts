@@ -25,7 +25,7 @@ describe("the one Variable contract: codec unit ↔ record ↔ model row", () =>
     expect(codec.fromRow("t", [2, 1.5, 4, 3.9, 2])).toEqual(record);
     expect(codec.toRow({ ...record, floorHeight: 1 })[3]).toBeNaN(); // an index is not a level
     expect(() => codec.fromRow("t", [2, 1.5, 4, 1, 2])).toThrow(/row\[3\] \(floorHeight\) 1 is not a level/);
-    // the optimisers' coordinates keep the level index; a record maps back exactly
+    // the optimizers' coordinates keep the level index; a record maps back exactly
     expect(codec.fromDesign("t", record)).toEqual([2, 1.5, 4, 1, 2]);
     expect(codec.toDesign([2, 1.5, 4, 1, 2])).toEqual(record);
   });

@@ -5,7 +5,7 @@ A JSON-lines server: each stdin line is one request, each stdout line its reply.
   {"op": "lhs", "n": n, "d": d, "seed": s}             -> {"rows": [[...], ...]}  scipy.stats.qmc.LatinHypercube
   {"op": "fit", "kind": "gp"|"mlp", "x": X, "y": Y,
    "lower": [...], "upper": [...], "seed": s,
-   "restarts": r, "maxIter": m}                       -> {"id": k, "seconds": t}   (GP optimiser restarts, MLP epochs)
+   "restarts": r, "maxIter": m}                       -> {"id": k, "seconds": t}   (GP optimizer restarts, MLP epochs)
   {"op": "predict", "id": k, "x": X}                  -> {"mean": [[...], ...]}
   {"op": "release", "id": k}                          -> {"ok": true}
 Errors reply {"error": message}. Inputs are scaled to the unit cube by the declared bounds and

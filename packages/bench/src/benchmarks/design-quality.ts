@@ -84,7 +84,7 @@ console.log(`(wall times depend on machine load; CPU seconds are this process's 
 console.log(`Design quality, n = ${N}, d = ${D}, medians over seeds ${SEEDS.join(", ")} (cd2 = squared centred L2 discrepancy, as scipy reports it)`);
 console.log(["design", "phiP", "minDist", "cd2", "seconds", "cpuSeconds"].map((h) => h.padEnd(26)).join(""));
 for (const r of rows) console.log(Object.values(r).map((v) => fmt(v).padEnd(26)).join(""));
-const OURS = 4; // the first four rows are floorcast's default and optimised designs
+const OURS = 4; // the first four rows are floorcast's default and optimized designs
 for (const mine of rows.slice(0, OURS)) {
   const m = mine as Record<string, number>;
   for (const other of rows.slice(OURS)) {

@@ -132,7 +132,7 @@ async function run(): Promise<void> {
   line("tfjs predict, wasm backend", tfWasm);
   line("tfjs predict, cpu backend", tfCpu);
   line("exact evaluateMassing (MassingInput prebuilt)", exact);
-  // Small batches, as an optimiser asks for them: per-call overhead dominates.
+  // Small batches, as an optimizer asks for them: per-call overhead dominates.
   for (const b of [1, 16]) {
     const calls = b === 1 ? 2000 : 500;
     const few = qx.slice(0, b);

@@ -30,7 +30,7 @@ export async function benchFingerprint(problem: BenchProblem, settings: Readonly
   try {
     text = await readFile(problem.file, "utf8");
   } catch {
-    text = JSON.stringify({ name: problem.name, optimisation: problem.optimisation });
+    text = JSON.stringify({ name: problem.name, optimization: problem.optimization });
   }
   hash.update(text).update("\n");
   let scenario: unknown;

@@ -1,6 +1,6 @@
 import type { ParcelRankingReport } from "../parcels/parcel-ranking.js";
 import type { MassingInput, MassingResult } from "@floorcast/sampler";
-import type { Design, Outputs } from "../optimise/optimisation-problem.js";
+import type { Design, Outputs } from "../optimize/optimization-problem.js";
 import type { ReportedSource } from "./reevaluate-surrogate-optimum.js";
 import type { TargetAccuracy } from "./assess-accuracy.js";
 
@@ -32,7 +32,7 @@ export interface TrialSeconds {
   readonly sample: number;
   readonly fit: number;
   readonly assess: number;
-  readonly optimise: number;
+  readonly optimize: number;
   readonly reevaluate: number;
   readonly refine: number;
 }
@@ -101,7 +101,7 @@ export interface GapSummary {
   readonly medianFitSeconds: number;
 }
 
-/** Exact evaluations an optimiser needed to come within the target of the exact optimum. */
+/** Exact evaluations an optimizer needed to come within the target of the exact optimum. */
 export interface EvaluationsToTarget {
   readonly method: string;
   /** Per seed: evaluations to reach the target, null when the budget ran out first. */
@@ -126,7 +126,7 @@ export interface ProblemReport {
   readonly exactOptimum: ExactOptimumRecord;
   readonly surrogateOptimum: readonly SurrogateOptimumRecord[];
   readonly summary: readonly GapSummary[];
-  /** Relative target (0.005 = within 0.5%) and each optimiser's evaluations to reach it. */
+  /** Relative target (0.005 = within 0.5%) and each optimizer's evaluations to reach it. */
   readonly target: number;
   readonly evaluationsToTarget: readonly EvaluationsToTarget[];
   /** Two objectives: the exact front (objective values) and its hypervolume. */

@@ -1,5 +1,5 @@
 import { rowValue, type Variable } from "@floorcast/sampler";
-import type { Design } from "../optimise/optimisation-problem.js";
+import type { Design } from "../optimize/optimization-problem.js";
 
 /**
  * The model row a surrogate sees for a design, in the sampler's one coding (createVariableCodec): each

@@ -1,23 +1,23 @@
-import { gridAxes, gridSearch } from "../optimise/grid-search.js";
-import { optimizerNamed } from "../optimise/optimizers.js";
-import type { OptimisationResult } from "../optimise/optimisation-problem.js";
+import { gridAxes, gridSearch } from "../optimize/grid-search.js";
+import { optimizerNamed } from "../optimize/optimizers.js";
+import type { OptimizationResult } from "../optimize/optimization-problem.js";
 import type { BenchProblem } from "../problem/bench-problem.js";
 import { PLATE_STACK_OUTPUTS } from "@floorcast/surrogate";
 import type { EvaluationsToTarget } from "./bench-report-types.js";
 import { exactEvaluator } from "./exact-evaluator.js";
 import { profiledExactEvaluator } from "./profiled-exact-evaluator.js";
-import { plateStackBayesianOptimisation } from "../optimise/plate-stack-bayesian.js";
+import { plateStackBayesianOptimization } from "../optimize/plate-stack-bayesian.js";
 import { medianEvaluations } from "./median-evaluations.js";
 
 /** Budgets of the evaluations-to-target runs. */
 export interface TargetBudgets {
   /** Exact evaluations allowed to GA, PSO and random search (default 600). */
   readonly search: number;
-  /** Exact evaluations allowed to Bayesian optimisation (its GP refits each step; default 60). */
+  /** Exact evaluations allowed to Bayesian optimization (its GP refits each step; default 60). */
   readonly bo: number;
   /** Seeds per stochastic method (default 3). */
   readonly seeds: number;
-  /** Seeds of Bayesian optimisation, the costly one (default `seeds`). */
+  /** Seeds of Bayesian optimization, the costly one (default `seeds`). */
   readonly boSeeds?: number;
   /** Relative target (default 0.005: within 0.5% of the exact optimum). */
   readonly target?: number;
@@ -30,9 +30,9 @@ function shortfall(v: number, optimum: number, sense: "max" | "min"): number {
 }
 
 /**
- * Exact evaluations each optimiser needs to come within `target` of the exact optimum (0.005 =
- * 0.5%), on the exact evaluator: Bayesian optimisation with EI (Jones, Schonlau & Welch 1998), and where the
- * evaluator reports plate profiles Bayesian optimisation through the stacking rule ("bo-plate-stack"), the
+ * Exact evaluations each optimizer needs to come within `target` of the exact optimum (0.005 =
+ * 0.5%), on the exact evaluator: Bayesian optimization with EI (Jones, Schonlau & Welch 1998), and where the
+ * evaluator reports plate profiles Bayesian optimization through the stacking rule ("bo-plate-stack"), the
  * genetic algorithm, particle swarm, random search — each over several seeds, counted from its
  * best-so-far trace — and the grid, as the smallest full-factorial grid (2, 3, … points per
  * continuous variable) whose best is within the target (its count is that grid's size).
@@ -48,10 +48,10 @@ export async function evaluationsToTarget(
   budgets: TargetBudgets,
   onStep?: (method: string) => void,
 ): Promise<EvaluationsToTarget[]> {
-  const op = problem.optimisation;
+  const op = problem.optimization;
   const sense = op.objectives[0]!.sense;
   const target = budgets.target ?? 0.005;
-  const runs: [string, number, (seed: number) => Promise<OptimisationResult>][] = [
+  const runs: [string, number, (seed: number) => Promise<OptimizationResult>][] = [
     ["bo", budgets.bo, (seed) => optimizerNamed("bo").run(op, exactEvaluator(problem), { seed, maxEvaluations: budgets.bo, candidates: 500, acquisitionStarts: 2 })],
     ["ga", budgets.search, (seed) => optimizerNamed("ga").run(op, exactEvaluator(problem), { seed, maxEvaluations: budgets.search })],
     ["pso", budgets.search, (seed) => optimizerNamed("pso").run(op, exactEvaluator(problem), { seed, maxEvaluations: budgets.search })],
@@ -61,7 +61,7 @@ export async function evaluationsToTarget(
     runs.splice(1, 0, [
       "bo-plate-stack",
       budgets.bo,
-      (seed) => plateStackBayesianOptimisation(op, profiledExactEvaluator(problem), { seed, maxEvaluations: budgets.bo }),
+      (seed) => plateStackBayesianOptimization(op, profiledExactEvaluator(problem), { seed, maxEvaluations: budgets.bo }),
     ]);
   }
   const out: EvaluationsToTarget[] = [];

@@ -1,5 +1,5 @@
 import type { Evaluator } from "@floorcast/sampler";
-import type { Design, Outputs } from "../optimise/optimisation-problem.js";
+import type { Design, Outputs } from "../optimize/optimization-problem.js";
 import type { BenchProblem } from "../problem/bench-problem.js";
 
 /** An Evaluator (the sampler's contract) backed by a problem's exact evaluator, counting every design it evaluates. */
@@ -9,7 +9,7 @@ export interface CountingEvaluator extends Evaluator<Outputs> {
 }
 
 /**
- * The exact evaluator of a problem as an optimiser's evaluator. For a site-selection problem
+ * The exact evaluator of a problem as an optimizer's evaluator. For a site-selection problem
  * pass the site: its parameter values are merged into every design before evaluation.
  * @param problem - the problem.
  * @param site - fixed values merged into each design (site selection), or undefined.

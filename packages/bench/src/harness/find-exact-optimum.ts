@@ -1,8 +1,8 @@
-import type { Design, EvaluatedDesign, OptimisationResult } from "../optimise/optimisation-problem.js";
-import { gridSearch } from "../optimise/grid-search.js";
-import { patternSearch } from "../optimise/pattern-search.js";
-import { nsga2 } from "../optimise/nsga2.js";
-import { nonDominatedIndices } from "../optimise/pareto-dominance.js";
+import type { Design, EvaluatedDesign, OptimizationResult } from "../optimize/optimization-problem.js";
+import { gridSearch } from "../optimize/grid-search.js";
+import { patternSearch } from "../optimize/pattern-search.js";
+import { nsga2 } from "../optimize/nsga2.js";
+import { nonDominatedIndices } from "../optimize/pareto-dominance.js";
 import type { BenchProblem } from "../problem/bench-problem.js";
 import { exactEvaluator } from "./exact-evaluator.js";
 
@@ -45,31 +45,31 @@ export async function findExactOptimum(
   const t0 = performance.now();
   const gridPoints = options.gridPoints ?? problem.exact.gridPoints;
   const evaluator = exactEvaluator(problem, options.site);
-  const grid = await gridSearch(problem.optimisation, evaluator, {
+  const grid = await gridSearch(problem.optimization, evaluator, {
     resolution: gridPoints,
     batchSize: 512,
     ...(options.onProgress ? { onProgress: options.onProgress } : {}),
   });
   let best = grid.best;
-  let refined: OptimisationResult | null = null;
+  let refined: OptimizationResult | null = null;
   const budget = options.refineEvaluations ?? problem.exact.refineEvaluations;
-  if (best && problem.optimisation.objectives.length === 1 && budget > 0) {
-    refined = await patternSearch(problem.optimisation, evaluator, best.design, {
+  if (best && problem.optimization.objectives.length === 1 && budget > 0) {
+    refined = await patternSearch(problem.optimization, evaluator, best.design, {
       maxEvaluations: budget,
       initialStep: 1 / Math.max(2, gridPoints - 1),
     });
     const r = refined.best;
     if (r && r.feasible) {
-      const sense = problem.optimisation.objectives[0]!.sense;
+      const sense = problem.optimization.objectives[0]!.sense;
       const better = sense === "max" ? r.objectives[0]! > best.objectives[0]! : r.objectives[0]! < best.objectives[0]!;
       if (better) best = r;
     }
   }
   let front = grid.front;
-  if (problem.optimisation.objectives.length > 1 && budget > 0) {
-    refined = await nsga2(problem.optimisation, evaluator, { seed: "exact-front", maxEvaluations: budget, populationSize: 60 });
+  if (problem.optimization.objectives.length > 1 && budget > 0) {
+    refined = await nsga2(problem.optimization, evaluator, { seed: "exact-front", maxEvaluations: budget, populationSize: 60 });
     const all = [...grid.front, ...refined.front];
-    const senses = problem.optimisation.objectives.map((o) => (o.sense === "max" ? -1 : 1));
+    const senses = problem.optimization.objectives.map((o) => (o.sense === "max" ? -1 : 1));
     front = nonDominatedIndices(all.map((e) => e.objectives.map((v, k) => senses[k]! * v))).map((i) => all[i]!);
   }
   return {

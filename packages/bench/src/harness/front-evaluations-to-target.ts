@@ -1,5 +1,5 @@
-import { optimizerNamed } from "../optimise/optimizers.js";
-import type { EvaluatedDesign, OptimisationResult } from "../optimise/optimisation-problem.js";
+import { optimizerNamed } from "../optimize/optimizers.js";
+import type { EvaluatedDesign, OptimizationResult } from "../optimize/optimization-problem.js";
 import type { BenchProblem } from "../problem/bench-problem.js";
 import type { EvaluationsToTarget } from "./bench-report-types.js";
 import { exactEvaluator } from "./exact-evaluator.js";
@@ -9,7 +9,7 @@ import type { TargetBudgets } from "./evaluations-to-target.js";
 
 /** Hypervolume shortfall after each evaluation of a run's history: 1 − HV(feasible designs so far) / exact HV. */
 function shortfalls(problem: BenchProblem, history: readonly EvaluatedDesign[], reference: readonly number[], exactHv: number): number[] {
-  const op = problem.optimisation;
+  const op = problem.optimization;
   const front: number[][] = [];
   let hv = 0;
   return history.map((e) => {
@@ -38,10 +38,10 @@ export async function frontEvaluationsToTarget(
   exactHv: number,
   budgets: TargetBudgets,
 ): Promise<EvaluationsToTarget[]> {
-  const op = problem.optimisation;
+  const op = problem.optimization;
   const target = budgets.target ?? 0.005;
   const budget = 5 * budgets.search;
-  const runs: [string, (seed: number) => Promise<OptimisationResult>][] = [
+  const runs: [string, (seed: number) => Promise<OptimizationResult>][] = [
     ["nsga2", (seed) => optimizerNamed("nsga2").run(op, exactEvaluator(problem), { seed, maxEvaluations: budget, keepHistory: true })],
     ["random", (seed) => optimizerNamed("random").run(op, exactEvaluator(problem), { seed, maxEvaluations: budget, keepHistory: true })],
   ];

@@ -1,5 +1,5 @@
-import { hypervolume } from "../optimise/hypervolume.js";
-import type { OptimisationProblem } from "../optimise/optimisation-problem.js";
+import { hypervolume } from "../optimize/hypervolume.js";
+import type { OptimizationProblem } from "../optimize/optimization-problem.js";
 
 /**
  * The reference point of a two-objective comparison, fixed from the exact front: each objective's
@@ -8,7 +8,7 @@ import type { OptimisationProblem } from "../optimise/optimisation-problem.js";
  * @param problem - the problem (its senses).
  * @param exactFront - exact front objective vectors (non-empty).
  */
-export function frontReference(problem: OptimisationProblem, exactFront: readonly (readonly number[])[]): number[] {
+export function frontReference(problem: OptimizationProblem, exactFront: readonly (readonly number[])[]): number[] {
   return problem.objectives.map((o, k) => {
     const v = exactFront.map((p) => p[k]!);
     const lo = Math.min(...v);
@@ -26,7 +26,7 @@ export function frontReference(problem: OptimisationProblem, exactFront: readonl
  * @param reference - from {@link frontReference}.
  */
 export function frontHypervolume(
-  problem: OptimisationProblem,
+  problem: OptimizationProblem,
   points: readonly (readonly number[])[],
   reference: readonly number[],
 ): number {

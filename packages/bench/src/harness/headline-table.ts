@@ -77,7 +77,7 @@ export function headlineTable(report: BenchReport): { caption: string; header: s
     `Each model at its largest training size (${size}), median (gap, R², evals, rho) and worst over ${seeds} seed${seeds === 1 ? "" : "s"}; ` +
     "numbers to 3 significant digits.";
   const notes = [
-    "gap: share of the exact optimum lost by optimising on the model (its design re-evaluated exactly); " +
+    "gap: share of the exact optimum lost by optimizing on the model (its design re-evaluated exactly); " +
       `refined: after ${typeof report.options["refineBudget"] === "number" ? `${report.options["refineBudget"]} ` : ""}exact refinement evaluations; ` +
       "evals: exact evaluations a trial used.",
     ...(twoObjective

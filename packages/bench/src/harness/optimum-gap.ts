@@ -6,7 +6,7 @@
  * meaningful when the optimum is negative, as for the published minimisation test functions).
  * @param exactOptimum - exact objective value at the exact optimum, finite, non-zero.
  * @param exactAtSurrogate - exact objective value at the surrogate-driven design, finite.
- * @param sense - "maximise" (default) or "minimise" (or the optimisers' "max" / "min").
+ * @param sense - "maximise" (default) or "minimise" (or the optimizers' "max" / "min").
  * @returns the gap (0 = no loss; 0.05 = 5% of the optimum lost).
  */
 export function optimumGap(

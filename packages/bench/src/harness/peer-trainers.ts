@@ -13,7 +13,7 @@ interface PeerModel extends BatchPredictor {
  * peer server's pipe.
  * @param peer - a running peer server.
  * @param variables - the surrogate's input variables (declared bounds scale the inputs).
- * @param quick - the demo's cheaper fits: as many GP optimiser starts as floorcast's GP makes (2, else 3),
+ * @param quick - the demo's cheaper fits: as many GP optimizer starts as floorcast's GP makes (2, else 3),
  *   and at most 500 MLP epochs (else 2000).
  */
 export function peerTrainers(peer: PeerProcess, variables: readonly Variable[], quick = false): BenchTrainer[] {

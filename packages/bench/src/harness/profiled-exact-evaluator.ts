@@ -1,10 +1,10 @@
 import type { Evaluator } from "@floorcast/sampler";
-import type { Design, Outputs } from "../optimise/optimisation-problem.js";
+import type { Design, Outputs } from "../optimize/optimization-problem.js";
 import type { BenchProblem } from "../problem/bench-problem.js";
 
 /**
  * The exact evaluator of a massing problem reporting the plate profile beside its outputs (the numeric columns of
- * `sample --plate-profile`), as Bayesian optimisation through the stacking rule needs. A design that cannot be
+ * `sample --plate-profile`), as Bayesian optimization through the stacking rule needs. A design that cannot be
  * evaluated gives the problem's NaN outputs without a profile.
  * @param problem - a massing problem (with plateProfile).
  * @returns the evaluator.

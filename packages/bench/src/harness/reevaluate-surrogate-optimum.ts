@@ -1,7 +1,7 @@
 import type { Evaluator } from "@floorcast/sampler";
-import type { EvaluatedDesign, OptimisationProblem } from "../optimise/optimisation-problem.js";
-import { scoreOutputs } from "../optimise/evaluation-session.js";
-import { compareFeasibility } from "../optimise/feasibility-rules.js";
+import type { EvaluatedDesign, OptimizationProblem } from "../optimize/optimization-problem.js";
+import { scoreOutputs } from "../optimize/evaluation-session.js";
+import { compareFeasibility } from "../optimize/feasibility-rules.js";
 
 /** Where the reported design came from. */
 export type ReportedSource = "surrogate-optimum" | "ranked-list" | "training-set" | "none";
@@ -18,7 +18,7 @@ export interface ReevaluatedOptimum {
 }
 
 /** Distance of two designs in the unit cube of the problem's variables (a categorical counts 0 or 1). */
-function unitDistance(problem: OptimisationProblem, a: EvaluatedDesign, b: EvaluatedDesign): number {
+function unitDistance(problem: OptimizationProblem, a: EvaluatedDesign, b: EvaluatedDesign): number {
   let s = 0;
   for (const v of problem.variables) {
     const x = a.design[v.name];
@@ -45,7 +45,7 @@ function unitDistance(problem: OptimisationProblem, a: EvaluatedDesign, b: Evalu
  * @param minDistance - least unit-cube distance between listed designs (default 0.02).
  */
 export async function reevaluateSurrogateOptimum(
-  problem: OptimisationProblem,
+  problem: OptimizationProblem,
   searched: readonly EvaluatedDesign[],
   exact: Evaluator,
   fallback: readonly EvaluatedDesign[] = [],

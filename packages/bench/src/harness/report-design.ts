@@ -1,4 +1,4 @@
-import type { EvaluatedDesign } from "../optimise/optimisation-problem.js";
+import type { EvaluatedDesign } from "../optimize/optimization-problem.js";
 import type { BenchProblem } from "../problem/bench-problem.js";
 import type { ReportedDesign } from "./bench-report-types.js";
 

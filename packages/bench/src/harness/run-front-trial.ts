@@ -1,7 +1,7 @@
-import { nsga2 } from "../optimise/nsga2.js";
-import { scoreOutputs } from "../optimise/evaluation-session.js";
-import { nonDominatedIndices } from "../optimise/pareto-dominance.js";
-import type { EvaluatedDesign } from "../optimise/optimisation-problem.js";
+import { nsga2 } from "../optimize/nsga2.js";
+import { scoreOutputs } from "../optimize/evaluation-session.js";
+import { nonDominatedIndices } from "../optimize/pareto-dominance.js";
+import type { EvaluatedDesign } from "../optimize/optimization-problem.js";
 import type { BenchProblem } from "../problem/bench-problem.js";
 import type { SurrogateOptimumRecord } from "./bench-report-types.js";
 import { exactEvaluator } from "./exact-evaluator.js";
@@ -15,7 +15,7 @@ import { trialRecordHead } from "./trial-record-head.js";
 /** The feasible non-dominated subset of exactly evaluated designs (objective senses respected). */
 function exactFront(problem: BenchProblem, designs: readonly EvaluatedDesign[]): EvaluatedDesign[] {
   const feasible = designs.filter((e) => e.feasible);
-  const losses = feasible.map((e) => e.objectives.map((v, k) => (problem.optimisation.objectives[k]!.sense === "max" ? -v : v)));
+  const losses = feasible.map((e) => e.objectives.map((v, k) => (problem.optimization.objectives[k]!.sense === "max" ? -v : v)));
   return nonDominatedIndices(losses).map((i) => feasible[i]!);
 }
 
@@ -35,14 +35,14 @@ export async function runFrontTrial(
   reference: readonly number[],
 ): Promise<SurrogateOptimumRecord> {
   const { train, model, fitSeconds, accuracy, seconds: assessSeconds } = await trainForTrial(problem, setup);
-  const op = problem.optimisation;
+  const op = problem.optimization;
   const t0 = performance.now();
   const search = await nsga2(op, surrogateEvaluator(model, problem.trainingVariables), {
     seed: `front-${setup.seed}`,
     populationSize: 40,
     maxEvaluations: 40 * 60,
   });
-  const optimise = (performance.now() - t0) / 1000;
+  const optimize = (performance.now() - t0) / 1000;
   setup.trainer.release?.(model);
   const t1 = performance.now();
   const designs = search.front.map((e) => e.design);
@@ -68,7 +68,7 @@ export async function runFrontTrial(
     evaluations: train.designs.length + designs.length,
     evaluationsBreakdown: { training: train.designs.length, reevaluation: designs.length, refinement: 0, testSet: setup.test.designs.length },
     accuracy,
-    seconds: { sample: train.seconds, fit: fitSeconds, assess: assessSeconds, optimise, reevaluate, refine: 0 },
+    seconds: { sample: train.seconds, fit: fitSeconds, assess: assessSeconds, optimize, reevaluate, refine: 0 },
     hypervolumeRatio: ratio,
     front: points,
   };

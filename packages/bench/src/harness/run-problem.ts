@@ -47,8 +47,8 @@ export interface RunProblemOptions {
 
 /**
  * Measures one problem: the exact optimum (grid + exact refinement, or per site, or the exact
- * front), an independent test set, every planned surrogate trial (sample, fit, assess, optimise on
- * the surrogate, exact re-evaluation, gap, refinement), and the exact evaluations each optimiser
+ * front), an independent test set, every planned surrogate trial (sample, fit, assess, optimize on
+ * the surrogate, exact re-evaluation, gap, refinement), and the exact evaluations each optimizer
  * needs to come within the target (of the optimum, or of the exact front's hypervolume).
  * @param problem - the problem.
  * @param options - trial plans, budgets and progress callback.
@@ -68,7 +68,7 @@ export async function runProblem(problem: BenchProblem, options: RunProblemOptio
 async function measureProblem(problem: BenchProblem, options: RunProblemOptions, workDir: string): Promise<ProblemReport> {
   const t0 = performance.now();
   const step = options.onStep ?? (() => undefined);
-  const op = problem.optimisation;
+  const op = problem.optimization;
   const total = options.plans.reduce((s, p) => s + p.sizes.length * p.seeds.length, 0);
   step("exact optimum", 0, total);
   const grid = options.gridPoints === undefined ? {} : { gridPoints: options.gridPoints };

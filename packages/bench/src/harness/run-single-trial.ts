@@ -1,5 +1,5 @@
-import { patternSearch } from "../optimise/pattern-search.js";
-import type { EvaluatedDesign } from "../optimise/optimisation-problem.js";
+import { patternSearch } from "../optimize/pattern-search.js";
+import type { EvaluatedDesign } from "../optimize/optimization-problem.js";
 import type { BenchProblem } from "../problem/bench-problem.js";
 import type { SurrogateOptimumRecord } from "./bench-report-types.js";
 import { exactEvaluator } from "./exact-evaluator.js";
@@ -26,14 +26,14 @@ const seconds = (t0: number): number => (performance.now() - t0) / 1000;
  */
 export async function runSingleTrial(problem: BenchProblem, setup: TrialSetup): Promise<SurrogateOptimumRecord> {
   const { train, model, fitSeconds, accuracy, seconds: assessSeconds } = await trainForTrial(problem, setup);
-  const op = problem.optimisation;
+  const op = problem.optimization;
   const sense = op.objectives[0]!.sense;
   const tOpt = performance.now();
   const searched = await searchSurrogate(op, surrogateEvaluator(model, problem.trainingVariables), {
     seed: setup.seed,
     ...(setup.candidates ? { candidates: setup.candidates } : {}),
   });
-  const optimise = seconds(tOpt);
+  const optimize = seconds(tOpt);
   setup.trainer.release?.(model);
   const tRe = performance.now();
   const exact = exactEvaluator(problem);
@@ -72,6 +72,6 @@ export async function runSingleTrial(problem: BenchProblem, setup: TrialSetup): 
       testSet: setup.test.designs.length,
     },
     accuracy,
-    seconds: { sample: train.seconds, fit: fitSeconds, assess: assessSeconds, optimise, reevaluate, refine },
+    seconds: { sample: train.seconds, fit: fitSeconds, assess: assessSeconds, optimize, reevaluate, refine },
   };
 }

@@ -1,9 +1,9 @@
-import { gridAxes } from "../optimise/grid-search.js";
-import { patternSearch } from "../optimise/pattern-search.js";
+import { gridAxes } from "../optimize/grid-search.js";
+import { patternSearch } from "../optimize/pattern-search.js";
 import { createVariableCodec } from "@floorcast/sampler";
-import { scoreOutputs } from "../optimise/evaluation-session.js";
-import { compareFeasibility } from "../optimise/feasibility-rules.js";
-import type { Design, EvaluatedDesign } from "../optimise/optimisation-problem.js";
+import { scoreOutputs } from "../optimize/evaluation-session.js";
+import { compareFeasibility } from "../optimize/feasibility-rules.js";
+import type { Design, EvaluatedDesign } from "../optimize/optimization-problem.js";
 import type { BenchProblem } from "../problem/bench-problem.js";
 import type { SurrogateOptimumRecord } from "./bench-report-types.js";
 import { exactEvaluator } from "./exact-evaluator.js";
@@ -36,7 +36,7 @@ export async function runSiteTrial(
   exactBest: readonly number[],
 ): Promise<SurrogateOptimumRecord> {
   const { train, model, fitSeconds, accuracy, seconds: assessSeconds } = await trainForTrial(problem, setup);
-  const op = problem.optimisation;
+  const op = problem.optimization;
   const sites = problem.sites!;
   const t0 = performance.now();
   const codec = createVariableCodec(op.variables);
@@ -63,7 +63,7 @@ export async function runSiteTrial(
     return best ?? scoreOutputs(op, batch[k * grid.length]!, predicted[k * grid.length]!);
   });
   const estimates = perSite.map((e) => (Number.isFinite(e.objectives[0]) ? e.objectives[0]! : 0));
-  const optimise = (performance.now() - t0) / 1000;
+  const optimize = (performance.now() - t0) / 1000;
   const t1 = performance.now();
   // the surrogate's ranked list of sites, each at its surrogate-best design
   const chosen = await reevaluateSurrogateOptimum(op, perSite, exactEvaluator(problem), train.designs, 10, 0);
@@ -95,7 +95,7 @@ export async function runSiteTrial(
     evaluations: train.designs.length + chosen.evaluations,
     evaluationsBreakdown: { training: train.designs.length, reevaluation: chosen.evaluations, refinement: refined?.evaluations ?? 0, testSet: setup.test.designs.length },
     accuracy,
-    seconds: { sample: train.seconds, fit: fitSeconds, assess: assessSeconds, optimise, reevaluate, refine },
+    seconds: { sample: train.seconds, fit: fitSeconds, assess: assessSeconds, optimize, reevaluate, refine },
     ranking: {
       spearman: spearmanRho(signed(exactBest), signed(estimates)),
       kendall: kendallTau(signed(exactBest), signed(estimates)),

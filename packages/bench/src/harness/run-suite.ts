@@ -39,7 +39,7 @@ export interface RunSuiteOptions {
 
 /**
  * Runs a suite end to end — for every problem: the exact optimum, then per surrogate, training
- * size and seed: sample, fit, assess, optimise on the surrogate, re-evaluate exactly, refine — with
+ * size and seed: sample, fit, assess, optimize on the surrogate, re-evaluate exactly, refine — with
  * the peers when Debian's python3-sklearn and python3-scipy are present; writes each finished
  * problem as it goes (resumable), with `parcels` ranks the demo parcel file (rankDemoParcels), and then
  * writes report.json, report.md and report.html into `out`.

@@ -1,7 +1,7 @@
 import { join } from "node:path";
 import { createCsvWriter, createVariableCodec, readTable, writeDataset, type DesignKind } from "@floorcast/sampler";
-import type { EvaluatedDesign } from "../optimise/optimisation-problem.js";
-import { scoreOutputs } from "../optimise/evaluation-session.js";
+import type { EvaluatedDesign } from "../optimize/optimization-problem.js";
+import { scoreOutputs } from "../optimize/evaluation-session.js";
 import type { BenchProblem } from "../problem/bench-problem.js";
 import { exactEvaluator } from "./exact-evaluator.js";
 
@@ -66,7 +66,7 @@ export async function sampleTrainingSet(
   const table = await readTable(csv, { inputs, targets: [...targets] });
   const designs = table.x.map((row, i) => {
     const outputs = Object.fromEntries(targets.map((t, j) => [t, table.y[i]![j]!]));
-    return scoreOutputs(problem.optimisation, codec.fromRow("sampleTrainingSet", row), outputs);
+    return scoreOutputs(problem.optimization, codec.fromRow("sampleTrainingSet", row), outputs);
   });
   return { designs, inputs, targets, x: table.x, y: table.y, csv, seconds: (performance.now() - t0) / 1000 };
 }

@@ -1,7 +1,7 @@
 import type { Evaluator } from "@floorcast/sampler";
-import type { EvaluatedDesign, OptimisationProblem } from "../optimise/optimisation-problem.js";
-import { randomSearch } from "../optimise/random-search.js";
-import { patternSearch } from "../optimise/pattern-search.js";
+import type { EvaluatedDesign, OptimizationProblem } from "../optimize/optimization-problem.js";
+import { randomSearch } from "../optimize/random-search.js";
+import { patternSearch } from "../optimize/pattern-search.js";
 
 /** Budget of a search on a surrogate (cheap evaluations, so generous). */
 export interface SurrogateSearchOptions {
@@ -25,7 +25,7 @@ export interface SurrogateSearchOptions {
  * @returns all surrogate-scored designs, in order.
  */
 export async function searchSurrogate(
-  problem: OptimisationProblem,
+  problem: OptimizationProblem,
   surrogate: Evaluator,
   options: SurrogateSearchOptions,
 ): Promise<EvaluatedDesign[]> {

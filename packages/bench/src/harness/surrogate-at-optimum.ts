@@ -1,6 +1,6 @@
 import type { Surrogate } from "@floorcast/surrogate";
 import type { Variable } from "@floorcast/sampler";
-import type { Design } from "../optimise/optimisation-problem.js";
+import type { Design } from "../optimize/optimization-problem.js";
 import { designRow } from "./design-row.js";
 
 /**
@@ -18,7 +18,7 @@ export interface SurrogateAtOptimum {
 /**
  * The surrogate's prediction at an exactly evaluated design, beside the exact values of the
  * problem's outputs (objectives and constrained outputs) and their differences.
- * @param model - the surrogate the optimiser ran on.
+ * @param model - the surrogate the optimizer ran on.
  * @param variables - its input variables, in order.
  * @param design - the design.
  * @param exact - the design's exact outputs.

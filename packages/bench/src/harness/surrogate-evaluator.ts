@@ -1,6 +1,6 @@
 import type { Evaluator, OutputGradient, Variable } from "@floorcast/sampler";
 import type { Surrogate } from "@floorcast/surrogate";
-import type { Design, Outputs } from "../optimise/optimisation-problem.js";
+import type { Design, Outputs } from "../optimize/optimization-problem.js";
 import { designRow } from "./design-row.js";
 
 /** Anything that predicts a batch of rows: a floorcast surrogate, or a peer model behind a pipe. */
@@ -12,10 +12,10 @@ export interface BatchPredictor {
 }
 
 /**
- * A surrogate as an optimiser's evaluator: each design (with an optional site merged in) becomes
+ * A surrogate as an optimizer's evaluator: each design (with an optional site merged in) becomes
  * the surrogate's input row and its predicted means become the outputs, one per target. When the
  * surrogate has an analytic gradient (GP, MLP), the evaluator passes it on for gradient-based
- * optimisers, per output and non-categorical variable.
+ * optimizers, per output and non-categorical variable.
  * @param model - the fitted surrogate (its inputs must be the variables' names, in order).
  * @param variables - the surrogate's input variables.
  * @param site - fixed values merged into every design (site selection).

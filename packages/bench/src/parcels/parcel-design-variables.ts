@@ -1,5 +1,5 @@
 import type { MassingInput, Variable } from "@floorcast/sampler";
-import type { Design } from "../optimise/optimisation-problem.js";
+import type { Design } from "../optimize/optimization-problem.js";
 
 /**
  * The design variables over which a parcel's best achievable objective is sought, the same on every parcel:

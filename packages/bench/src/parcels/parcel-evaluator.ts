@@ -1,10 +1,10 @@
 import { evaluateMassing, massingOutputs, type MassingInput } from "@floorcast/sampler";
-import type { Design, Outputs } from "../optimise/optimisation-problem.js";
+import type { Design, Outputs } from "../optimize/optimization-problem.js";
 import type { CountingEvaluator } from "../harness/exact-evaluator.js";
 import { parcelDesignInput } from "./parcel-design-variables.js";
 
 /**
- * The exact massing rule on one parcel as an optimiser's evaluator over PARCEL_DESIGN_VARIABLES: each design is
+ * The exact massing rule on one parcel as an optimizer's evaluator over PARCEL_DESIGN_VARIABLES: each design is
  * applied to the parcel's zoning controls (parcelDesignInput) and evaluated with evaluateMassing; the outputs are
  * the numeric massing outputs (`limitedBy` left out, `coverageCapped` as 0/1). A design the rule refuses gets NaN
  * outputs (infeasible), never an exception. Counts every design evaluated.

@@ -1,4 +1,4 @@
-import type { Design, Objective, Outputs } from "../optimise/optimisation-problem.js";
+import type { Design, Objective, Outputs } from "../optimize/optimization-problem.js";
 
 /** The best design one route found for one parcel, exactly evaluated. */
 export interface ParcelOptimum {

@@ -6,9 +6,9 @@ import { reevaluateSurrogateOptimum } from "../harness/reevaluate-surrogate-opti
 import { spearmanRho } from "../harness/spearman-rho.js";
 import { surrogateEvaluator } from "../harness/surrogate-evaluator.js";
 import { topKOverlap } from "../harness/top-k-overlap.js";
-import type { Objective, OptimisationProblem, OutputConstraint } from "../optimise/optimisation-problem.js";
-import { optimizerNamed } from "../optimise/optimizers.js";
-import { scoreOutputs } from "../optimise/evaluation-session.js";
+import type { Objective, OptimizationProblem, OutputConstraint } from "../optimize/optimization-problem.js";
+import { optimizerNamed } from "../optimize/optimizers.js";
+import { scoreOutputs } from "../optimize/evaluation-session.js";
 import { parcelDescriptors } from "./parcel-descriptors.js";
 import { PARCEL_DESIGN_VARIABLES } from "./parcel-design-variables.js";
 import { parcelEvaluator } from "./parcel-evaluator.js";
@@ -17,16 +17,16 @@ import { trainParcelSurrogate } from "./train-parcel-surrogate.js";
 
 /** Options of {@link rankParcels}. */
 export interface RankParcelsOptions {
-  /** "exact": an optimiser per parcel on the exact rule; "surrogate": on a cross-parcel surrogate; "both" (compared). */
+  /** "exact": an optimizer per parcel on the exact rule; "surrogate": on a cross-parcel surrogate; "both" (compared). */
   readonly route: "exact" | "surrogate" | "both";
   /** Default: maximise gfa. */
   readonly objective?: Objective;
   readonly constraints?: readonly OutputConstraint[];
-  /** A registered single-objective optimiser (default "pso"). */
+  /** A registered single-objective optimizer (default "pso"). */
   readonly optimizer?: string;
   /** Evaluations per parcel: exact ones on the exact route, surrogate ones on the surrogate route (default 150). */
   readonly budget?: number;
-  /** Seed of every optimiser run, the training design and the fit (default 1). */
+  /** Seed of every optimizer run, the training design and the fit (default 1). */
   readonly seed?: number;
   /** Shortlist length of the top-k overlap (default min(3, parcels)). */
   readonly shortlist?: number;
@@ -94,17 +94,17 @@ function spreadParcels(zones: readonly MassingInput[], m: number): number[] {
 
 /**
  * Ranks parcels by their best achievable objective over PARCEL_DESIGN_VARIABLES (yards beyond the minimums,
- * height and coverage up to the caps, floor-to-floor height). The exact route runs a registered optimiser per
+ * height and coverage up to the caps, floor-to-floor height). The exact route runs a registered optimizer per
  * parcel on the exact rule with `budget` evaluations (seeded). The surrogate route trains one surrogate across
  * parcels on parcel descriptors plus the design variables (trainParcelSurrogate: dataset CSV → fitModelFile →
- * model file → loadSurrogate), runs the optimiser per parcel on it, and re-evaluates its choice exactly
+ * model file → loadSurrogate), runs the optimizer per parcel on it, and re-evaluates its choice exactly
  * (reevaluateSurrogateOptimum: the next candidates when exactly infeasible). With both, the surrogate route's
  * rankings (by re-evaluated and by predicted values) are compared with the exact one: Spearman's rho, Kendall's
  * tau-b and the top-k overlap, as the site-selection benchmark reports them; so is the no-search baseline (one exact
  * evaluation per parcel at the zone's own controls), which says how much of the ranking the parcels' sizes and zones
  * already decide. Estimates for early feasibility studies, not a zoning determination.
  * @param parcels - id and massing input (metres, zone's controls) of each parcel, ≥ 2.
- * @param options - route, objective, optimiser, budget, seed, shortlist, surrogate settings, progress.
+ * @param options - route, objective, optimizer, budget, seed, shortlist, surrogate settings, progress.
  * @returns the ranking, the evaluations each route spent and the agreement.
  * @throws TypeError/RangeError naming the field for bad options.
  */
@@ -129,8 +129,8 @@ export async function rankParcels(parcels: readonly { readonly id: string; reado
     if (!outputs.includes(c?.output)) throw new RangeError(`${fn}: constraints.${k}.output must be one of ${outputs.join(", ")}, got ${JSON.stringify(c?.output)}`);
   }
   const entry = optimizerNamed(options.optimizer ?? "pso");
-  if (entry.objectives !== "single") throw new RangeError(`${fn}: optimizer must optimise one objective; ${entry.name} gives a front`);
-  const problem: OptimisationProblem = { variables: PARCEL_DESIGN_VARIABLES, objectives: [objective], constraints: options.constraints ?? [] };
+  if (entry.objectives !== "single") throw new RangeError(`${fn}: optimizer must optimize one objective; ${entry.name} gives a front`);
+  const problem: OptimizationProblem = { variables: PARCEL_DESIGN_VARIABLES, objectives: [objective], constraints: options.constraints ?? [] };
   const zones = parcels.map((p) => p.input);
   const sign = objective.sense === "max" ? 1 : -1;
   const progress = options.onProgress ?? (() => {});

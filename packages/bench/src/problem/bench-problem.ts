@@ -1,6 +1,6 @@
 import type { MassingInput, MassingResult, Variable } from "@floorcast/sampler";
 import type { ProblemDataset } from "./problem-dataset.js";
-import type { Design, OptimisationProblem, Outputs } from "../optimise/optimisation-problem.js";
+import type { Design, OptimizationProblem, Outputs } from "../optimize/optimization-problem.js";
 
 /** What a problem asks: one objective, two objectives (a front), or a ranking of sites. */
 export type BenchProblemKind = "single" | "two-objective" | "site-selection";
@@ -16,7 +16,7 @@ export interface BenchSites {
 }
 
 /**
- * A loaded, checked benchmark problem: the optimisation problem over its design variables plus
+ * A loaded, checked benchmark problem: the optimization problem over its design variables plus
  * the exact evaluator of its fixed context (a Quillmere scenario or a published test function).
  */
 export interface BenchProblem {
@@ -27,8 +27,8 @@ export interface BenchProblem {
   /** The file it was read from (empty for an in-memory problem). */
   readonly file: string;
   readonly kind: BenchProblemKind;
-  /** Variables, objectives and constraints, in the optimisers' terms. */
-  readonly optimisation: OptimisationProblem;
+  /** Variables, objectives and constraints, in the optimizers' terms. */
+  readonly optimization: OptimizationProblem;
   /** Exact-optimum search: grid points per continuous variable and the local refinement budget. */
   readonly exact: { readonly gridPoints: number; readonly refineEvaluations: number };
   /** Outputs a surrogate must predict: objectives then constraints, without repeats. */

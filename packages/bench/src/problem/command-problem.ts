@@ -1,5 +1,5 @@
 import { commandEvaluator, type Evaluator } from "@floorcast/sampler";
-import type { Design, Outputs } from "../optimise/optimisation-problem.js";
+import type { Design, Outputs } from "../optimize/optimization-problem.js";
 
 /** The evaluation parts of a problem whose exact evaluator is an external command. */
 export interface CommandProblemParts {
@@ -16,7 +16,7 @@ export interface CommandProblemParts {
 /**
  * A problem's exact evaluator as an external program speaking JSON Lines (the sampler's commandEvaluator, the one
  * `floorcast sample --evaluator-command` runs): each design, with the problem's fixed values, is one line; the
- * program answers with one object of outputs per line. A user benchmarks and optimises their own evaluator
+ * program answers with one object of outputs per line. A user benchmarks and optimizes their own evaluator
  * exactly as the demo's massing rule.
  * @param command - the command line (run by the shell in `dir`).
  * @param fixed - values sent with every design.

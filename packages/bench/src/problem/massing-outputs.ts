@@ -1,12 +1,12 @@
 import { MASSING_OUTPUT_COLUMNS, massingOutputs } from "@floorcast/sampler";
 import type { MassingResult } from "@floorcast/sampler";
-import type { Outputs } from "../optimise/optimisation-problem.js";
+import type { Outputs } from "../optimize/optimization-problem.js";
 
 /** A numeric field of MassingResult. */
 type NumericMassingOutput = Exclude<(typeof MASSING_OUTPUT_COLUMNS)[number], "limitedBy" | "coverageCapped">;
 
 /**
- * The numeric MassingResult fields a problem may optimise or constrain: the sampler's dataset
+ * The numeric MassingResult fields a problem may optimize or constrain: the sampler's dataset
  * columns without the categorical `limitedBy` and the flag `coverageCapped`.
  */
 export const MASSING_OUTPUTS: readonly NumericMassingOutput[] = MASSING_OUTPUT_COLUMNS.filter(

@@ -1,6 +1,6 @@
 import { createDesign, evaluateMassing, mapUnitToSpace, massingEvaluator, scenarioToMassingInput } from "@floorcast/sampler";
 import type { MassingInput, Parameter, Scenario, Variable } from "@floorcast/sampler";
-import type { Design } from "../optimise/optimisation-problem.js";
+import type { Design } from "../optimize/optimization-problem.js";
 import type { BenchProblem, BenchSites } from "./bench-problem.js";
 import { problemFileSchema, type ProblemFile } from "./problem-file-schema.js";
 import { ProblemFileError } from "./problem-file-error.js";
@@ -134,7 +134,7 @@ export function parseProblem(json: unknown, fileName: string, scenario?: Scenari
     suites: f.suites,
     file: fileName,
     kind: sites ? ("site-selection" as const) : objectives.length === 2 ? ("two-objective" as const) : ("single" as const),
-    optimisation: { variables, objectives, constraints },
+    optimization: { variables, objectives, constraints },
     exact: f.exact,
     outputs,
     trainingVariables,

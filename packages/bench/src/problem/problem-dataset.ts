@@ -1,6 +1,6 @@
 import { createHash } from "node:crypto";
 import { functionEvaluator, massingEvaluator, type Evaluator, type Parameter, type Scenario, type Variable } from "@floorcast/sampler";
-import type { Design, Outputs } from "../optimise/optimisation-problem.js";
+import type { Design, Outputs } from "../optimize/optimization-problem.js";
 
 /** How a problem's training data are sampled the way `floorcast sample` samples a scenario. */
 export interface ProblemDataset {

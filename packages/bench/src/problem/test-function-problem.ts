@@ -1,4 +1,4 @@
-import type { Design, Outputs } from "../optimise/optimisation-problem.js";
+import type { Design, Outputs } from "../optimize/optimization-problem.js";
 import { branin } from "./branin.js";
 import { forrester } from "./forrester.js";
 import { sixHumpCamel } from "./six-hump-camel.js";

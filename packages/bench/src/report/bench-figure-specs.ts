@@ -14,7 +14,7 @@ const label = (s: string, sampler: string): string => (sampler === "lhs-maximin"
 
 /**
  * The Vega-Lite specs of one problem's figures: gap against training size (every trial and the
- * median), evaluations-to-target curves of the optimisers on the exact evaluator, the exact and
+ * median), evaluations-to-target curves of the optimizers on the exact evaluator, the exact and
  * surrogate-driven fronts (two objectives), and the ranking scatter (site selection).
  * @param p - the problem's report.
  * @returns the figures, in page order.
@@ -63,7 +63,7 @@ export function benchFigureSpecs(p: ProblemReport): BenchFigure[] {
       caption:
         p.kind === "two-objective"
           ? `NSGA-II and random search run directly on the exact evaluator (first seed): 1 − the hypervolume of their feasible designs so far / the exact front's, after each exact evaluation. The dashed line is the ${p.target * 100}% target; shortfalls below 1e-5 are drawn at 1e-5.`
-          : `Each optimiser run directly on the exact evaluator (first seed): the best design's relative shortfall from the exact optimum after each exact evaluation; the grid's points are its full grids at 2, 3, … points per variable. The dashed line is the ${p.target * 100}% target; shortfalls below 1e-5 are drawn at 1e-5.`,
+          : `Each optimizer run directly on the exact evaluator (first seed): the best design's relative shortfall from the exact optimum after each exact evaluation; the grid's points are its full grids at 2, 3, … points per variable. The dashed line is the ${p.target * 100}% target; shortfalls below 1e-5 are drawn at 1e-5.`,
     });
   }
   if (p.exactFront) {

@@ -35,7 +35,7 @@ async function problemSection(p: ProblemReport): Promise<PageSection> {
   );
   if (p.evaluationsToTarget.length > 0) {
     const of = p.kind === "two-objective" ? "the exact front's hypervolume" : "the exact optimum";
-    parts.push(`<p>Exact evaluations each optimiser needed to come within ${p.target * 100}% of ${of} (median over seeds; “not reached” within the budget):</p>`);
+    parts.push(`<p>Exact evaluations each optimizer needed to come within ${p.target * 100}% of ${of} (median over seeds; “not reached” within the budget):</p>`);
     parts.push(htmlTable(["method", "median", "per seed", "budget"], p.evaluationsToTarget.map((t) => [t.method, t.median === null ? "not reached" : t.median, t.evaluations.map((v) => (v === null ? "—" : v)).join(", "), t.budget])));
   }
   for (const f of benchFigureSpecs(p)) parts.push(`<h3>${escapeHtml(f.title)}</h3>`, await renderFigure(f.spec, f.caption));

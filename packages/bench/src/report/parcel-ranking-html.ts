@@ -19,9 +19,9 @@ export function parcelRankingSection(report: ParcelRankingReport): PageSection {
   const r = report.ranking;
   const o = r.objective;
   const main = (p: (typeof r.parcels)[number]) => (p.exact ?? p.surrogate)!;
-  const route = r.evaluations.exact !== null ? "the exact route (an optimiser per parcel on the exact rule)" : "the surrogate route (its choice re-evaluated exactly)";
+  const route = r.evaluations.exact !== null ? "the exact route (an optimizer per parcel on the exact rule)" : "the surrogate route (its choice re-evaluated exactly)";
   const parts: string[] = [
-    `<p>The parcels of <code>${escapeHtml(report.file)}</code> ranked by their best ${escapeHtml(o.output)} over the yards beyond the zone's minimums, the height and coverage up to the zone's caps and the floor-to-floor height (optimiser ${escapeHtml(r.optimizer)}, ${r.budget} evaluations per parcel, seed ${r.seed}).</p>`,
+    `<p>The parcels of <code>${escapeHtml(report.file)}</code> ranked by their best ${escapeHtml(o.output)} over the yards beyond the zone's minimums, the height and coverage up to the zone's caps and the floor-to-floor height (optimizer ${escapeHtml(r.optimizer)}, ${r.budget} evaluations per parcel, seed ${r.seed}).</p>`,
     parcelCapacityPlan(
       r.parcels.map((p, i) => ({ id: p.id, vertices: report.outlines[i]!, capacity: main(p).value, rank: main(p).rank })),
       `Each parcel coloured by its best ${o.output} from ${route}, labelled with its id and rank (1 = most). ${r.caution}`,

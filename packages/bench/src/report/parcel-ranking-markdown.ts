@@ -5,7 +5,7 @@ import { parcelAgreementHeader, parcelAgreementRows } from "./parcel-agreement-r
 
 
 /**
- * A parcel ranking as Markdown: what was ranked and how (objective, optimiser, budget, seed, the surrogate's
+ * A parcel ranking as Markdown: what was ranked and how (objective, optimizer, budget, seed, the surrogate's
  * training parcels and rows), the agreement of the surrogate route with the exact ranking (Spearman's rho,
  * Kendall's tau-b, top-k overlap) beside the exact evaluations each route spent, and one row per parcel in rank
  * order. Starts and ends with the caution.
@@ -19,7 +19,7 @@ export function parcelRankingMarkdown(ranking: ParcelRanking, title: string, lev
   const o = ranking.objective;
   const out: string[] = [`${h} ${title}`, "", `> **Caution.** ${ranking.caution}`, ""];
   out.push(
-    `Each parcel's best ${o.output} (${o.sense === "max" ? "maximised" : "minimised"}) over the yards beyond the zone's minimums, the height and coverage up to the zone's caps and the floor-to-floor height; optimiser ${ranking.optimizer}, ${ranking.budget} evaluations per parcel, seed ${ranking.seed}.`,
+    `Each parcel's best ${o.output} (${o.sense === "max" ? "maximised" : "minimised"}) over the yards beyond the zone's minimums, the height and coverage up to the zone's caps and the floor-to-floor height; optimizer ${ranking.optimizer}, ${ranking.budget} evaluations per parcel, seed ${ranking.seed}.`,
     "",
   );
   const e = ranking.evaluations;

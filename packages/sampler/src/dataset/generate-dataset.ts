@@ -25,7 +25,7 @@ export interface GenerateDatasetOptions {
   readonly skip?: number;
   /** Evaluator (default: the exact massing evaluator of the scenario). */
   readonly evaluator?: Evaluator | EvaluatorFunction;
-  /** Progress of an optimised design's search (createDesign's onProgress), before the first row. */
+  /** Progress of an optimized design's search (createDesign's onProgress), before the first row. */
   readonly onDesignProgress?: (done: number, total: number) => void;
 }
 
@@ -62,7 +62,7 @@ function checkOutput(out: unknown, sample: number, reserved: ReadonlySet<string>
  * every parameter, then every output (for the massing rule: every scalar of MassingResult, `limitedBy` as a
  * string, `coverageCapped` as 0/1). Streamed designs ("random", "sobol"; isStreamedDesign) are generated row by row
  * from the shard's first row, in memory that does not grow with n, their integer and categorical levels taken per
- * point (createPointMapper); the other designs (Latin or optimised over all n rows) are computed whole first, then
+ * point (createPointMapper); the other designs (Latin or optimized over all n rows) are computed whole first, then
  * only the shard's slice is evaluated. Up to `evaluator.concurrency` evaluations run at once, answers kept in order.
  * Rows are produced one at a time and never held.
  * @param scenario - a validated scenario.

@@ -36,7 +36,7 @@ export interface WriteDatasetOptions {
   readonly inputs?: readonly string[];
   /** Evaluator (default: the scenario's exact massing evaluator). Not closed here. */
   readonly evaluator?: Evaluator | EvaluatorFunction;
-  /** Progress of an optimised design's search (createDesign's onProgress), before the first row. */
+  /** Progress of an optimized design's search (createDesign's onProgress), before the first row. */
   readonly onDesignProgress?: (done: number, total: number) => void;
   /** Called after each row with rows done and rows in this file. */
   readonly onProgress?: (done: number, total: number) => void;

@@ -1,5 +1,5 @@
 import { checkCount, seededRandom } from "./check-design-args.js";
-import { eseOptimise } from "./ese-optimise.js";
+import { eseOptimize } from "./ese-optimize.js";
 import { latinHypercube } from "./latin-hypercube.js";
 import { polishCentredDiscrepancy } from "./polish-centred-discrepancy.js";
 import { randomDesign } from "./random-design.js";
@@ -27,7 +27,7 @@ export interface CreateDesignOptions {
    */
   readonly eseIterations?: number;
   /**
-   * Progress of the optimised designs ("lhs-maximin", "lhs-maximin-cd"): called after each ESE outer iteration and
+   * Progress of the optimized designs ("lhs-maximin", "lhs-maximin-cd"): called after each ESE outer iteration and
    * after the discrepancy polish with steps done and steps planned (the search may stop early; the last call has
    * done = total).
    */
@@ -39,7 +39,7 @@ export interface CreateDesignOptions {
  * - "random": independent uniform points;
  * - "lhs": Latin hypercube, a uniform point in each stratum (McKay, Beckman & Conover 1979);
  * - "lhs-centred": Latin hypercube with every point at its stratum centre;
- * - "lhs-maximin": a centred Latin hypercube optimised on φp (Morris & Mitchell 1995) by the enhanced
+ * - "lhs-maximin": a centred Latin hypercube optimized on φp (Morris & Mitchell 1995) by the enhanced
  *   stochastic evolutionary algorithm (Jin, Chen & Sudjianto 2005);
  * - "lhs-maximin-cd": "lhs-maximin", then column exchanges that lower the centred L2 discrepancy
  *   (Hickernell 1998) while every pairwise distance stays ≥ 0.7 × the maximin design's minimum distance
@@ -81,7 +81,7 @@ export function createDesign(options: CreateDesignOptions): number[][] {
           : checkCount(fn, "eseIterations", options.eseIterations, 0);
       const polish = options.design === "lhs-maximin" ? 0 : 1;
       const report = options.onProgress;
-      const maximin = eseOptimise(latinHypercube(n, dims, rng, true), rng, {
+      const maximin = eseOptimize(latinHypercube(n, dims, rng, true), rng, {
         outerIterations: iterations,
         ...(report === undefined ? {} : { onProgress: (done: number, total: number) => report(done, total + polish) }),
       });

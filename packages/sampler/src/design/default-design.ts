@@ -2,7 +2,7 @@ import type { DesignKind } from "./create-design.js";
 import { SOBOL_MAX_DIMS } from "./sobol-sequence.js";
 
 /**
- * Largest n for which the default design is the optimised Latin hypercube "lhs-maximin-cd" (ESE then the
+ * Largest n for which the default design is the optimized Latin hypercube "lhs-maximin-cd" (ESE then the
  * discrepancy polish, O(n²·d) overall): about 2 s of CPU at n = 1,000, d = 8 to 12 on one core (measured).
  */
 export const DEFAULT_OPTIMISED_MAX_N = 1000;

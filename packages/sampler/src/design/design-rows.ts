@@ -14,12 +14,12 @@ export interface DesignRowsOptions extends CreateDesignOptions {
 /**
  * Rows start … end − 1 of the design createDesign({ n, dims, design, seed }) returns, one at a time and the same
  * numbers. Streamed kinds (isStreamedDesign: "random", "sobol") are produced row by row in O(d) memory, so n may be
- * far larger than a design held whole (up to 2^30 for "sobol"); the other kinds are Latin or optimised over all n
+ * far larger than a design held whole (up to 2^30 for "sobol"); the other kinds are Latin or optimized over all n
  * rows, so they are computed whole first (createDesign's size limit applies) and each row is released once yielded.
- * @param options - createDesign's options (onProgress reports the optimisation) plus start and end.
+ * @param options - createDesign's options (onProgress reports the optimization) plus start and end.
  * @returns an iterator of unit-cube rows.
  * @throws TypeError/RangeError naming the bad field (at the call for a streamed design's options, n, dims, start
- * and end; an optimised design's own settings when iteration starts).
+ * and end; an optimized design's own settings when iteration starts).
  */
 export function designRows(options: DesignRowsOptions): IterableIterator<number[]> {
   const fn = "designRows";

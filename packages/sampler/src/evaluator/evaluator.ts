@@ -17,20 +17,20 @@ export type OutputGradient = Readonly<Record<string, Readonly<Record<string, num
 export interface BatchContext {
   /**
    * The designs' ids, one per input (their row ids in a dataset's design): external programs echo each with its
-   * answer. Dataset generation always gives them; an optimiser does not.
+   * answer. Dataset generation always gives them; an optimizer does not.
    */
   readonly samples?: readonly number[];
 }
 
 /**
  * The one evaluator contract of floorcast, used by dataset generation (`generateDataset`, `floorcast sample`) and by
- * every optimiser: a named function of a batch of designs, possibly holding resources (a child process, a worker
+ * every optimizer: a named function of a batch of designs, possibly holding resources (a child process, a worker
  * pool) released by `close`. Adapters: functionEvaluator, massingEvaluator, commandEvaluator, workerPoolEvaluator;
  * the bench adds the published test functions and the surrogates.
  *
  * `evaluate` answers a batch with one output record per input, in order. In-process evaluators may answer
  * synchronously (dataset generation then spends no promise per row); callers `await` the result either way. A
- * design that cannot be evaluated makes the whole batch reject, naming the design; an optimiser treats an output
+ * design that cannot be evaluated makes the whole batch reject, naming the design; an optimizer treats an output
  * holding NaN, or lacking an objective or constraint, as infeasible. `O` narrows the output records where an
  * evaluator is known to answer numbers only (the bench's exact and surrogate evaluators).
  */
@@ -41,7 +41,7 @@ export interface Evaluator<O extends EvaluatorOutput = EvaluatorOutput> {
   readonly concurrency: number;
   /** Evaluates a batch of designs; `context.samples` gives their ids (one per input). */
   evaluate(batch: readonly EvaluatorInput[], context?: BatchContext): readonly O[] | Promise<readonly O[]>;
-  /** Optional (surrogates): d output / d input per design, used by the gradient optimiser. */
+  /** Optional (surrogates): d output / d input per design, used by the gradient optimizer. */
   gradient?(batch: readonly EvaluatorInput[]): Promise<readonly OutputGradient[]>;
   /**
    * Optional: called once every sample has its answer, before a dataset is committed; waits for the evaluator

@@ -2,13 +2,13 @@ import type { Variable, VariableRecord } from "./variable.js";
 import { latticeCount } from "./lattice-count.js";
 
 /**
- * The one coding of a list of variables, shared by datasets, model files and optimisers:
+ * The one coding of a list of variables, shared by datasets, model files and optimizers:
  *
  * - **record**: variable name → value (a number, or a categorical level), as CSV files hold it;
  * - **model row**: one number per variable, in order, as a surrogate is trained on it and predicts from it:
  *   the value itself, a numeric categorical level as its own value (3.9 stays 3.9, exactly as `sample` writes it
  *   in the CSV), a string level as its position in `levels`;
- * - **coded vector** (the optimisers' search coordinates): the value, with a categorical as its level index;
+ * - **coded vector** (the optimizers' search coordinates): the value, with a categorical as its level index;
  *   lattice variables (integer, or continuous with a step) take min + k·step only;
  * - **unit point**: a point of [0, 1]^d (linear, or in ln(value) for a log-scale variable).
  */

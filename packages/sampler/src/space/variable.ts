@@ -42,7 +42,7 @@ export interface CategoricalVariable {
 
 /**
  * One input of a problem, the single definition shared by the design space, the datasets, the model files'
- * input schema and the optimisers: continuous (optionally log scale and a step), integer or categorical.
+ * input schema and the optimizers: continuous (optionally log scale and a step), integer or categorical.
  */
 export type Variable = ContinuousVariable | IntegerVariable | CategoricalVariable;
 

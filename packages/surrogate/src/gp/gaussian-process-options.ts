@@ -27,7 +27,7 @@ export interface GaussianProcessOptions {
   readonly inputBounds?: { readonly lower: readonly number[]; readonly upper: readonly number[] };
   /** Skip the likelihood search and use these hyperparameters, one entry per target. */
   readonly hyperparameters?: readonly GivenHyperparameters[];
-  /** Number of optimiser starts per target [3]. */
+  /** Number of optimizer starts per target [3]. */
   readonly restarts?: number;
   /** Seed of the starting points [0]. */
   readonly seed?: number;

@@ -6,7 +6,7 @@ import { formatTextTable } from "../../harness/format-text-table.js";
 import { FLOORCAST_CAUTION } from "../../floorcast-caution.js";
 
 /**
- * `floorcast demo`: the demo suite end to end (sample, fit GP and NN, assess, optimise, report) at
+ * `floorcast demo`: the demo suite end to end (sample, fit GP and NN, assess, optimize, report) at
  * the quick sizes, plus the demo parcel file ranked by capacity (drawn as a plan in the report), with progress on the terminal; prints the headline table and where the report is.
  * @param program - the root command.
  * @param ctx - the streams and exit status.
@@ -14,7 +14,7 @@ import { FLOORCAST_CAUTION } from "../../floorcast-caution.js";
 export function registerDemoCommand(program: Command, ctx: CommandContext): void {
   program
     .command("demo")
-    .description("Run the Quillmere demo suite end to end (sample, fit GP and NN, assess, optimise, report) in a few minutes")
+    .description("Run the Quillmere demo suite end to end (sample, fit GP and NN, assess, optimize, report) in a few minutes")
     .option("--out <dir>", "output directory", "floorcast-demo")
     .option("--no-peers", "skip scikit-learn's GP/MLP and scipy's LHS even when present")
     .option("--quick", "the quick sizes (training sizes 20, 40, 80; 2 seeds): the demo always uses them; accepted as in bench")

@@ -16,7 +16,7 @@ import { formatDesign } from "../../harness/format-design.js";
 import { surrogateAtOptimum, type SurrogateAtOptimum } from "../../harness/surrogate-at-optimum.js";
 import type { ReportedDesign } from "../../harness/bench-report-types.js";
 import { OPTIMIZER_NAMES, runOptimizer, type OptimizerName } from "../../harness/run-optimizer.js";
-import { optimizerNamed } from "../../optimise/optimizers.js";
+import { optimizerNamed } from "../../optimize/optimizers.js";
 import { FLOORCAST_CAUTION } from "../../floorcast-caution.js";
 import { noteUnsealedModel } from "../note-unsealed-model.js";
 import { modelInputSchema } from "../model-input-schema.js";
@@ -33,7 +33,7 @@ interface OptimizeOptions {
 }
 
 /**
- * Most evaluations one `optimize` run may ask for: the optimisers keep every evaluation (a few hundred bytes
+ * Most evaluations one `optimize` run may ask for: the optimizers keep every evaluation (a few hundred bytes
  * each), so this bounds the run's memory to a few hundred MB, checked before anything is allocated.
  */
 const MAX_OPTIMIZE_BUDGET = 1_000_000;
@@ -41,7 +41,7 @@ const MAX_OPTIMIZE_BUDGET = 1_000_000;
 const whole = (flag: string, v: string, min: number): number => parseWhole("optimize", flag, v, min);
 
 /**
- * `floorcast optimize`: optimises one problem on the exact evaluator or on a surrogate model file;
+ * `floorcast optimize`: optimizes one problem on the exact evaluator or on a surrogate model file;
  * a surrogate's optimum is re-evaluated exactly and never reported when exactly infeasible.
  * @param program - the root command.
  * @param ctx - the streams and exit status.
@@ -49,10 +49,10 @@ const whole = (flag: string, v: string, min: number): number => parseWhole("opti
 export function registerOptimizeCommand(program: Command, ctx: CommandContext): void {
   program
     .command("optimize")
-    .description("Optimise one problem file on the exact evaluator or on a surrogate (its optimum re-evaluated exactly)")
+    .description("Optimize one problem file on the exact evaluator or on a surrogate (its optimum re-evaluated exactly)")
     .requiredOption("--problem <file>", "problem file (JSON, see README \"Benchmark\")")
-    .option("--surrogate <model.json>", "optimise on this surrogate model file")
-    .option("--exact", "optimise on the exact evaluator")
+    .option("--surrogate <model.json>", "optimize on this surrogate model file")
+    .option("--exact", "optimize on the exact evaluator")
     .option("--optimizer <name>", `${OPTIMIZER_NAMES.join(", ")} (default ga, nsga2 for two objectives)`)
     .option("--seed <s>", "seed of every random draw", "1")
     .option("--budget <n>", "evaluations allowed (grid: its own count)", "2000")
@@ -105,7 +105,7 @@ export function registerOptimizeCommand(program: Command, ctx: CommandContext): 
         const tty = (ctx.stderr as { isTTY?: boolean }).isTTY === true;
         const bar = tty ? new cliProgress.SingleBar({ stream: ctx.stderr as NodeJS.WriteStream, format: `${name} [{bar}] {value}/{total} evaluations`, fps: 5 }, cliProgress.Presets.shades_classic) : null;
         let started = false;
-        const result = await runOptimizer(name, problem.optimisation, evaluator, {
+        const result = await runOptimizer(name, problem.optimization, evaluator, {
           seed,
           budget,
           gridPoints: problem.exact.gridPoints,
@@ -117,7 +117,7 @@ export function registerOptimizeCommand(program: Command, ctx: CommandContext): 
         });
         bar?.stop();
         const seconds = (performance.now() - t0) / 1000;
-        const op = problem.optimisation;
+        const op = problem.optimization;
         let designs: (ReportedDesign & { readonly surrogate?: SurrogateAtOptimum })[];
         let source = "exact";
         let exactEvaluations = opts.exact ? result.evaluations : 0;

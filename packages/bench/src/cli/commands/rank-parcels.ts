@@ -10,7 +10,7 @@ import { readParcelInputs, withParcelFileOptions, type ParcelInputOptions } from
 import { FLOORCAST_CAUTION } from "../../floorcast-caution.js";
 import { MODEL_FAMILIES } from "../../families/model-families.js";
 import { parseWhole } from "../parse-whole.js";
-import { OPTIMIZERS } from "../../optimise/optimizers.js";
+import { OPTIMIZERS } from "../../optimize/optimizers.js";
 import { rankParcelCollection } from "../../parcels/rank-parcel-collection.js";
 import { parcelRankingMarkdown } from "../../report/parcel-ranking-markdown.js";
 import type { RankAgreement } from "../../parcels/parcel-ranking.js";
@@ -51,12 +51,12 @@ export function registerRankParcelsCommand(program: Command, ctx: CommandContext
     )
     .requiredOption("--out <ranked.geojson>", "GeoJSON to write: every feature with its massing, rank and capacity properties")
     .requiredOption("--summary <name>", "writes <name>.json and <name>.md")
-    .option("--route <exact|surrogate|both>", "exact: an optimiser per parcel on the exact rule; surrogate: on a surrogate trained across parcels; both: compared", "both")
+    .option("--route <exact|surrogate|both>", "exact: an optimizer per parcel on the exact rule; surrogate: on a surrogate trained across parcels; both: compared", "both")
     .option("--objective <output>", `massing output to rank by (${NUMERIC_OUTPUTS.join(", ")})`, "gfa")
     .option("--minimise", "rank by the least value instead of the most")
-    .option("--optimizer <name>", `optimiser per parcel (${SINGLE.join(", ")})`, "pso")
+    .option("--optimizer <name>", `optimizer per parcel (${SINGLE.join(", ")})`, "pso")
     .option("--budget <n>", "evaluations per parcel (exact ones on the exact route, surrogate ones on the surrogate route)", "150")
-    .option("--seed <n>", "seed of the optimisers, the training design and the fit", "1")
+    .option("--seed <n>", "seed of the optimizers, the training design and the fit", "1")
     .option("--shortlist <k>", "length of the shortlists compared (top-k overlap); default min(3, parcels)")
     .option("--training-parcels <m>", "parcels the surrogate's training designs are drawn on; default two thirds")
     .option("--training-rows <n>", "exact evaluations in the surrogate's training set; default 8 per training parcel")

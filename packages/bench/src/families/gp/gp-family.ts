@@ -16,10 +16,10 @@ export const gpFamily: ModelFamily = {
     { flags: "--kernel <name>", description: `gp: kernel family (${KERNEL_NAMES.join(", ")})`, default: "matern52" },
     { flags: "--shared-lengthscale", description: "gp: one lengthscale for every input instead of one per input (ARD)" },
     { flags: "--noise <variance>", description: "gp: fix the noise variance (standardised target units) instead of learning it" },
-    { flags: "--restarts <n>", description: "gp: optimiser starts per target", default: "3" },
+    { flags: "--restarts <n>", description: "gp: optimizer starts per target", default: "3" },
     { flags: "--subset <m>", description: "gp: fit hyperparameters on a maximin subset of m rows, then condition on all (0 = all rows)", default: "600" },
-    { flags: "--polish <k>", description: "gp: after a subset fit, at most k optimiser iterations on all rows (default 10 up to 2,000 rows, else 0)" },
-    { flags: "--threads <n>", description: "gp: worker threads for the optimiser starts (default: one per core; the model does not depend on it)" },
+    { flags: "--polish <k>", description: "gp: after a subset fit, at most k optimizer iterations on all rows (default 10 up to 2,000 rows, else 0)" },
+    { flags: "--threads <n>", description: "gp: worker threads for the optimizer starts (default: one per core; the model does not depend on it)" },
   ],
   async fit(data, opts, seed, say) {
     const kernel = String(opts.kernel);

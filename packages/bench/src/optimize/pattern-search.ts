@@ -1,4 +1,4 @@
-import type { CommonOptions, Design, EvaluatedDesign, OptimisationProblem, OptimisationResult } from "./optimisation-problem.js";
+import type { CommonOptions, Design, EvaluatedDesign, OptimizationProblem, OptimizationResult } from "./optimization-problem.js";
 import type { Evaluator, VariableCodec } from "@floorcast/sampler";
 import { EvaluationSession } from "./evaluation-session.js";
 import { compareFeasibility } from "./feasibility-rules.js";
@@ -51,11 +51,11 @@ export function pollPoints(codec: VariableCodec, x: readonly number[], delta: nu
  * @returns the result; `best` is the best feasible design met (null if none).
  */
 export async function patternSearch(
-  problem: OptimisationProblem,
+  problem: OptimizationProblem,
   evaluator: Evaluator,
   start: Design,
   options: PatternSearchOptions,
-): Promise<OptimisationResult> {
+): Promise<OptimizationResult> {
   const fn = "patternSearch";
   validateProblem(fn, problem, evaluator, options ?? {}, "single");
   const budget = numberOption(fn, "maxEvaluations", options.maxEvaluations, NaN, 0, true);

@@ -1,12 +1,12 @@
 import type { Evaluator } from "@floorcast/sampler";
 import { PLATE_STACK_OUTPUTS, fitPlateStack, plateStackColumns, type GaussianProcessOptions, type PlateStackSurrogate } from "@floorcast/surrogate";
-import type { CommonOptions, EvaluatedDesign, OptimisationProblem, OptimisationResult } from "./optimisation-problem.js";
+import type { CommonOptions, EvaluatedDesign, OptimizationProblem, OptimizationResult } from "./optimization-problem.js";
 import { EvaluationSession } from "./evaluation-session.js";
 import { maximiseAcquisition } from "./maximise-acquisition.js";
 import { createRng, unitSamples } from "./unit-samples.js";
 import { numberOption, validateProblem } from "./validate-problem.js";
 
-/** Options of {@link plateStackBayesianOptimisation}. */
+/** Options of {@link plateStackBayesianOptimization}. */
 export interface PlateStackBayesianOptions extends CommonOptions {
   /** Initial Latin-hypercube designs (default max(6, 2·d)). */
   readonly initialSamples?: number;
@@ -21,7 +21,7 @@ export interface PlateStackBayesianOptions extends CommonOptions {
 }
 
 /**
- * Bayesian optimisation through the stacking rule (composite-function BO: Astudillo & Frazier 2019, ICML): after a
+ * Bayesian optimization through the stacking rule (composite-function BO: Astudillo & Frazier 2019, ICML): after a
  * Latin-hypercube start, each iteration fits a plate-stack surrogate to every exact evaluation so far — the
  * evaluator must report the plate profile (`sample --plate-profile` columns) beside its outputs — and evaluates the
  * design maximising the expected improvement computed by quasi-Monte Carlo through the rule:
@@ -34,12 +34,12 @@ export interface PlateStackBayesianOptions extends CommonOptions {
  * @param options - maxEvaluations (required), seed, initialSamples, candidates, acquisitionStarts, draws, gp.
  * @returns the result; `trace` holds the best feasible value after every exact evaluation.
  */
-export async function plateStackBayesianOptimisation(
-  problem: OptimisationProblem,
+export async function plateStackBayesianOptimization(
+  problem: OptimizationProblem,
   evaluator: Evaluator,
   options: PlateStackBayesianOptions,
-): Promise<OptimisationResult> {
-  const fn = "plateStackBayesianOptimisation";
+): Promise<OptimizationResult> {
+  const fn = "plateStackBayesianOptimization";
   validateProblem(fn, problem, evaluator, options ?? {}, "single");
   const budget = numberOption(fn, "maxEvaluations", options.maxEvaluations, NaN, 0, true);
   if (Number.isNaN(budget)) throw new RangeError(`${fn}: options.maxEvaluations must be given (finite)`);

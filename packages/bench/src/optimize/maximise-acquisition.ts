@@ -18,11 +18,11 @@ export interface MaximiseAcquisitionOptions {
  * Maximises an acquisition function over a problem's designs by multi-start on the model: `candidates` random
  * legal designs scored in one batch, the best `starts` refined together by mixed-variable pattern search (poll
  * steps from 0.05 of each range, halved on failure down to 1e-4; lattice values by whole steps, categoricals by
- * level swaps), one `score` call per step. Shared by Bayesian optimisation on a GP and through the plate stack.
+ * level swaps), one `score` call per step. Shared by Bayesian optimization on a GP and through the plate stack.
  * Pattern search: Torczon (1997), "On the convergence of pattern search algorithms", SIAM J. Optim. 7.
  * @param codec - the problem's variable codec.
  * @param score - the acquisition of a batch of coded designs (higher is better; −1 for designs to skip).
- * @param rng - the optimiser's seeded generator (draws the candidates).
+ * @param rng - the optimizer's seeded generator (draws the candidates).
  * @param options - candidates, starts, maxSteps, positiveOnly.
  * @returns the best refined design and its score (x undefined only when there are no starts).
  */

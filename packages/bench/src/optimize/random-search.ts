@@ -1,5 +1,5 @@
 import type { Evaluator } from "@floorcast/sampler";
-import type { CommonOptions, OptimisationProblem, OptimisationResult } from "./optimisation-problem.js";
+import type { CommonOptions, OptimizationProblem, OptimizationResult } from "./optimization-problem.js";
 import { EvaluationSession } from "./evaluation-session.js";
 import { createRng, unitSamples } from "./unit-samples.js";
 import { numberOption, validateProblem } from "./validate-problem.js";
@@ -23,10 +23,10 @@ export interface RandomSearchOptions extends CommonOptions {
  * @returns the result with `evaluations` = maxEvaluations.
  */
 export async function randomSearch(
-  problem: OptimisationProblem,
+  problem: OptimizationProblem,
   evaluator: Evaluator,
   options: RandomSearchOptions,
-): Promise<OptimisationResult> {
+): Promise<OptimizationResult> {
   const fn = "randomSearch";
   validateProblem(fn, problem, evaluator, options ?? {});
   const n = numberOption(fn, "maxEvaluations", options.maxEvaluations, NaN, 0, true);

@@ -1,5 +1,5 @@
 import type { Evaluator } from "@floorcast/sampler";
-import type { CommonOptions, OptimisationProblem, OptimisationResult } from "./optimisation-problem.js";
+import type { CommonOptions, OptimizationProblem, OptimizationResult } from "./optimization-problem.js";
 import { createVariableCodec, type VariableCodec } from "@floorcast/sampler";
 import { EvaluationSession } from "./evaluation-session.js";
 import { numberOption, validateProblem } from "./validate-problem.js";
@@ -36,7 +36,7 @@ function axisValues(codec: VariableCodec, i: number, res: number): number[] {
  * @returns one array of coded values per variable and the total count (their product).
  */
 export function gridAxes(
-  problem: OptimisationProblem,
+  problem: OptimizationProblem,
   resolution: GridSearchOptions["resolution"] = 11,
 ): { axes: number[][]; count: number } {
   const codec = createVariableCodec(problem.variables);
@@ -53,7 +53,7 @@ export function gridAxes(
 /**
  * Exhaustive grid search: evaluates every point of a full-factorial grid (step-aware; see
  * {@link GridSearchOptions.resolution}) in batches, reporting progress after each batch. The
- * baseline every other optimiser is measured against (common practice).
+ * baseline every other optimizer is measured against (common practice).
  * Throws RangeError when the grid has more points than `maxEvaluations`, rather than
  * evaluating a biased part of it.
  * @param problem - variables, objectives, constraints (any number of objectives).
@@ -62,10 +62,10 @@ export function gridAxes(
  * @returns the result; `evaluations` equals the grid's count.
  */
 export async function gridSearch(
-  problem: OptimisationProblem,
+  problem: OptimizationProblem,
   evaluator: Evaluator,
   options: GridSearchOptions = {},
-): Promise<OptimisationResult> {
+): Promise<OptimizationResult> {
   validateProblem("gridSearch", problem, evaluator, options);
   const batchSize = numberOption("gridSearch", "batchSize", options.batchSize, 256, 1, true);
   const { axes, count } = gridAxes(problem, options.resolution);

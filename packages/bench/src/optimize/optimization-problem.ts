@@ -1,13 +1,13 @@
 import type { Variable, VariableRecord } from "@floorcast/sampler";
 
 /**
- * The optimisation interface shared by every optimiser in `@floorcast/bench`.
+ * The optimization interface shared by every optimizer in `@floorcast/bench`.
  *
- * A problem is pure data ({@link OptimisationProblem}): variables, objectives and constraints on
- * outputs, its variables the sampler's one {@link Variable} contract. The function being optimised is the sampler's one
+ * A problem is pure data ({@link OptimizationProblem}): variables, objectives and constraints on
+ * outputs, its variables the sampler's one {@link Variable} contract. The function being optimized is the sampler's one
  * `Evaluator` contract (the exact massing evaluator, a user's command, a surrogate, or a published test function), so the
- * same problem runs on either; optimisers call only its `evaluate` (a batch of designs, in order) and optional `gradient`.
- * Every optimiser has the shape `optimiser(problem, evaluator, options) => Promise<OptimisationResult>`
+ * same problem runs on either; optimizers call only its `evaluate` (a batch of designs, in order) and optional `gradient`.
+ * Every optimizer has the shape `optimizer(problem, evaluator, options) => Promise<OptimizationResult>`
  * and records how many designs it evaluated and how many times it called the evaluator.
  */
 
@@ -33,17 +33,17 @@ export interface OutputConstraint {
   readonly value: number;
 }
 
-/** An optimisation problem: what to vary, what to optimise, what must hold. */
-export interface OptimisationProblem {
+/** An optimization problem: what to vary, what to optimize, what must hold. */
+export interface OptimizationProblem {
   /** At least one variable; names unique. */
   readonly variables: readonly Variable[];
-  /** At least one objective. Single-objective optimisers require exactly one. */
+  /** At least one objective. Single-objective optimizers require exactly one. */
   readonly objectives: readonly Objective[];
   /** Constraints on outputs; a design violating any is infeasible. */
   readonly constraints?: readonly OutputConstraint[];
 }
 
-/** One evaluated design, as the optimisers record it. */
+/** One evaluated design, as the optimizers record it. */
 export interface EvaluatedDesign {
   readonly design: Design;
   readonly outputs: Outputs;
@@ -57,7 +57,7 @@ export interface EvaluatedDesign {
   readonly valid: boolean;
 }
 
-/** Options every optimiser accepts. */
+/** Options every optimizer accepts. */
 export interface CommonOptions {
   /** Maximum number of designs evaluated (≥ 0; 0 evaluates nothing). */
   readonly maxEvaluations?: number;
@@ -69,8 +69,8 @@ export interface CommonOptions {
   readonly onProgress?: (done: number, total: number) => void;
 }
 
-/** What every optimiser returns. */
-export interface OptimisationResult {
+/** What every optimizer returns. */
+export interface OptimizationResult {
   /** Method name, e.g. "grid", "particle-swarm". */
   readonly method: string;
   /**

@@ -1,5 +1,5 @@
 import type { Evaluator } from "@floorcast/sampler";
-import type { CommonOptions, EvaluatedDesign, OptimisationProblem, OptimisationResult } from "./optimisation-problem.js";
+import type { CommonOptions, EvaluatedDesign, OptimizationProblem, OptimizationResult } from "./optimization-problem.js";
 import { EvaluationSession } from "./evaluation-session.js";
 import { objectiveLoss } from "./feasibility-rules.js";
 import { crowdingDistance, fastNonDominatedSort } from "./nondominated-sort.js";
@@ -35,10 +35,10 @@ interface Individual {
  * @returns the result; `front` is the feasible non-dominated set of every design evaluated.
  */
 export async function nsga2(
-  problem: OptimisationProblem,
+  problem: OptimizationProblem,
   evaluator: Evaluator,
   options: Nsga2Options = {},
-): Promise<OptimisationResult> {
+): Promise<OptimizationResult> {
   const fn = "nsga2";
   validateProblem(fn, problem, evaluator, options, "multi");
   const dims = problem.variables.length;

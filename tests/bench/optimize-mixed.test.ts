@@ -1,17 +1,17 @@
 // Mixed integer/categorical/stepped variables and output constraints.
 import { describe, expect, it } from "vitest";
 import {
-  bayesianOptimisation,
+  bayesianOptimization,
   geneticAlgorithm,
   gridSearch,
   particleSwarm,
   patternSearch,
   projectedGradient,
   type Design,
-  type OptimisationProblem,
-  type OptimisationResult,
+  type OptimizationProblem,
+  type OptimizationResult,
 } from "@floorcast/bench";
-import { fnEvaluator } from "./optimise-test-functions.js";
+import { fnEvaluator } from "./optimize-test-functions.js";
 
 // Chvátal, "Linear Programming" (1983), ch. 2, first worked example (from memory): maximise
 // 5x1 + 4x2 + 3x3 s.t. 2x1 + 3x2 + x3 ≤ 5, 4x1 + x2 + 2x3 ≤ 11, 3x1 + 4x2 + 2x3 ≤ 8, x ≥ 0;
@@ -25,7 +25,7 @@ function lp(d: Design): { z: number; r1: number; r2: number; r3: number } {
   const mult = g === "premium" ? 1.25 : g === "economy" ? 0.8 : 1;
   return { z: mult * (5 * a + 4 * b + 3 * c), r1: 2 * a + 3 * b + c, r2: 4 * a + b + 2 * c, r3: 3 * a + 4 * b + 2 * c + (g === "premium" ? 2 : 0) };
 }
-const problem: OptimisationProblem = {
+const problem: OptimizationProblem = {
   variables: [
     { kind: "integer", name: "x1", min: 0, max: 5 },
     { kind: "integer", name: "x2", min: 0, max: 5 },
@@ -42,7 +42,7 @@ const problem: OptimisationProblem = {
 const ev = () => fnEvaluator(lp);
 
 /** Independent check of a reported optimum: legal values and every constraint recomputed here. */
-function expectLegalFeasible(r: OptimisationResult): void {
+function expectLegalFeasible(r: OptimizationResult): void {
   const d = r.best!.design;
   for (const k of ["x1", "x2", "x3"]) {
     expect(Number.isInteger(d[k])).toBe(true);
@@ -104,8 +104,8 @@ describe("integer + categorical problem with an exactly known optimum (Chvátal 
     }
   });
 
-  it("Bayesian optimisation (one-hot categorical in the GP) reaches 13 within 40 exact evaluations", async () => {
-    const r = await bayesianOptimisation(problem, ev(), { seed: 1, maxEvaluations: 40 });
+  it("Bayesian optimization (one-hot categorical in the GP) reaches 13 within 40 exact evaluations", async () => {
+    const r = await bayesianOptimization(problem, ev(), { seed: 1, maxEvaluations: 40 });
     expectLegalFeasible(r);
     expect(r.best!.objectives[0]).toBe(13);
   }, 60_000);
@@ -119,7 +119,7 @@ describe("integer + categorical problem with an exactly known optimum (Chvátal 
 
 describe("stepped continuous variable: values stay on the lattice", () => {
   // Minimise (x − 0.537)² with x ∈ {0, 0.1, …, 1}: the optimum is x = 0.5 (derived).
-  const p: OptimisationProblem = {
+  const p: OptimizationProblem = {
     variables: [{ kind: "continuous", name: "x", min: 0, max: 1, step: 0.1 }],
     objectives: [{ output: "f", sense: "min" }],
   };
@@ -136,7 +136,7 @@ describe("stepped continuous variable: values stay on the lattice", () => {
 });
 
 describe("continuous constrained problem: min x² + y² s.t. x + y ≥ 1 (optimum 0.5 at (0.5, 0.5), derived by Lagrange)", () => {
-  const p: OptimisationProblem = {
+  const p: OptimizationProblem = {
     variables: [
       { kind: "continuous", name: "x", min: -2, max: 2 },
       { kind: "continuous", name: "y", min: -2, max: 2 },
@@ -155,7 +155,7 @@ describe("continuous constrained problem: min x² + y² s.t. x + y ≥ 1 (optimu
     ["GA", () => geneticAlgorithm(p, e(), { seed: 2, maxEvaluations: 3000 }), 5e-3],
     ["PSO", () => particleSwarm(p, e(), { seed: 2, maxEvaluations: 3000 }), 1e-3],
     ["gradient (penalty)", () => projectedGradient(p, e(), { seed: 2, maxEvaluations: 3000 }), 1e-2],
-    ["BO (probability of feasibility)", () => bayesianOptimisation(p, e(), { seed: 2, maxEvaluations: 35 }), 5e-2],
+    ["BO (probability of feasibility)", () => bayesianOptimization(p, e(), { seed: 2, maxEvaluations: 35 }), 5e-2],
   ])("%s reports a feasible optimum near 0.5", async (_, run, tol) => {
     const r = await run();
     const { x, y } = r.best!.design as { x: number; y: number };

@@ -1,5 +1,5 @@
 import type { Evaluator } from "@floorcast/sampler";
-import type { CommonOptions, EvaluatedDesign, OptimisationProblem, OptimisationResult } from "./optimisation-problem.js";
+import type { CommonOptions, EvaluatedDesign, OptimizationProblem, OptimizationResult } from "./optimization-problem.js";
 import { EvaluationSession } from "./evaluation-session.js";
 import { compareFeasibility, objectiveLoss } from "./feasibility-rules.js";
 import { pollPoints } from "./pattern-search.js";
@@ -19,7 +19,7 @@ export interface ProjectedGradientOptions extends CommonOptions {
 }
 
 /** Penalised merit F = loss + μ·Σ(max(0, gᵢ)/sᵢ)², sᵢ = max(1, |valueᵢ|); Infinity when invalid. */
-function merit(problem: OptimisationProblem, e: EvaluatedDesign, mu: number): number {
+function merit(problem: OptimizationProblem, e: EvaluatedDesign, mu: number): number {
   if (!e.valid) return Infinity;
   let pen = 0;
   for (const c of problem.constraints ?? []) {
@@ -47,10 +47,10 @@ function merit(problem: OptimisationProblem, e: EvaluatedDesign, mu: number): nu
  * @returns the result; `gradientCalls` counts evaluator.gradient calls.
  */
 export async function projectedGradient(
-  problem: OptimisationProblem,
+  problem: OptimizationProblem,
   evaluator: Evaluator,
   options: ProjectedGradientOptions = {},
-): Promise<OptimisationResult> {
+): Promise<OptimizationResult> {
   const fn = "projectedGradient";
   validateProblem(fn, problem, evaluator, options, "single");
   const starts = numberOption(fn, "starts", options.starts, 8, 1, true);

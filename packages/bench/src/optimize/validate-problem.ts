@@ -1,5 +1,5 @@
 import type { Evaluator } from "@floorcast/sampler";
-import type { CommonOptions, OptimisationProblem } from "./optimisation-problem.js";
+import type { CommonOptions, OptimizationProblem } from "./optimization-problem.js";
 
 function isRecord(v: unknown): v is Record<string, unknown> {
   return typeof v === "object" && v !== null && !Array.isArray(v);
@@ -12,7 +12,7 @@ function finiteNumber(fn: string, field: string, v: unknown): number {
 }
 
 /**
- * Checks a problem, an evaluator and the common options at an optimiser's entry point.
+ * Checks a problem, an evaluator and the common options at an optimizer's entry point.
  * Wrong types throw TypeError, bad values RangeError; messages start with `fn` and name the field.
  * @param fn - the public function's name, for messages.
  * @param problem - the problem to check.
@@ -22,7 +22,7 @@ function finiteNumber(fn: string, field: string, v: unknown): number {
  */
 export function validateProblem(
   fn: string,
-  problem: OptimisationProblem,
+  problem: OptimizationProblem,
   evaluator: Evaluator,
   options: CommonOptions,
   objectives: "single" | "multi" | "any" = "any",

@@ -7,9 +7,9 @@ import {
   hypervolume,
   nonDominatedIndices,
   nsga2,
-  type OptimisationProblem,
+  type OptimizationProblem,
 } from "@floorcast/bench";
-import { fnEvaluator, zdt1 } from "./optimise-test-functions.js";
+import { fnEvaluator, zdt1 } from "./optimize-test-functions.js";
 
 /** Independent reference: inclusion–exclusion over subsets of the boxes [p, ref] (minimisation). */
 function hvInclusionExclusion(points: number[][], ref: number[]): number {
@@ -94,7 +94,7 @@ describe("NSGA-II on ZDT1 (Zitzler, Deb & Thiele 2000; Pareto front f2 = 1 − �
   // = 0.1 + 2/3 + 0.11 = 1.21 − 1/3 = 0.876666…
   const HV_TRUE = 1.21 - 1 / 3;
   const nv = 30; // n = 30 as in Zitzler, Deb & Thiele (2000)
-  const problem: OptimisationProblem = {
+  const problem: OptimizationProblem = {
     variables: Array.from({ length: nv }, (_, i) => ({ kind: "continuous" as const, name: `x${i}`, min: 0, max: 1 })),
     objectives: [
       { output: "f1", sense: "min" },
@@ -133,7 +133,7 @@ describe("NSGA-II on ZDT1 (Zitzler, Deb & Thiele 2000; Pareto front f2 = 1 − �
 
 describe("NSGA-II with constraints: CONSTR (Deb et al. 2002, §VI test problem; from memory)", () => {
   // min f1 = x1, f2 = (1 + x2)/x1, s.t. 9x1 + x2 ≥ 6 and 9x1 − x2 ≥ 1, x1 ∈ [0.1, 1], x2 ∈ [0, 5].
-  const problem: OptimisationProblem = {
+  const problem: OptimizationProblem = {
     variables: [
       { kind: "continuous", name: "x1", min: 0.1, max: 1 },
       { kind: "continuous", name: "x2", min: 0, max: 5 },

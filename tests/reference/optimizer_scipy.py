@@ -1,4 +1,4 @@
-"""Peer for the optimiser benchmark: scipy.optimize.differential_evolution on published test functions.
+"""Peer for the optimizer benchmark: scipy.optimize.differential_evolution on published test functions.
 
 Reads JSON on stdin: {"runs": [{"function": name, "seed": int, "target": float, "maxfev": int}, ...]}.
 Each run minimises the named function (Virtual Library of Simulation Experiments definitions) with

@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { bayesianOptimisation, expectedImprovement, probabilityOfFeasibility, type OptimisationProblem } from "@floorcast/bench";
+import { bayesianOptimization, expectedImprovement, probabilityOfFeasibility, type OptimizationProblem } from "@floorcast/bench";
 import { referenceAvailable, runReference } from "../reference/python.js";
-import { BRANIN_MIN, branin, braninEvaluator, braninProblem, fnEvaluator, forresterEvaluator, forresterProblem } from "./optimise-test-functions.js";
+import { BRANIN_MIN, branin, braninEvaluator, braninProblem, fnEvaluator, forresterEvaluator, forresterProblem } from "./optimize-test-functions.js";
 
 const hasRef = referenceAvailable(["scipy"]);
 
@@ -50,14 +50,14 @@ describe("expected improvement: limits and properties", () => {
   });
 });
 
-describe("Bayesian optimisation with exact evaluations in the loop", () => {
+describe("Bayesian optimization with exact evaluations in the loop", () => {
   it("Branin: within 1% of 0.397887 (VLSE) in a number of evaluations comparable to EGO's", async () => {
     // Jones, Schonlau & Welch (1998), J. Global Optim. 13: EGO needed about 28 evaluations on Branin
     // (21 initial + 7 iterations, stopping when EI fell below 1% of the best) — from memory.
     // "Comparable" asserted as: every seed within 1% inside 40 evaluations, median ≤ 35 (28 + 25%).
     const hits: number[] = [];
     for (const seed of [1, 2, 3]) {
-      const r = await bayesianOptimisation(braninProblem, braninEvaluator(), { seed, maxEvaluations: 40, initialSamples: 10 });
+      const r = await bayesianOptimization(braninProblem, braninEvaluator(), { seed, maxEvaluations: 40, initialSamples: 10 });
       const k = r.trace.findIndex((v) => v <= BRANIN_MIN * 1.01);
       expect(k).toBeGreaterThanOrEqual(0);
       hits.push(k + 1);
@@ -70,13 +70,13 @@ describe("Bayesian optimisation with exact evaluations in the loop", () => {
   }, 60_000);
 
   it("Forrester: −6.0207401 at 0.7572488 (VLSE) to 1e-4 relative within 15 evaluations", async () => {
-    const r = await bayesianOptimisation(forresterProblem, forresterEvaluator(), { seed: 4, maxEvaluations: 15, initialSamples: 5 });
+    const r = await bayesianOptimization(forresterProblem, forresterEvaluator(), { seed: 4, maxEvaluations: 15, initialSamples: 5 });
     expect(Math.abs(r.best!.objectives[0]! + 6.0207400558) / 6.0207400558).toBeLessThan(1e-4);
     expect(Math.abs((r.best!.design.x as number) - 0.7572487585)).toBeLessThan(5e-3);
   }, 60_000);
 
   it("the trace is the running best of the exact values, non-increasing for a minimisation", async () => {
-    const r = await bayesianOptimisation(forresterProblem, forresterEvaluator(), { seed: 1, maxEvaluations: 10, initialSamples: 4, keepHistory: true });
+    const r = await bayesianOptimization(forresterProblem, forresterEvaluator(), { seed: 1, maxEvaluations: 10, initialSamples: 4, keepHistory: true });
     let best = Infinity;
     r.history!.forEach((e, i) => {
       best = Math.min(best, e.objectives[0]!);
@@ -85,7 +85,7 @@ describe("Bayesian optimisation with exact evaluations in the loop", () => {
   }, 60_000);
 
   it("eiTolerance stops early with 'converged' (Jones et al.'s stopping rule: EI below a fraction of the best)", async () => {
-    const r = await bayesianOptimisation(forresterProblem, forresterEvaluator(), { seed: 2, maxEvaluations: 40, initialSamples: 5, eiTolerance: 1e-3 });
+    const r = await bayesianOptimization(forresterProblem, forresterEvaluator(), { seed: 2, maxEvaluations: 40, initialSamples: 5, eiTolerance: 1e-3 });
     expect(r.stopped).toBe("converged");
     expect(r.evaluations).toBeLessThan(40);
   }, 60_000);
@@ -93,12 +93,12 @@ describe("Bayesian optimisation with exact evaluations in the loop", () => {
   it("all-infeasible start: the probability of feasibility alone guides it into a small feasible region", async () => {
     // Branin restricted to the disc of radius 1 around (π, 2.275), the feasible set is ≈ 1.4% of the box (derived):
     // an initial design of 6 points usually misses it (probability ≈ 0.986⁶ ≈ 0.92, derived).
-    const p: OptimisationProblem = { ...braninProblem, constraints: [{ output: "r", op: "<=", value: 1 }] };
+    const p: OptimizationProblem = { ...braninProblem, constraints: [{ output: "r", op: "<=", value: 1 }] };
     const ev = fnEvaluator((d) => {
       const [a, b] = [d.x1 as number, d.x2 as number];
       return { f: branin(a, b), r: Math.hypot(a - Math.PI, b - 2.275) };
     });
-    const r = await bayesianOptimisation(p, ev, { seed: 5, maxEvaluations: 30, initialSamples: 6 });
+    const r = await bayesianOptimization(p, ev, { seed: 5, maxEvaluations: 30, initialSamples: 6 });
     expect(r.best).not.toBeNull();
     expect(r.best!.feasible).toBe(true);
     expect(Math.hypot((r.best!.design.x1 as number) - Math.PI, (r.best!.design.x2 as number) - 2.275)).toBeLessThanOrEqual(1);
@@ -108,7 +108,7 @@ describe("Bayesian optimisation with exact evaluations in the loop", () => {
   it("a custom fitModel is used (and called once per iteration)", async () => {
     let fits = 0;
     const { fitGaussianProcess } = await import("@floorcast/surrogate");
-    const r = await bayesianOptimisation(forresterProblem, forresterEvaluator(), {
+    const r = await bayesianOptimization(forresterProblem, forresterEvaluator(), {
       seed: 3,
       maxEvaluations: 9,
       initialSamples: 5,

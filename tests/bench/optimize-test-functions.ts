@@ -1,7 +1,7 @@
-// Published test functions for the optimiser tests. Definitions and optima: Virtual Library of
+// Published test functions for the optimizer tests. Definitions and optima: Virtual Library of
 // Simulation Experiments, Surjanovic & Bingham, http://www.sfu.ca/~ssurjano/ (forrester.html, branin.html,
 // camel6.html, goldpr.html). ZDT1: Zitzler, Deb & Thiele (2000), Evolutionary Computation 8(2).
-import type { Design, Evaluator, OptimisationProblem, Outputs } from "@floorcast/bench";
+import type { Design, Evaluator, OptimizationProblem, Outputs } from "@floorcast/bench";
 
 /** Branin–Hoo with a = 1, b = 5.1/(4π²), c = 5/π, r = 6, s = 10, t = 1/(8π) (VLSE). */
 export function branin(x1: number, x2: number): number {
@@ -57,7 +57,7 @@ export function fnEvaluator(f: (d: Design) => Outputs): Evaluator & { calls: num
   return ev;
 }
 
-export const braninProblem: OptimisationProblem = {
+export const braninProblem: OptimizationProblem = {
   variables: [
     { kind: "continuous", name: "x1", min: -5, max: 10 },
     { kind: "continuous", name: "x2", min: 0, max: 15 },
@@ -67,7 +67,7 @@ export const braninProblem: OptimisationProblem = {
 export const braninEvaluator = (): ReturnType<typeof fnEvaluator> =>
   fnEvaluator((d) => ({ f: branin(d.x1 as number, d.x2 as number) }));
 
-export const camelProblem: OptimisationProblem = {
+export const camelProblem: OptimizationProblem = {
   variables: [
     { kind: "continuous", name: "x1", min: -3, max: 3 },
     { kind: "continuous", name: "x2", min: -2, max: 2 },
@@ -77,7 +77,7 @@ export const camelProblem: OptimisationProblem = {
 export const camelEvaluator = (): ReturnType<typeof fnEvaluator> =>
   fnEvaluator((d) => ({ f: camel(d.x1 as number, d.x2 as number) }));
 
-export const forresterProblem: OptimisationProblem = {
+export const forresterProblem: OptimizationProblem = {
   variables: [{ kind: "continuous", name: "x", min: 0, max: 1 }],
   objectives: [{ output: "f", sense: "min" }],
 };

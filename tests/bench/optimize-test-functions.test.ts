@@ -1,4 +1,4 @@
-// Optimisers against the published optima of the Virtual Library of Simulation Experiments
+// Optimizers against the published optima of the Virtual Library of Simulation Experiments
 // (Surjanovic & Bingham, http://www.sfu.ca/~ssurjano/).
 import { describe, expect, it } from "vitest";
 import {
@@ -9,7 +9,7 @@ import {
   projectedGradient,
   randomSearch,
   type Design,
-  type OptimisationProblem,
+  type OptimizationProblem,
 } from "@floorcast/bench";
 import {
   BRANIN_MIN,
@@ -26,7 +26,7 @@ import {
   forresterProblem,
   goldsteinPrice,
   nearestBraninMinimiser,
-} from "./optimise-test-functions.js";
+} from "./optimize-test-functions.js";
 
 // VLSE values.
 const FORRESTER_MIN = -6.0207400558;
@@ -165,7 +165,7 @@ describe("six-hump camel (VLSE: −1.0316284535 at ±(0.08984201, −0.71265641)
 });
 
 describe("Goldstein–Price (VLSE: 3 at (0, −1)), maximised as −f to exercise sense = max", () => {
-  const problem: OptimisationProblem = {
+  const problem: OptimizationProblem = {
     variables: [
       { kind: "continuous", name: "x1", min: -2, max: 2 },
       { kind: "continuous", name: "x2", min: -2, max: 2 },

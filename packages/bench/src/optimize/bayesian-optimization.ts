@@ -1,6 +1,6 @@
 import type { Evaluator } from "@floorcast/sampler";
 import { fitGaussianProcess, type GivenHyperparameters, type Prediction, type TrainingData } from "@floorcast/surrogate";
-import type { CommonOptions, EvaluatedDesign, OptimisationProblem, OptimisationResult } from "./optimisation-problem.js";
+import type { CommonOptions, EvaluatedDesign, OptimizationProblem, OptimizationResult } from "./optimization-problem.js";
 import { createVariableCodec, type VariableCodec } from "@floorcast/sampler";
 import { EvaluationSession } from "./evaluation-session.js";
 import { expectedImprovement, probabilityOfFeasibility } from "./expected-improvement.js";
@@ -14,8 +14,8 @@ export interface AcquisitionModel {
   predict(x: readonly (readonly number[])[]): Prediction;
 }
 
-/** Options of {@link bayesianOptimisation}. */
-export interface BayesianOptimisationOptions extends CommonOptions {
+/** Options of {@link bayesianOptimization}. */
+export interface BayesianOptimizationOptions extends CommonOptions {
   /** Initial Latin-hypercube designs (default max(5, 5·d), d = variables with more than one value; at most maxEvaluations). */
   readonly initialSamples?: number;
   /** Random candidates scored per iteration before local refinement of the best (default 1000). */
@@ -50,7 +50,7 @@ function modelRow(codec: VariableCodec, x: readonly number[]): number[] {
 }
 
 /** Targets modelled: the loss, then each constraint as g = ±(output − value)/max(1, |value|) (≤ 0 feasible). */
-function targetsOf(problem: OptimisationProblem, e: EvaluatedDesign): number[] {
+function targetsOf(problem: OptimizationProblem, e: EvaluatedDesign): number[] {
   const g = (problem.constraints ?? []).map((c) => {
     const v = e.outputs[c.output]!;
     return (c.op === "<=" ? v - c.value : c.value - v) / Math.max(1, Math.abs(c.value));
@@ -78,7 +78,7 @@ function defaultFit(growth: number): (data: TrainingData, seed: number) => Acqui
 }
 
 /**
- * Bayesian optimisation with expected improvement (EGO; Jones, Schonlau & Welch 1998, J. Global
+ * Bayesian optimization with expected improvement (EGO; Jones, Schonlau & Welch 1998, J. Global
  * Optim. 13:455–492) and exact evaluations in the loop: a Latin-hypercube initial design, then per
  * iteration fit one GP to the loss and one per constraint (independent GPs), and evaluate the
  * design maximising EI × Π P(gᵢ ≤ 0) (probability of feasibility; Schonlau, Welch & Jones 1998;
@@ -93,12 +93,12 @@ function defaultFit(growth: number): (data: TrainingData, seed: number) => Acqui
  * @param options - maxEvaluations (required, finite), seed, initialSamples, candidates, acquisitionStarts, eiTolerance, fitModel.
  * @returns the result.
  */
-export async function bayesianOptimisation(
-  problem: OptimisationProblem,
+export async function bayesianOptimization(
+  problem: OptimizationProblem,
   evaluator: Evaluator,
-  options: BayesianOptimisationOptions,
-): Promise<OptimisationResult> {
-  const fn = "bayesianOptimisation";
+  options: BayesianOptimizationOptions,
+): Promise<OptimizationResult> {
+  const fn = "bayesianOptimization";
   validateProblem(fn, problem, evaluator, options ?? {}, "single");
   const budget = numberOption(fn, "maxEvaluations", options.maxEvaluations, NaN, 0, true);
   if (Number.isNaN(budget)) throw new RangeError(`${fn}: options.maxEvaluations must be given (finite)`);
@@ -110,7 +110,7 @@ export async function bayesianOptimisation(
   const eiTol = numberOption(fn, "eiTolerance", options.eiTolerance, 0, 0);
   if (options.fitModel !== undefined && typeof options.fitModel !== "function") throw new TypeError(`${fn}: options.fitModel must be a function`);
   const fit = options.fitModel ?? defaultFit(numberOption(fn, "refitGrowth", options.refitGrowth, 1.2, 1));
-  const session = new EvaluationSession("bayesian-optimisation", problem, evaluator, options, budget);
+  const session = new EvaluationSession("bayesian-optimization", problem, evaluator, options, budget);
   const { codec } = session;
   const rng = createRng(options.seed);
   const seen = new Set<string>();

@@ -1,5 +1,5 @@
 import type { Evaluator } from "@floorcast/sampler";
-import type { CommonOptions, EvaluatedDesign, OptimisationProblem, OptimisationResult } from "./optimisation-problem.js";
+import type { CommonOptions, EvaluatedDesign, OptimizationProblem, OptimizationResult } from "./optimization-problem.js";
 import { EvaluationSession } from "./evaluation-session.js";
 import { compareFeasibility } from "./feasibility-rules.js";
 import { createRng, unitSamples, type Rng } from "./unit-samples.js";
@@ -39,7 +39,7 @@ function sampleLevel(q: readonly number[], rng: Rng): number {
 }
 
 /**
- * Particle swarm optimisation (Kennedy & Eberhart 1995) with the constriction coefficient of
+ * Particle swarm optimization (Kennedy & Eberhart 1995) with the constriction coefficient of
  * Clerc & Kennedy (2002, IEEE TEC 6(1)): v ← χ[v + c1·r1·(p − x) + c2·r2·(g − x)], x ← x + v with
  * χ ≈ 0.7298 and c1 = c2 = 2.05 (φ = 4.1), global-best topology, velocities clamped to each
  * variable's range and absorbing walls. Personal and global bests compare by Deb's feasibility rules.
@@ -60,10 +60,10 @@ function sampleLevel(q: readonly number[], rng: Rng): number {
  * @returns the result.
  */
 export async function particleSwarm(
-  problem: OptimisationProblem,
+  problem: OptimizationProblem,
   evaluator: Evaluator,
   options: ParticleSwarmOptions = {},
-): Promise<OptimisationResult> {
+): Promise<OptimizationResult> {
   const fn = "particleSwarm";
   validateProblem(fn, problem, evaluator, options, "single");
   const dims = problem.variables.length;

@@ -1,15 +1,15 @@
-// @floorcast/bench/optimizers: the optimisers, their problem and evaluator contract, and the registry.
+// @floorcast/bench/optimizers: the optimizers, their problem and evaluator contract, and the registry.
 // Loads no CLI parser, chart package, progress bar or tfjs (a test checks the loaded modules).
 export type {
   CommonOptions,
   Design,
   EvaluatedDesign,
   Objective,
-  OptimisationProblem,
-  OptimisationResult,
+  OptimizationProblem,
+  OptimizationResult,
   OutputConstraint,
   Outputs,
-} from "./optimisation-problem.js";
+} from "./optimization-problem.js";
 export { scoreOutputs } from "./evaluation-session.js";
 export { compareFeasibility, objectiveLoss } from "./feasibility-rules.js";
 export { dominates, nonDominatedIndices } from "./pareto-dominance.js";
@@ -31,7 +31,7 @@ export type { Nsga2Options } from "./nsga2.js";
 export { projectedGradient } from "./projected-gradient.js";
 export type { ProjectedGradientOptions } from "./projected-gradient.js";
 export { expectedImprovement, probabilityOfFeasibility } from "./expected-improvement.js";
-export { bayesianOptimisation } from "./bayesian-optimisation.js";
-export type { AcquisitionModel, BayesianOptimisationOptions } from "./bayesian-optimisation.js";
+export { bayesianOptimization } from "./bayesian-optimization.js";
+export type { AcquisitionModel, BayesianOptimizationOptions } from "./bayesian-optimization.js";
 export { OPTIMIZERS, optimizerNamed } from "./optimizers.js";
 export type { OptimizerEntry, OptimizerRunOptions } from "./optimizers.js";

@@ -1,4 +1,4 @@
-import type { EvaluatedDesign, OptimisationProblem } from "./optimisation-problem.js";
+import type { EvaluatedDesign, OptimizationProblem } from "./optimization-problem.js";
 
 /**
  * The objective as a loss to minimise: the value for "min", its negation for "max".
@@ -6,7 +6,7 @@ import type { EvaluatedDesign, OptimisationProblem } from "./optimisation-proble
  * @param e - an evaluated design.
  * @param k - objective index (default 0).
  */
-export function objectiveLoss(problem: OptimisationProblem, e: EvaluatedDesign, k = 0): number {
+export function objectiveLoss(problem: OptimizationProblem, e: EvaluatedDesign, k = 0): number {
   const v = e.objectives[k]!;
   return problem.objectives[k]!.sense === "max" ? -v : v;
 }
@@ -17,7 +17,7 @@ export function objectiveLoss(problem: OptimisationProblem, e: EvaluatedDesign, 
  * compare by objective; two infeasible ones by total constraint violation.
  * @returns negative when `a` is better, positive when `b` is, 0 when tied.
  */
-export function compareFeasibility(problem: OptimisationProblem, a: EvaluatedDesign, b: EvaluatedDesign): number {
+export function compareFeasibility(problem: OptimizationProblem, a: EvaluatedDesign, b: EvaluatedDesign): number {
   if (a.feasible && b.feasible) return objectiveLoss(problem, a) - objectiveLoss(problem, b);
   if (a.feasible) return -1;
   if (b.feasible) return 1;

@@ -1,5 +1,5 @@
 import { createVariableCodec, type Evaluator, type EvaluatorOutput, type OutputGradient, type VariableCodec } from "@floorcast/sampler";
-import type { CommonOptions, EvaluatedDesign, OptimisationProblem, OptimisationResult, Outputs } from "./optimisation-problem.js";
+import type { CommonOptions, EvaluatedDesign, OptimizationProblem, OptimizationResult, Outputs } from "./optimization-problem.js";
 import { compareFeasibility, objectiveLoss } from "./feasibility-rules.js";
 import { dominates } from "./pareto-dominance.js";
 
@@ -8,7 +8,7 @@ import { dominates } from "./pareto-dominance.js";
  * Σ max(0, gᵢ)/max(1, |valueᵢ|) (violations scaled so that constraints of different units
  * weigh alike; common practice), feasibility and validity (NaN/missing → invalid, infeasible).
  */
-export function scoreOutputs(problem: OptimisationProblem, design: EvaluatedDesign["design"], answer: EvaluatorOutput): EvaluatedDesign {
+export function scoreOutputs(problem: OptimizationProblem, design: EvaluatedDesign["design"], answer: EvaluatorOutput): EvaluatedDesign {
   const outputs = numericOutputs(answer);
   const num = (name: string): number => {
     const v = outputs[name];
@@ -27,7 +27,7 @@ export function scoreOutputs(problem: OptimisationProblem, design: EvaluatedDesi
   return { design, outputs, objectives, violation, feasible: valid && violation === 0, valid };
 }
 
-/** The numeric outputs of an answer (an evaluator may also answer strings or booleans, which optimisers do not read). */
+/** The numeric outputs of an answer (an evaluator may also answer strings or booleans, which optimizers do not read). */
 function numericOutputs(answer: EvaluatorOutput): Outputs {
   for (const k in answer) {
     if (typeof answer[k] !== "number") {
@@ -38,7 +38,7 @@ function numericOutputs(answer: EvaluatorOutput): Outputs {
 }
 
 /**
- * Wraps an evaluator for one optimiser run: enforces the evaluation budget, counts designs,
+ * Wraps an evaluator for one optimizer run: enforces the evaluation budget, counts designs,
  * evaluator calls and gradient calls, scores outputs, and keeps the best design (Deb's rules),
  * the feasible non-dominated archive, the best-so-far trace and (optionally) the history.
  */
@@ -58,7 +58,7 @@ export class EvaluationSession {
 
   constructor(
     readonly method: string,
-    readonly problem: OptimisationProblem,
+    readonly problem: OptimizationProblem,
     private readonly evaluator: Evaluator,
     private readonly options: CommonOptions,
     private readonly planned = Infinity,
@@ -140,9 +140,9 @@ export class EvaluationSession {
   }
 
   /** The run's result. */
-  result(stopped: OptimisationResult["stopped"]): OptimisationResult {
+  result(stopped: OptimizationResult["stopped"]): OptimizationResult {
     const front = this.problem.objectives.length > 1 ? [...this.front] : this.best ? [this.best] : [];
-    const r: OptimisationResult = {
+    const r: OptimizationResult = {
       method: this.method,
       best: this.best,
       front,

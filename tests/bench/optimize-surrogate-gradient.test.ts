@@ -4,7 +4,7 @@ import fc from "fast-check";
 import { fitGaussianProcess } from "@floorcast/surrogate";
 import { createDesign } from "@floorcast/sampler";
 import { dominates, nonDominatedIndices, projectedGradient, type Design, type Evaluator } from "@floorcast/bench";
-import { branin, braninProblem } from "./optimise-test-functions.js";
+import { branin, braninProblem } from "./optimize-test-functions.js";
 
 describe("projected gradient with a GP's analytic mean gradient (Branin surrogate)", () => {
   // A GP fitted to 60 Latin-hypercube Branin points (VLSE function) stands in for a surrogate.

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import {
-  bayesianOptimisation,
+  bayesianOptimization,
   geneticAlgorithm,
   gridAxes,
   gridSearch,
@@ -11,23 +11,23 @@ import {
   projectedGradient,
   randomSearch,
   scoreOutputs,
-  type OptimisationProblem,
+  type OptimizationProblem,
 } from "@floorcast/bench";
 import { createVariableCodec } from "@floorcast/sampler";
-import { braninEvaluator, braninProblem, fnEvaluator, forrester, forresterProblem } from "./optimise-test-functions.js";
+import { braninEvaluator, braninProblem, fnEvaluator, forrester, forresterProblem } from "./optimize-test-functions.js";
 
 const single = [
-  ["gridSearch", (p: OptimisationProblem, e: ReturnType<typeof fnEvaluator>, m: number) => gridSearch(p, e, { maxEvaluations: m, resolution: 5 })],
-  ["randomSearch", (p: OptimisationProblem, e: ReturnType<typeof fnEvaluator>, m: number) => randomSearch(p, e, { maxEvaluations: m, seed: 1 })],
-  ["lhs", (p: OptimisationProblem, e: ReturnType<typeof fnEvaluator>, m: number) => randomSearch(p, e, { maxEvaluations: m, seed: 1, design: "lhs" })],
-  ["geneticAlgorithm", (p: OptimisationProblem, e: ReturnType<typeof fnEvaluator>, m: number) => geneticAlgorithm(p, e, { maxEvaluations: m, seed: 1 })],
-  ["particleSwarm", (p: OptimisationProblem, e: ReturnType<typeof fnEvaluator>, m: number) => particleSwarm(p, e, { maxEvaluations: m, seed: 1 })],
-  ["projectedGradient", (p: OptimisationProblem, e: ReturnType<typeof fnEvaluator>, m: number) => projectedGradient(p, e, { maxEvaluations: m, seed: 1 })],
-  ["patternSearch", (p: OptimisationProblem, e: ReturnType<typeof fnEvaluator>, m: number) => patternSearch(p, e, { x1: 0, x2: 5 }, { maxEvaluations: m })],
-  ["bayesianOptimisation", (p: OptimisationProblem, e: ReturnType<typeof fnEvaluator>, m: number) => bayesianOptimisation(p, e, { maxEvaluations: m, seed: 1 })],
+  ["gridSearch", (p: OptimizationProblem, e: ReturnType<typeof fnEvaluator>, m: number) => gridSearch(p, e, { maxEvaluations: m, resolution: 5 })],
+  ["randomSearch", (p: OptimizationProblem, e: ReturnType<typeof fnEvaluator>, m: number) => randomSearch(p, e, { maxEvaluations: m, seed: 1 })],
+  ["lhs", (p: OptimizationProblem, e: ReturnType<typeof fnEvaluator>, m: number) => randomSearch(p, e, { maxEvaluations: m, seed: 1, design: "lhs" })],
+  ["geneticAlgorithm", (p: OptimizationProblem, e: ReturnType<typeof fnEvaluator>, m: number) => geneticAlgorithm(p, e, { maxEvaluations: m, seed: 1 })],
+  ["particleSwarm", (p: OptimizationProblem, e: ReturnType<typeof fnEvaluator>, m: number) => particleSwarm(p, e, { maxEvaluations: m, seed: 1 })],
+  ["projectedGradient", (p: OptimizationProblem, e: ReturnType<typeof fnEvaluator>, m: number) => projectedGradient(p, e, { maxEvaluations: m, seed: 1 })],
+  ["patternSearch", (p: OptimizationProblem, e: ReturnType<typeof fnEvaluator>, m: number) => patternSearch(p, e, { x1: 0, x2: 5 }, { maxEvaluations: m })],
+  ["bayesianOptimization", (p: OptimizationProblem, e: ReturnType<typeof fnEvaluator>, m: number) => bayesianOptimization(p, e, { maxEvaluations: m, seed: 1 })],
 ] as const;
 
-describe("optimiser entry points: validation (common practice: TypeError for types, RangeError for values)", () => {
+describe("optimizer entry points: validation (common practice: TypeError for types, RangeError for values)", () => {
   it("rejects an empty variable list, min > max, bad steps, duplicate names and levels", async () => {
     const ev = braninEvaluator();
     const obj = braninProblem.objectives;
@@ -76,9 +76,9 @@ describe("optimiser entry points: validation (common practice: TypeError for typ
   });
 
   it("single-objective methods refuse two objectives; NSGA-II refuses one", async () => {
-    const two: OptimisationProblem = { ...braninProblem, objectives: [{ output: "f", sense: "min" }, { output: "g", sense: "max" }] };
+    const two: OptimizationProblem = { ...braninProblem, objectives: [{ output: "f", sense: "min" }, { output: "g", sense: "max" }] };
     await expect(geneticAlgorithm(two, braninEvaluator())).rejects.toThrow(/exactly one objective, got 2/);
-    await expect(bayesianOptimisation(two, braninEvaluator(), { maxEvaluations: 5 })).rejects.toThrow(RangeError);
+    await expect(bayesianOptimization(two, braninEvaluator(), { maxEvaluations: 5 })).rejects.toThrow(RangeError);
     await expect(nsga2(braninProblem, braninEvaluator())).rejects.toThrow(/at least two objectives, got 1/);
   });
 
@@ -114,7 +114,7 @@ describe("NaN outputs are infeasible, counted and never reported", () => {
     ["GA", () => geneticAlgorithm(forresterProblem, ev(), { seed: 2, maxEvaluations: 400 })],
     ["PSO", () => particleSwarm(forresterProblem, ev(), { seed: 2, maxEvaluations: 400 })],
     ["gradient", () => projectedGradient(forresterProblem, ev(), { seed: 2, maxEvaluations: 400 })],
-    ["BO", () => bayesianOptimisation(forresterProblem, ev(), { seed: 2, maxEvaluations: 15 })],
+    ["BO", () => bayesianOptimization(forresterProblem, ev(), { seed: 2, maxEvaluations: 15 })],
   ])("%s", async (_, run) => {
     const r = await run();
     expect(r.invalid).toBeGreaterThan(0);
@@ -124,7 +124,7 @@ describe("NaN outputs are infeasible, counted and never reported", () => {
     expect(r.best!.design.x as number).toBeGreaterThanOrEqual(0.5);
   });
   it("scoreOutputs marks NaN, missing and infinite outputs invalid with infinite violation", () => {
-    const p: OptimisationProblem = { ...forresterProblem, constraints: [{ output: "h", op: "<=", value: 2 }] };
+    const p: OptimizationProblem = { ...forresterProblem, constraints: [{ output: "h", op: "<=", value: 2 }] };
     for (const o of [{ f: NaN, h: 1 }, { f: 1 }, { f: 1, h: Infinity }, { f: -Infinity, h: 0 }]) {
       const e = scoreOutputs(p, { x: 0.1 }, o);
       expect(e.valid).toBe(false);
@@ -143,7 +143,7 @@ describe("determinism by seed", () => {
     ["PSO", (s: number) => particleSwarm(braninProblem, braninEvaluator(), { seed: s, maxEvaluations: 200 })],
     ["LHS", (s: number) => randomSearch(braninProblem, braninEvaluator(), { seed: s, maxEvaluations: 50, design: "lhs" })],
     ["gradient", (s: number) => projectedGradient(braninProblem, braninEvaluator(), { seed: s, maxEvaluations: 200 })],
-    ["BO", (s: number) => bayesianOptimisation(braninProblem, braninEvaluator(), { seed: s, maxEvaluations: 14 })],
+    ["BO", (s: number) => bayesianOptimization(braninProblem, braninEvaluator(), { seed: s, maxEvaluations: 14 })],
   ])("%s: same seed, same run; another seed, another run", async (_, run) => {
     const a = await run(7);
     const b = await run(7);
@@ -156,7 +156,7 @@ describe("determinism by seed", () => {
 
 describe("grid: step-aware axes and a degenerate bound", () => {
   it("counts lattice values, levels and fixed variables (derived by hand)", () => {
-    const p: OptimisationProblem = {
+    const p: OptimizationProblem = {
       variables: [
         { kind: "continuous", name: "a", min: 0, max: 1 },
         { kind: "continuous", name: "b", min: 0, max: 1, step: 0.25 },
@@ -185,14 +185,14 @@ describe("grid: step-aware axes and a degenerate bound", () => {
 
 describe("a degenerate bound (min = max) is a fixed variable, not an error", () => {
   // Branin plus a variable fixed at 3 that the function ignores: the optimum stays 5/(4π) (VLSE).
-  const p: OptimisationProblem = { ...braninProblem, variables: [...braninProblem.variables, { kind: "continuous", name: "fixed", min: 3, max: 3 }] };
+  const p: OptimizationProblem = { ...braninProblem, variables: [...braninProblem.variables, { kind: "continuous", name: "fixed", min: 3, max: 3 }] };
   it.each([
     ["GA", () => geneticAlgorithm(p, braninEvaluator(), { seed: 1, maxEvaluations: 300, keepHistory: true })],
     ["PSO", () => particleSwarm(p, braninEvaluator(), { seed: 1, maxEvaluations: 300, keepHistory: true })],
     ["gradient", () => projectedGradient(p, braninEvaluator(), { seed: 1, maxEvaluations: 300, keepHistory: true })],
-    ["BO", () => bayesianOptimisation(p, braninEvaluator(), { seed: 1, maxEvaluations: 15, keepHistory: true })],
+    ["BO", () => bayesianOptimization(p, braninEvaluator(), { seed: 1, maxEvaluations: 15, keepHistory: true })],
     ["pattern", () => patternSearch(p, braninEvaluator(), { x1: 0, x2: 5, fixed: 3 }, { maxEvaluations: 100, keepHistory: true })],
-  ])("%s keeps it at 3 and still optimises the rest", async (_, run) => {
+  ])("%s keeps it at 3 and still optimizes the rest", async (_, run) => {
     const r = await run();
     expect(r.history!.every((e) => e.design.fixed === 3)).toBe(true);
     expect(r.best!.objectives[0]!).toBeLessThan(5); // the box's range of Branin is ≈ 0.4 … 308 (VLSE plot)
@@ -201,7 +201,7 @@ describe("a degenerate bound (min = max) is a fixed variable, not an error", () 
 
 describe("codec property: every coded vector is legal (fast-check)", () => {
   it("fromUnit and snap stay in bounds, on the lattice, on a level", () => {
-    const p: OptimisationProblem = {
+    const p: OptimizationProblem = {
       variables: [
         { kind: "continuous", name: "a", min: -2, max: 5, step: 0.5 },
         { kind: "integer", name: "n", min: -3, max: 4 },
@@ -224,7 +224,7 @@ describe("codec property: every coded vector is legal (fast-check)", () => {
   });
 });
 
-describe("one evaluator contract: the sampler's evaluators plug straight into the optimisers", () => {
+describe("one evaluator contract: the sampler's evaluators plug straight into the optimizers", () => {
   it("randomSearch on massingEvaluator finds a design whose outputs are the rule's; string outputs are left out", async () => {
     const { loadScenario, massingEvaluator } = await import("@floorcast/sampler");
     const scenario = await loadScenario(new URL("../../datasets/scenarios/larkspur-terraces.json", import.meta.url).pathname);
@@ -233,7 +233,7 @@ describe("one evaluator contract: the sampler's evaluators plug straight into th
       ...exact,
       evaluate: (batch: readonly Record<string, number | string | boolean>[]) => exact.evaluate(batch.map((d) => ({ ...scenario.fixed, ...d }))),
     };
-    const problem: OptimisationProblem = { variables: scenario.parameters, objectives: [{ output: "gfa", sense: "max" }] };
+    const problem: OptimizationProblem = { variables: scenario.parameters, objectives: [{ output: "gfa", sense: "max" }] };
     const r = await randomSearch(problem, withFixed, { maxEvaluations: 30, seed: 3, keepHistory: true });
     expect(r.evaluations).toBe(30);
     expect(r.best).not.toBeNull();

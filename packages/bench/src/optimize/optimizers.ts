@@ -1,6 +1,6 @@
 import type { Evaluator } from "@floorcast/sampler";
-import type { CommonOptions, OptimisationProblem, OptimisationResult } from "./optimisation-problem.js";
-import { bayesianOptimisation, type BayesianOptimisationOptions } from "./bayesian-optimisation.js";
+import type { CommonOptions, OptimizationProblem, OptimizationResult } from "./optimization-problem.js";
+import { bayesianOptimization, type BayesianOptimizationOptions } from "./bayesian-optimization.js";
 import { geneticAlgorithm } from "./genetic-algorithm.js";
 import { gridSearch } from "./grid-search.js";
 import { nsga2 } from "./nsga2.js";
@@ -8,22 +8,22 @@ import { particleSwarm } from "./particle-swarm.js";
 import { projectedGradient } from "./projected-gradient.js";
 import { randomSearch } from "./random-search.js";
 
-/** Options every registered optimiser takes: the common ones, a grid resolution and the method's own extras. */
+/** Options every registered optimizer takes: the common ones, a grid resolution and the method's own extras. */
 export type OptimizerRunOptions = CommonOptions & { readonly gridPoints?: number } & Readonly<Record<string, unknown>>;
 
-/** One registered optimiser: its `--optimizer` name, how many objectives it optimises, and how to run it. */
+/** One registered optimizer: its `--optimizer` name, how many objectives it optimizes, and how to run it. */
 export interface OptimizerEntry {
   readonly name: string;
   /** "single": the first objective (Deb's feasibility rules); "two": a front of two objectives. */
   readonly objectives: "single" | "two";
   /** One line for the help text and the README table. */
   readonly summary: string;
-  run(problem: OptimisationProblem, evaluator: Evaluator, options: OptimizerRunOptions): Promise<OptimisationResult>;
+  run(problem: OptimizationProblem, evaluator: Evaluator, options: OptimizerRunOptions): Promise<OptimizationResult>;
 }
 
 /**
- * Every optimiser the CLI (`optimize --optimizer`), the benchmark harness and the benchmarks run, by name. Adding
- * one: its file under `optimise/` and one line here.
+ * Every optimizer the CLI (`optimize --optimizer`), the benchmark harness and the benchmarks run, by name. Adding
+ * one: its file under `optimize/` and one line here.
  */
 export const OPTIMIZERS: readonly OptimizerEntry[] = [
   { name: "grid", objectives: "single", summary: "exhaustive grid", run: (p, e, o) => gridSearch(p, e, { ...withoutBudget(o), resolution: o.gridPoints ?? 21 }) },
@@ -33,18 +33,18 @@ export const OPTIMIZERS: readonly OptimizerEntry[] = [
   { name: "pso", objectives: "single", summary: "particle swarm", run: (p, e, o) => particleSwarm(p, e, o) },
   { name: "ga", objectives: "single", summary: "real-coded genetic algorithm", run: (p, e, o) => geneticAlgorithm(p, e, o) },
   { name: "nsga2", objectives: "two", summary: "NSGA-II front", run: (p, e, o) => nsga2(p, e, o) },
-  { name: "bo", objectives: "single", summary: "Bayesian optimisation (expected improvement)", run: (p, e, o) => bayesianOptimisation(p, e, o as BayesianOptimisationOptions) },
+  { name: "bo", objectives: "single", summary: "Bayesian optimization (expected improvement)", run: (p, e, o) => bayesianOptimization(p, e, o as BayesianOptimizationOptions) },
 ];
 
 /**
- * The registered optimiser of a name.
+ * The registered optimizer of a name.
  * @param name - e.g. "ga".
  * @returns the entry.
  * @throws RangeError naming the registered names when there is none.
  */
 export function optimizerNamed(name: string): OptimizerEntry {
   const entry = OPTIMIZERS.find((o) => o.name === name);
-  if (!entry) throw new RangeError(`optimizerNamed: no optimiser "${name}"; use one of ${OPTIMIZERS.map((o) => o.name).join(", ")}`);
+  if (!entry) throw new RangeError(`optimizerNamed: no optimizer "${name}"; use one of ${OPTIMIZERS.map((o) => o.name).join(", ")}`);
   return entry;
 }
 

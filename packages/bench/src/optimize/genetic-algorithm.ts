@@ -1,5 +1,5 @@
 import type { Evaluator } from "@floorcast/sampler";
-import type { CommonOptions, EvaluatedDesign, OptimisationProblem, OptimisationResult } from "./optimisation-problem.js";
+import type { CommonOptions, EvaluatedDesign, OptimizationProblem, OptimizationResult } from "./optimization-problem.js";
 import { EvaluationSession } from "./evaluation-session.js";
 import { compareFeasibility } from "./feasibility-rules.js";
 import { createRng, unitSamples } from "./unit-samples.js";
@@ -44,10 +44,10 @@ interface Member {
  * @returns the result.
  */
 export async function geneticAlgorithm(
-  problem: OptimisationProblem,
+  problem: OptimizationProblem,
   evaluator: Evaluator,
   options: GeneticAlgorithmOptions = {},
-): Promise<OptimisationResult> {
+): Promise<OptimizationResult> {
   const fn = "geneticAlgorithm";
   validateProblem(fn, problem, evaluator, options, "single");
   const dims = problem.variables.length;

@@ -1,21 +1,21 @@
 /**
- * Benchmark: exact evaluations each optimiser needs to come within 0.5% of the published optimum of
+ * Benchmark: exact evaluations each optimizer needs to come within 0.5% of the published optimum of
  * four test functions of the Virtual Library of Simulation Experiments (Branin, six-hump camel,
  * Goldstein–Price, Hartmann 3-D), median over seeds, side by side with scipy's
  * differential_evolution (Debian python3-scipy 1.10.1, polish off) in the same run; the last column
  * is each method's median divided by scipy's.
- * Run: `npm run build && npm run bench:optimisers -- [seeds] [budget]`
- * (defaults 5 seeds, 3000 evaluations; Bayesian optimisation gets at most 60).
+ * Run: `npm run build && npm run bench:optimizers -- [seeds] [budget]`
+ * (defaults 5 seeds, 3000 evaluations; Bayesian optimization gets at most 60).
  */
 import { functionEvaluator, type Evaluator } from "@floorcast/sampler";
 import { spawnSync } from "node:child_process";
 import { fileURLToPath } from "node:url";
-import type { OptimisationProblem, OptimisationResult } from "../optimise/optimisation-problem.js";
-import { bayesianOptimisation } from "../optimise/bayesian-optimisation.js";
-import { geneticAlgorithm } from "../optimise/genetic-algorithm.js";
-import { particleSwarm } from "../optimise/particle-swarm.js";
-import { projectedGradient } from "../optimise/projected-gradient.js";
-import { randomSearch } from "../optimise/random-search.js";
+import type { OptimizationProblem, OptimizationResult } from "../optimize/optimization-problem.js";
+import { bayesianOptimization } from "../optimize/bayesian-optimization.js";
+import { geneticAlgorithm } from "../optimize/genetic-algorithm.js";
+import { particleSwarm } from "../optimize/particle-swarm.js";
+import { projectedGradient } from "../optimize/projected-gradient.js";
+import { randomSearch } from "../optimize/random-search.js";
 import { branin } from "../problem/branin.js";
 import { sixHumpCamel } from "../problem/six-hump-camel.js";
 import { FLOORCAST_CAUTION } from "../floorcast-caution.js";
@@ -52,14 +52,14 @@ const CASES: readonly Case[] = [
   { name: "hartmann3", optimum: -3.86278, bounds: [[0, 1], [0, 1], [0, 1]], f: hartmann3 },
 ];
 
-type Method = (p: OptimisationProblem, e: Evaluator, seed: number) => Promise<OptimisationResult>;
+type Method = (p: OptimizationProblem, e: Evaluator, seed: number) => Promise<OptimizationResult>;
 const METHODS: readonly [string, Method][] = [
   ["random", (p, e, seed) => randomSearch(p, e, { seed, maxEvaluations: BUDGET })],
   ["lhs", (p, e, seed) => randomSearch(p, e, { seed, maxEvaluations: BUDGET, design: "lhs" })],
   ["gradient (FD)", (p, e, seed) => projectedGradient(p, e, { seed, maxEvaluations: BUDGET })],
   ["pso", (p, e, seed) => particleSwarm(p, e, { seed, maxEvaluations: BUDGET })],
   ["ga", (p, e, seed) => geneticAlgorithm(p, e, { seed, maxEvaluations: BUDGET })],
-  ["bo (EI)", (p, e, seed) => bayesianOptimisation(p, e, { seed, maxEvaluations: BO_BUDGET })],
+  ["bo (EI)", (p, e, seed) => bayesianOptimization(p, e, { seed, maxEvaluations: BO_BUDGET })],
 ];
 
 const median = (v: readonly number[]): number => {
@@ -76,14 +76,14 @@ async function main(): Promise<void> {
   const runs = CASES.flatMap((c) =>
     Array.from({ length: SEEDS }, (_, s) => ({ function: c.name, seed: s + 1, target: c.optimum + 0.005 * Math.abs(c.optimum), maxfev: BUDGET })),
   );
-  const py = spawnSync("/usr/bin/python3", [`${root}tests/reference/optimiser_scipy.py`], { input: JSON.stringify({ runs }), encoding: "utf8" });
+  const py = spawnSync("/usr/bin/python3", [`${root}tests/reference/optimizer_scipy.py`], { input: JSON.stringify({ runs }), encoding: "utf8" });
   const peer = py.status === 0 ? (JSON.parse(py.stdout) as { scipy: string; results: { hit: number | null }[] }) : null;
   console.log(`Exact evaluations to within 0.5% of the VLSE optimum; median of ${SEEDS} seeds (reached/seeds); budget ${BUDGET} (BO ${BO_BUDGET}).`);
   console.log(peer ? `Peer: scipy ${peer.scipy} differential_evolution (polish off).` : `Peer unavailable: ${py.stderr || "no /usr/bin/python3 with scipy"}`);
   console.log("function          method           median evals  reached  ratio to scipy DE");
   for (const [ci, c] of CASES.entries()) {
     const names = c.bounds.map((_, i) => `x${i + 1}`);
-    const problem: OptimisationProblem = {
+    const problem: OptimizationProblem = {
       variables: c.bounds.map(([min, max], i) => ({ kind: "continuous" as const, name: names[i]!, min, max })),
       objectives: [{ output: "f", sense: "min" }],
     };

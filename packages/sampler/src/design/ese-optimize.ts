@@ -22,7 +22,7 @@ export interface EseResult {
 }
 
 /**
- * Optimises a Latin design on the Morris–Mitchell (1995) φp criterion with the enhanced stochastic
+ * Optimizes a Latin design on the Morris–Mitchell (1995) φp criterion with the enhanced stochastic
  * evolutionary algorithm of Jin, Chen & Sudjianto (2005, J. Stat. Plan. Inference 134): in each inner
  * iteration, J random exchanges of two elements of one column (columns in turn) are tried, the best is
  * accepted when φp(try) − φp(current) ≤ T·u (u uniform); the outer loop adapts the threshold T (improving
@@ -35,7 +35,7 @@ export interface EseResult {
  * @param rng - seeded generator.
  * @returns the best design found and its φp before and after.
  */
-export function eseOptimise(start: readonly (readonly number[])[], rng: SeededRandom, options: EseOptions = {}): EseResult {
+export function eseOptimize(start: readonly (readonly number[])[], rng: SeededRandom, options: EseOptions = {}): EseResult {
   const n = start.length;
   const d = n > 0 ? (start[0] as readonly number[]).length : 0;
   const p = options.p ?? 50;
