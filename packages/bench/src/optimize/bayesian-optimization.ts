@@ -6,6 +6,7 @@ import { EvaluationSession } from "./evaluation-session.js";
 import { expectedImprovement, probabilityOfFeasibility } from "./expected-improvement.js";
 import { objectiveLoss } from "./feasibility-rules.js";
 import { maximiseAcquisition } from "./maximise-acquisition.js";
+import { randomUnseenDesign } from "./random-unseen-design.js";
 import { createRng, unitSamples } from "./unit-samples.js";
 import { numberOption, validateProblem } from "./validate-problem.js";
 
@@ -151,8 +152,7 @@ export async function bayesianOptimization(
       if (bestScore <= 0) next = undefined;
     }
     if (next === undefined) {
-      const pool = unitSamples(64, dims, "random", rng).map((u) => codec.fromUnit(u)).filter((c) => !seen.has(c.join(",")));
-      next = pool[0];
+      next = randomUnseenDesign(codec, rng, seen);
       if (next === undefined) return session.result("complete");
     }
     const [e] = await session.evaluate([next]);

@@ -3,6 +3,7 @@ import { PLATE_STACK_OUTPUTS, fitPlateStack, plateStackColumns, type GaussianPro
 import type { CommonOptions, EvaluatedDesign, OptimizationProblem, OptimizationResult } from "./optimization-problem.js";
 import { EvaluationSession } from "./evaluation-session.js";
 import { maximiseAcquisition } from "./maximise-acquisition.js";
+import { randomUnseenDesign } from "./random-unseen-design.js";
 import { createRng, unitSamples } from "./unit-samples.js";
 import { numberOption, validateProblem } from "./validate-problem.js";
 
@@ -100,8 +101,7 @@ export async function plateStackBayesianOptimization(
       if (found.score > 0) next = found.x;
     }
     if (next === undefined) {
-      const pool = unitSamples(64, dims, "random", rng).map((u) => codec.fromUnit(u)).filter((c) => !seen.has(c.join(",")));
-      next = pool[0];
+      next = randomUnseenDesign(codec, rng, seen);
       if (next === undefined) return session.result("complete");
     }
     const [e] = await session.evaluate([next]);
