@@ -178,7 +178,11 @@ describe("one writer per output; nothing partial under a final name", () => {
     // the control: the CSV writer streaming into the final name, the same number of rows
     const streamed = `import { createCsvWriter } from "@floorcast/sampler";
       const w = createCsvWriter(${JSON.stringify(out)}, ["a", "b", "y_mean"]);
-      for (let i = 0; i < ${ROWS}; i++) await w.write([1, 2, 5]);
+      for (let i = 0; i < ${ROWS}; i++) {
+        await w.write([1, 2, 5]);
+        // halfway it waits for the probe, so the probe catches it mid-run however loaded the machine is
+        if (i === ${ROWS / 2}) await new Promise((resolve) => setTimeout(resolve, 600_000));
+      }
       await w.close();`;
     const control = await freezeAtFirstWrite(["--input-type=module", "-e", streamed], out);
     expect(control.midRun).toBe(true);
