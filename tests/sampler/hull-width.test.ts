@@ -79,3 +79,13 @@ describe("hullWidth", () => {
     );
   });
 });
+
+describe("leastWidth (the public entry to the same width)", () => {
+  it("gives the README's L-shaped lot 20 m (derived, as above) and validates its input", async () => {
+    const { leastWidth } = await import("@floorcast/sampler");
+    expect(leastWidth([[0, 0], [20, 0], [20, 10], [10, 10], [10, 20], [0, 20]])).toBeCloseTo(20, 12);
+    expect(leastWidth([[0, 0], [1, 1]])).toBe(0);
+    expect(() => leastWidth("x" as never)).toThrow(TypeError);
+    expect(() => leastWidth([[0, Number.NaN], [1, 0], [0, 1]])).toThrow(/leastWidth: points\[0\] must be finite/);
+  });
+});

@@ -11,6 +11,7 @@ export type {
 } from "./massing/massing-types.js";
 export { evaluateMassing } from "./massing/evaluate-massing.js";
 export { massingProfile } from "./massing/massing-profile.js";
+export { leastWidth } from "./geometry/least-width.js";
 export type { MassingProfile } from "./massing/massing-profile.js";
 export type { EvaluateMassingOptions } from "./massing/evaluate-massing.js";
 export { quadParcel } from "./massing/quad-parcel.js";

@@ -1,4 +1,4 @@
-import type { MassingInput, Point } from "@floorcast/sampler";
+import { leastWidth, type MassingInput, type Point } from "@floorcast/sampler";
 import { PARCEL_DESIGN_VARIABLES } from "./parcel-design-variables.js";
 
 /** The descriptor columns a cross-parcel surrogate sees, in column order. */
@@ -65,7 +65,7 @@ function farthestFrom(a: Point, b: Point, points: readonly Point[]): number {
 /**
  * Descriptors of a parcel and its zoning controls, the inputs (with the design variables) of a surrogate
  * trained across parcels (named apart from the massing outputs): lot area, perimeter, least width (the least distance between two parallel lines
- * enclosing the lot: the convex hull's width by rotating calipers, Houle & Toussaint 1988), depth from the
+ * enclosing the lot: the sampler's leastWidth, the width the massing rule compares with minPlateWidth), depth from the
  * front (largest distance of a vertex from the longest front lot line), number of corners, convexity ratio
  * (lot area ÷ convex hull area), frontage (total length of the front lot lines), the minimum yards (street
  * yards count as front), the height, FAR and coverage caps, the sky plane's start, and the least plate area and
@@ -95,14 +95,12 @@ export function parcelDescriptors(input: MassingInput): ParcelDescriptors {
       if (len > longestLength) [longestFront, longestLength] = [i, len];
     }
   }
-  let leastWidth = Infinity;
-  for (let i = 0; i < hull.length; i++) leastWidth = Math.min(leastWidth, farthestFrom(hull[i]!, hull[(i + 1) % hull.length]!, hull));
   const frontDepth = longestFront < 0 ? 0 : farthestFrom(v[longestFront]!, v[(longestFront + 1) % n]!, v);
   const s = input.setbacks;
   return {
     parcelArea: lotArea,
     perimeter,
-    leastWidth: Number.isFinite(leastWidth) ? leastWidth : 0,
+    leastWidth: leastWidth(v),
     frontDepth,
     corners: n,
     convexity: hullArea > 0 ? lotArea / hullArea : 0,
