@@ -4,11 +4,13 @@ import { hullWidth } from "../geometry/hull-width.js";
 import { polygonWidth } from "../geometry/polygon-width.js";
 import { ringArea, ringIsConvex, ringPerimeter } from "../geometry/ring-metrics.js";
 import { lotFrame } from "./lot-frame.js";
+import type { LotFrame } from "./lot-frame.js";
 import { massingTotals } from "./massing-totals.js";
 import type { MassingInput, MassingResult, Point, StoreyPlate } from "./massing-types.js";
 import { skyCutPieces } from "./sky-cut-pieces.js";
 import { solveCoveragePieces } from "./solve-coverage-pieces.js";
 import { stackStoreys } from "./stack-storeys.js";
+import { subtractStrip } from "./subtract-strip.js";
 import { yardPieces } from "./yard-pieces.js";
 
 /** Relative tolerance of the rule (as the convex path): areas 1e-9 × lot area, widths 1e-9 × √(lot area). */
@@ -44,6 +46,13 @@ function keptPieces(pieces: readonly Float64Array[], limits: PieceLimits): Plate
     area += a;
   }
   return { pieces: kept, area };
+}
+
+/** B's pieces less the half-plane within s of edge i, or null when the crossings do not pair up cleanly. */
+function halfPlaneCut(f: LotFrame, i: number, s: number, pieces: readonly Float64Array[]): Float64Array[] | null {
+  const cut: Float64Array[] = [];
+  for (const ring of pieces) if (!splitByHalfPlane(ring, f.nx[i]!, f.ny[i]!, f.c[i]! + s, f.eps, cut)) return null;
+  return cut;
 }
 
 function toPoints(ring: Float64Array, ox: number, oy: number): Point[] {
@@ -91,8 +100,12 @@ export function evaluateSimpleLot(
   const streets: number[] = [];
   // Step 1: the buildable area B. A yard that is the whole common part of the lot and an unbounded
   // strip, on a lot wholly on its line's inner side, is removed by the half-plane at depth s (exact in
-  // floating point); the other yards are subtracted with Clipper2.
+  // floating point). The other yards are subtracted with Clipper2, unless every one of them is the
+  // whole common part of the lot and its strip with a re-entrant end: those strips are convex regions
+  // bounded by the perpendiculars at their re-entrant ends, and subtracting them in floating point
+  // (subtractConvexRegion) gives B without Clipper2 when all their crossings pair up cleanly.
   let q: Float64Array[] = [f.xy];
+  let exact: Float64Array[] | null = q;
   for (let i = 0; i < n; i++) {
     const kind = f.kinds[i]!;
     const s =
@@ -101,15 +114,23 @@ export function evaluateSimpleLot(
     if (!(s > 0)) continue;
     const before = yards.length;
     const common = yardPieces(f, i, s, yards);
-    if (common !== yards.length - before || f.reflexStart[i] === 1 || f.reflexEnd[i] === 1 || !f.inner[i]) continue;
-    const cut: Float64Array[] = [];
-    let ok = true;
-    for (const ring of q) ok &&= splitByHalfPlane(ring, f.nx[i]!, f.ny[i]!, f.c[i]! + s, f.eps, cut);
-    if (!ok) continue;
+    const whole = common === yards.length - before;
+    const reflex = f.reflexStart[i] === 1 || f.reflexEnd[i] === 1;
+    if (!whole || reflex || !f.inner[i]) {
+      if (common === 0) continue;
+      exact = exact !== null && whole && reflex ? subtractStrip(f, i, s, exact) : null;
+      continue;
+    }
+    const cut = halfPlaneCut(f, i, s, q);
+    if (cut === null) {
+      exact = null;
+      continue;
+    }
+    exact = exact === q ? cut : exact === null ? null : halfPlaneCut(f, i, s, exact);
     q = cut;
     yards.length = before;
   }
-  const bRings = yards.length === 0 ? q : exactClip("difference", q, yards, f.extent);
+  const bRings = yards.length === 0 ? q : exact !== null ? exact : exactClip("difference", q, yards, f.extent);
   let buildableArea = 0;
   for (const r of bRings) buildableArea += ringArea(r);
   buildableArea = Math.max(0, buildableArea);
