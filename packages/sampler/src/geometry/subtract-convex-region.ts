@@ -3,12 +3,18 @@ import { ringArea } from "./ring-metrics.js";
 /** Crossings of the ring with the region's boundary: plane index (position along the chain) and place on its line. */
 let keyPlane = new Int32Array(32);
 let keyT = new Float64Array(32);
-/** For crossing 2a (arc a's start, leaving the region) and 2a + 1 (arc a's end, entering it). */
+/** Whether crossing s lies on a vertex of the ring (not inside an edge). */
+let keyVertex = new Uint8Array(32);
+/** Crossing 2a starts outside arc a (leaving S); crossing 2a + 1 ends it (entering S). */
 let order: number[] = [];
-let arcPts: number[] = [];
-let arcAt = new Int32Array(32);
+let outPts: number[] = [];
+let outAt = new Int32Array(32);
+/** Inside arc a runs from crossing 2a + 1 to crossing 2(a + 1) (arc 0's start after the last arc). */
+let inPts: number[] = [];
+let inAt = new Int32Array(32);
 
-function lineCrossing(planes: Float64Array, p: number, q: number, out: number[]): void {
+/** Appends the corner where the lines of planes p and q meet; false when they are parallel. */
+function pushCorner(planes: Float64Array, p: number, q: number, out: number[], tol: number): boolean {
   const a1 = planes[3 * p]!;
   const b1 = planes[3 * p + 1]!;
   const c1 = planes[3 * p + 2]!;
@@ -16,7 +22,9 @@ function lineCrossing(planes: Float64Array, p: number, q: number, out: number[])
   const b2 = planes[3 * q + 1]!;
   const c2 = planes[3 * q + 2]!;
   const det = a1 * b2 - b1 * a2;
-  out.push((c1 * b2 - b1 * c2) / det, (a1 * c2 - c1 * a2) / det);
+  if (!(Math.abs(det) > 1e-12)) return false;
+  pushPoint(out, (c1 * b2 - b1 * c2) / det, (a1 * c2 - c1 * a2) / det, tol);
+  return true;
 }
 
 function pushPoint(out: number[], x: number, y: number, tol: number): void {
@@ -27,23 +35,29 @@ function pushPoint(out: number[], x: number, y: number, tol: number): void {
 
 /**
  * The part of a counter-clockwise simple ring outside a convex region S = {a_j·x + b_j·y ≥ c_j}, as
- * separate counter-clockwise pieces, without a polygon clipper. Each edge's stretch inside S comes
- * from clipping its parameter against every half-plane (Cyrus and Beck 1978); the ring's boundary
- * outside S falls into arcs, each leaving S at its start and entering it at its end. The pieces'
- * boundaries are those arcs joined along S's boundary, walked clockwise (S on the right) from an
- * arc's end to the nearest crossing before it, which must be an arc's start (the even–odd rule along
- * S's boundary inside the ring, as splitByHalfPlane along a line; derived). Points within `eps` of a
- * half-plane count as on it (inside S).
+ * separate counter-clockwise pieces, without a polygon clipper; optionally only the parts of
+ * ring ∩ S that `removes` picks are taken away. Each edge's stretch inside S comes from clipping its
+ * parameter against every half-plane (Cyrus and Beck 1978), so the ring's boundary falls into arcs
+ * outside S, each leaving S at its start and entering it at its end, and arcs inside S between them.
+ * The pieces' boundaries are the outside arcs joined along S's boundary, walked clockwise (S on the
+ * right) from an arc's end to the nearest crossing before it, which must be an arc's start (the
+ * even–odd rule along S's boundary inside the ring, as splitByHalfPlane along a line; derived); an
+ * inside arc of a part that stays is followed instead, and its crossings take no part in the pairing
+ * (a part of ring ∩ S meets S's boundary only at its own crossings; derived). Points within `eps`
+ * of a half-plane count as on it (inside S).
  * @param ring - interleaved counter-clockwise simple ring.
  * @param planes - the half-planes as triples [a, b, c] ((a, b) a unit normal pointing into S), in
- *   counter-clockwise order along S's boundary; plane j and plane j + 1 meet at a corner of S.
+ *   counter-clockwise order along S's boundary; plane j and plane j + 1 meet at a corner of S
+ *   (a walk that would pass between parallel planes fails).
  * @param k - number of half-planes (≥ 2).
  * @param closed - whether plane k − 1 and plane 0 meet too (S bounded); otherwise S's boundary runs
  *   from infinity along plane 0, …, plane k − 1 back to infinity.
  * @param eps - length tolerance (≥ 0).
  * @param out - receives the pieces.
- * @returns false when the crossings do not pair up cleanly (round-off, touching): nothing is then
- *   written to `out` and the caller must use a polygon clipper.
+ * @param removes - for a point where the ring enters or leaves S, whether the part of ring ∩ S there
+ *   goes (null: cannot tell); every part goes when omitted.
+ * @returns false when the crossings do not pair up cleanly (round-off, touching) or `removes` cannot
+ *   tell: nothing is then written to `out` and the caller must use a polygon clipper.
  */
 export function subtractConvexRegion(
   ring: Float64Array,
@@ -52,6 +66,7 @@ export function subtractConvexRegion(
   closed: boolean,
   eps: number,
   out: Float64Array[],
+  removes?: (x: number, y: number) => boolean | null,
 ): boolean {
   const m = ring.length >> 1;
   // A vertex beyond some half-plane by more than eps is outside S: start the walk there.
@@ -66,15 +81,25 @@ export function subtractConvexRegion(
       }
     }
   }
-  if (start < 0) return true; // the whole ring is in S
+  if (start < 0) {
+    // The whole ring is in S.
+    if (removes === undefined) return true;
+    const keep = removes(ring[0]!, ring[1]!);
+    if (keep === null) return false;
+    if (!keep) out.push(ring);
+    return true;
+  }
   if (keyPlane.length < 2 * m + 2) {
     keyPlane = new Int32Array(4 * m + 4);
     keyT = new Float64Array(4 * m + 4);
-    arcAt = new Int32Array(4 * m + 4);
+    keyVertex = new Uint8Array(4 * m + 4);
+    outAt = new Int32Array(4 * m + 4);
+    inAt = new Int32Array(4 * m + 4);
   }
-  arcPts = [];
+  outPts = [];
+  inPts = [];
   let arcs = 0;
-  let firstEnd = -1; // length of arcPts when the first arc (which began before `start`) entered S
+  let firstEnd = -1; // length of outPts when the first arc (which began before `start`) entered S
   let open = true; // currently outside S, on an arc
   let touch = -1; // the vertex where the last arc entered S, until the walk moves on inside S
   const tol = 1e3 * eps;
@@ -126,38 +151,49 @@ export function subtractConvexRegion(
     if (along && !empty && (tout - tin) * len > eps) return false;
     if (empty || tin > tout) {
       if (!open) return false; // from inside S to outside without a crossing: round-off
-      arcPts.push(ring[2 * iq]!, ring[2 * iq + 1]!);
+      outPts.push(ring[2 * iq]!, ring[2 * iq + 1]!);
       continue;
     }
     if (jin >= 0) {
-      // Enters S at tin: the current arc ends.
+      // Enters S at tin: outside arc `arcs` ends, inside arc `arcs` starts.
       if (!open) return false;
       const snap = (1 - tin) * len <= eps;
       const x = snap ? px + dx : px + tin * dx;
       const y = snap ? py + dy : py + tin * dy;
-      pushPoint(arcPts, x, y, tol);
+      pushPoint(outPts, x, y, tol);
       keyPlane[2 * arcs + 1] = jin;
       keyT[2 * arcs + 1] = planes[3 * jin + 1]! * x - planes[3 * jin]! * y;
-      if (arcs === 0) firstEnd = arcPts.length;
-      arcAt[2 * arcs + 1] = arcPts.length;
+      keyVertex[2 * arcs + 1] = snap ? 1 : 0;
+      if (arcs === 0) firstEnd = outPts.length;
+      outAt[2 * arcs + 1] = outPts.length;
+      inAt[2 * arcs] = inPts.length;
+      inPts.push(x, y);
       arcs++;
       open = false;
       touch = snap && jout < 0 ? iq : -1;
-      if (jout < 0) continue;
+      if (jout < 0) {
+        pushPoint(inPts, ring[2 * iq]!, ring[2 * iq + 1]!, tol);
+        continue;
+      }
       touch = -1;
     } else if (open) return false; // on an arc, yet this edge starts inside S: round-off
-    if (jout >= 0) {
-      // Leaves S at tout: a new arc starts.
+    if (jout < 0) {
+      pushPoint(inPts, ring[2 * iq]!, ring[2 * iq + 1]!, tol);
+    } else {
+      // Leaves S at tout: inside arc `arcs − 1` ends, outside arc `arcs` starts.
       const snap = tout * len <= eps;
       // Touching S at a single vertex: S's boundary through it may pinch a piece there.
       if (snap && touch === ip) return false;
       const x = snap ? px : px + tout * dx;
       const y = snap ? py : py + tout * dy;
-      arcAt[2 * arcs] = arcPts.length;
-      arcPts.push(x, y);
+      pushPoint(inPts, x, y, tol);
+      inAt[2 * arcs - 1] = inPts.length;
+      outAt[2 * arcs] = outPts.length;
+      outPts.push(x, y);
       keyPlane[2 * arcs] = jout;
       keyT[2 * arcs] = planes[3 * jout + 1]! * x - planes[3 * jout]! * y;
-      pushPoint(arcPts, ring[2 * iq]!, ring[2 * iq + 1]!, tol);
+      keyVertex[2 * arcs] = snap ? 1 : 0;
+      pushPoint(outPts, ring[2 * iq]!, ring[2 * iq + 1]!, tol);
       open = true;
     }
     touch = -1;
@@ -169,22 +205,41 @@ export function subtractConvexRegion(
   }
   if (!open) return false; // the walk began outside S, so it must end there
   // The arc still open continues into arc 0 (which began before `start`): it becomes arc 0's head.
-  const tail = arcPts.slice(arcAt[2 * arcs]!);
-  const head = arcPts.slice(0, firstEnd);
+  const arc0 = outPts.slice(outAt[2 * arcs]!).concat(outPts.slice(0, firstEnd));
   keyPlane[0] = keyPlane[2 * arcs]!;
   keyT[0] = keyT[2 * arcs]!;
-  const arc0 = tail.concat(head);
-  // Order the 2·arcs crossings along S's boundary.
+  keyVertex[0] = keyVertex[2 * arcs]!;
+  // Which parts of ring ∩ S go; only their crossings pair up along S's boundary.
+  const cut = new Uint8Array(arcs);
   order = [];
-  for (let s = 0; s < 2 * arcs; s++) order.push(s);
+  let anyCut = false;
+  for (let a = 0; a < arcs; a++) {
+    const b = a + 1 === arcs ? 0 : a + 1;
+    let goes = true;
+    if (removes !== undefined) {
+      const atEntry = removes(inPts[inAt[2 * a]!]!, inPts[inAt[2 * a]! + 1]!);
+      const atExit = removes(inPts[inAt[2 * a + 1]! - 2]!, inPts[inAt[2 * a + 1]! - 1]!);
+      if (atEntry === null || atEntry !== atExit) return false;
+      goes = atEntry;
+    }
+    if (!goes) continue;
+    cut[a] = 1;
+    anyCut = true;
+    order.push(2 * a + 1, 2 * b);
+  }
+  if (!anyCut) {
+    out.push(ring);
+    return true;
+  }
   order.sort((p, q) => keyPlane[p]! - keyPlane[q]! || keyT[p]! - keyT[q]!);
   const next = new Int32Array(arcs);
-  for (let r = 0; r < 2 * arcs; r++) {
+  const n2 = order.length;
+  for (let r = 0; r < n2; r++) {
     const s = order[r]!;
     if ((s & 1) === 0) continue;
     // Arc s >> 1 ends here; walking clockwise (down the order) the next crossing must be an arc's start.
     if (r === 0 && !closed) return false;
-    const prev = order[r === 0 ? 2 * arcs - 1 : r - 1]!;
+    const prev = order[r === 0 ? n2 - 1 : r - 1]!;
     if ((prev & 1) !== 0) return false;
     next[s >> 1] = prev >> 1;
   }
@@ -196,8 +251,17 @@ export function subtractConvexRegion(
     let a = a0;
     while (used[a] === 0) {
       used[a] = 1;
-      const src = a === 0 ? arc0 : arcPts.slice(arcAt[2 * a]!, arcAt[2 * a + 1]!);
-      for (let i = 0; i < src.length; i += 2) pushPoint(pts, src[i]!, src[i + 1]!, tol);
+      const src = a === 0 ? arc0 : outPts.slice(outAt[2 * a]!, outAt[2 * a + 1]!);
+      const prevArc = a === 0 ? arcs - 1 : a - 1;
+      // Crossings inside an edge where a part of ring ∩ S stays are not corners: left out.
+      const from = cut[prevArc] === 1 || keyVertex[2 * a] === 1 ? 0 : 2;
+      const to = cut[a] === 1 || keyVertex[2 * a + 1] === 1 ? src.length : src.length - 2;
+      for (let i = from; i < to; i += 2) pushPoint(pts, src[i]!, src[i + 1]!, tol);
+      if (cut[a] === 0) {
+        for (let i = inAt[2 * a]! + 2; i < inAt[2 * a + 1]! - 2; i += 2) pushPoint(pts, inPts[i]!, inPts[i + 1]!, tol);
+        a = a + 1 === arcs ? 0 : a + 1;
+        continue;
+      }
       const b = next[a]!;
       // Corners of S passed walking back from plane keyPlane[end of a] to plane keyPlane[start of b].
       const pe = keyPlane[2 * a + 1]!;
@@ -207,12 +271,9 @@ export function subtractConvexRegion(
         if (!closed) return false;
         count += k;
       }
-      const corner: number[] = [];
       for (let r = 0, j = pe; r < count; r++) {
         const i = j === 0 ? k - 1 : j - 1;
-        corner.length = 0;
-        lineCrossing(planes, i, j, corner);
-        pushPoint(pts, corner[0]!, corner[1]!, tol);
+        if (!pushCorner(planes, i, j, pts, tol)) return false;
         j = i;
       }
       a = b;

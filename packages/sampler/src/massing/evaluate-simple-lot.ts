@@ -100,10 +100,9 @@ export function evaluateSimpleLot(
   const streets: number[] = [];
   // Step 1: the buildable area B. A yard that is the whole common part of the lot and an unbounded
   // strip, on a lot wholly on its line's inner side, is removed by the half-plane at depth s (exact in
-  // floating point). The other yards are subtracted with Clipper2, unless every one of them is the
-  // whole common part of the lot and its strip with a re-entrant end: those strips are convex regions
-  // bounded by the perpendiculars at their re-entrant ends, and subtracting them in floating point
-  // (subtractConvexRegion) gives B without Clipper2 when all their crossings pair up cleanly.
+  // floating point). The other yards are subtracted in floating point too, each strip a convex region
+  // bounded by the perpendiculars at its re-entrant ends (subtractStrip); when some crossings do not
+  // pair up cleanly, all of them are subtracted with Clipper2 instead, as one difference.
   let q: Float64Array[] = [f.xy];
   let exact: Float64Array[] | null = q;
   for (let i = 0; i < n; i++) {
@@ -118,7 +117,7 @@ export function evaluateSimpleLot(
     const reflex = f.reflexStart[i] === 1 || f.reflexEnd[i] === 1;
     if (!whole || reflex || !f.inner[i]) {
       if (common === 0) continue;
-      exact = exact !== null && whole && reflex ? subtractStrip(f, i, s, exact) : null;
+      if (exact !== null) exact = subtractStrip(f, i, s, exact, whole ? undefined : yards.slice(before));
       continue;
     }
     const cut = halfPlaneCut(f, i, s, q);

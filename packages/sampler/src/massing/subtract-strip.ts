@@ -4,13 +4,13 @@ import type { LotFrame } from "./lot-frame.js";
 const chain = new Float64Array(12);
 
 /**
- * The strip of lot line i at depth s with at least one re-entrant end, as the half-planes of a convex
+ * The strip of lot line i at depth s, as the half-planes of a convex
  * region in counter-clockwise order along its boundary (the order subtractConvexRegion walks): the
  * line itself (n·x ≥ c, running along the edge), the perpendicular through a re-entrant end
  * (−u·x ≥ −(u·P + length)), the parallel at depth s (−n·x ≥ −(c + s)), the perpendicular through a
- * re-entrant start (u·x ≥ u·P); with one end convex the chain starts and ends at infinity, so it
- * begins just after the missing perpendicular.
- * @returns the number of half-planes written to `out` (3, or 4 when both ends are re-entrant).
+ * re-entrant start (u·x ≥ u·P); with an end convex the chain starts and ends at infinity, so it
+ * begins just after the missing perpendicular (with both ends convex, the two lines are parallel).
+ * @returns the number of half-planes written to `out` (2 to 4; 4 when both ends are re-entrant).
  */
 function stripChain(f: LotFrame, i: number, s: number, out: Float64Array): number {
   const nx = f.nx[i]!;
@@ -37,21 +37,58 @@ function stripChain(f: LotFrame, i: number, s: number, out: Float64Array): numbe
   return k;
 }
 
+/** Distance from (x, y) to a counter-clockwise ring's region (0 inside; crossing number, then the nearest edge). */
+function distanceToRing(ring: Float64Array, x: number, y: number): number {
+  const m = ring.length >> 1;
+  let inside = false;
+  let best = Infinity;
+  for (let a = 0, b = m - 1; a < m; b = a++) {
+    const ax = ring[2 * b]!;
+    const ay = ring[2 * b + 1]!;
+    const dx = ring[2 * a]! - ax;
+    const dy = ring[2 * a + 1]! - ay;
+    if (ay > y !== ring[2 * a + 1]! > y && x < ax + ((y - ay) * dx) / dy) inside = !inside;
+    const l2 = dx * dx + dy * dy;
+    const t = l2 > 0 ? Math.max(0, Math.min(1, ((x - ax) * dx + (y - ay) * dy) / l2)) : 0;
+    best = Math.min(best, Math.hypot(ax + t * dx - x, ay + t * dy - y));
+  }
+  return inside ? 0 : best;
+}
+
 /**
- * Pieces less the strip of lot line i at depth s bounded by the perpendicular(s) at its re-entrant
- * end(s) (the yard rule's strip; see yardPieces), in floating point by subtractConvexRegion. Equal to
- * the pieces less the yard when the yard is the whole common part of the lot and the strip.
+ * Pieces less the yard of lot line i at depth s (the yard rule's strip, bounded by the
+ * perpendicular(s) at its re-entrant end(s); see yardPieces), in floating point by
+ * subtractConvexRegion: the whole strip when the yard is the whole common part of the lot and the
+ * strip, else only the parts of the pieces within the strip that lie in the yard's pieces (the
+ * common part's other pieces are apart from them; a part nearer than 1e-3 of the lot's size to the
+ * yard without touching it is left to the caller).
  * @param f - the lot frame.
- * @param i - edge index, with a re-entrant start or end.
+ * @param i - edge index.
  * @param s - depth, > 0.
  * @param pieces - counter-clockwise simple rings inside the lot.
- * @returns the remaining pieces, or null when some crossings do not pair up cleanly (the caller then
- *   uses a polygon clipper).
+ * @param yard - the yard's pieces when the yard is not the whole common part, else undefined.
+ * @returns the remaining pieces, or null when some crossings do not pair up cleanly or a part cannot
+ *   be told (the caller then uses a polygon clipper).
  */
-export function subtractStrip(f: LotFrame, i: number, s: number, pieces: readonly Float64Array[]): Float64Array[] | null {
+export function subtractStrip(
+  f: LotFrame,
+  i: number,
+  s: number,
+  pieces: readonly Float64Array[],
+  yard?: readonly Float64Array[],
+): Float64Array[] | null {
   const k = stripChain(f, i, s, chain);
   const closed = f.reflexStart[i] === 1 && f.reflexEnd[i] === 1;
+  const size = Math.hypot(f.maxX - f.minX, f.maxY - f.minY);
+  const removes =
+    yard === undefined
+      ? undefined
+      : (x: number, y: number): boolean | null => {
+          let d = Infinity;
+          for (const r of yard) d = Math.min(d, distanceToRing(r, x, y));
+          return d <= 1e-6 * size ? true : d > 1e-3 * size ? false : null;
+        };
   const out: Float64Array[] = [];
-  for (const ring of pieces) if (!subtractConvexRegion(ring, chain, k, closed, f.eps, out)) return null;
+  for (const ring of pieces) if (!subtractConvexRegion(ring, chain, k, closed, f.eps, out, removes)) return null;
   return out;
 }
