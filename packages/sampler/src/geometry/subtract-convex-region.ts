@@ -12,6 +12,9 @@ let outAt = new Int32Array(32);
 /** Inside arc a runs from crossing 2a + 1 to crossing 2(a + 1) (arc 0's start after the last arc). */
 let inPts: number[] = [];
 let inAt = new Int32Array(32);
+let cut = new Uint8Array(16);
+let next = new Int32Array(16);
+let used = new Uint8Array(16);
 
 /** Appends the corner where the lines of planes p and q meet; false when they are parallel. */
 function pushCorner(planes: Float64Array, p: number, q: number, out: number[], tol: number): boolean {
@@ -143,7 +146,7 @@ export function subtractConvexRegion(
         }
       }
     }
-    const len = Math.hypot(dx, dy);
+    const len = Math.sqrt(dx * dx + dy * dy);
     // A stretch inside S shorter than eps between two outside ends (a graze) may pinch a piece; a
     // longer one along S's boundary with S outside the ring is a contact without area, which the walk
     // would turn into a slit. Both are left to the clipper.
@@ -204,15 +207,18 @@ export function subtractConvexRegion(
     return true;
   }
   if (!open) return false; // the walk began outside S, so it must end there
-  // The arc still open continues into arc 0 (which began before `start`): it becomes arc 0's head.
-  const arc0 = outPts.slice(outAt[2 * arcs]!).concat(outPts.slice(0, firstEnd));
+  // The arc still open continues into arc 0 (which began before `start`): its points come first.
+  const tailAt = outAt[2 * arcs]!;
   keyPlane[0] = keyPlane[2 * arcs]!;
   keyT[0] = keyT[2 * arcs]!;
   keyVertex[0] = keyVertex[2 * arcs]!;
+  if (cut.length < arcs) {
+    cut = new Uint8Array(2 * arcs);
+    next = new Int32Array(2 * arcs);
+    used = new Uint8Array(2 * arcs);
+  }
   // Which parts of ring ∩ S go; only their crossings pair up along S's boundary.
-  const cut = new Uint8Array(arcs);
-  order = [];
-  let anyCut = false;
+  let n2 = 0;
   for (let a = 0; a < arcs; a++) {
     const b = a + 1 === arcs ? 0 : a + 1;
     let goes = true;
@@ -222,18 +228,26 @@ export function subtractConvexRegion(
       if (atEntry === null || atEntry !== atExit) return false;
       goes = atEntry;
     }
+    cut[a] = goes ? 1 : 0;
+    used[a] = 0;
     if (!goes) continue;
-    cut[a] = 1;
-    anyCut = true;
-    order.push(2 * a + 1, 2 * b);
+    order[n2++] = 2 * a + 1;
+    order[n2++] = 2 * b;
   }
-  if (!anyCut) {
+  if (n2 === 0) {
     out.push(ring);
     return true;
   }
-  order.sort((p, q) => keyPlane[p]! - keyPlane[q]! || keyT[p]! - keyT[q]!);
-  const next = new Int32Array(arcs);
-  const n2 = order.length;
+  // Insertion sort along S's boundary (a handful of crossings).
+  for (let r = 1; r < n2; r++) {
+    const s = order[r]!;
+    let q = r - 1;
+    while (q >= 0 && (keyPlane[order[q]!]! > keyPlane[s]! || (keyPlane[order[q]!] === keyPlane[s] && keyT[order[q]!]! > keyT[s]!))) {
+      order[q + 1] = order[q]!;
+      q--;
+    }
+    order[q + 1] = s;
+  }
   for (let r = 0; r < n2; r++) {
     const s = order[r]!;
     if ((s & 1) === 0) continue;
@@ -243,7 +257,6 @@ export function subtractConvexRegion(
     if ((prev & 1) !== 0) return false;
     next[s >> 1] = prev >> 1;
   }
-  const used = new Uint8Array(arcs);
   const pieces: Float64Array[] = [];
   for (let a0 = 0; a0 < arcs; a0++) {
     if (used[a0] === 1) continue;
@@ -251,12 +264,18 @@ export function subtractConvexRegion(
     let a = a0;
     while (used[a] === 0) {
       used[a] = 1;
-      const src = a === 0 ? arc0 : outPts.slice(outAt[2 * a]!, outAt[2 * a + 1]!);
       const prevArc = a === 0 ? arcs - 1 : a - 1;
       // Crossings inside an edge where a part of ring ∩ S stays are not corners: left out.
-      const from = cut[prevArc] === 1 || keyVertex[2 * a] === 1 ? 0 : 2;
-      const to = cut[a] === 1 || keyVertex[2 * a + 1] === 1 ? src.length : src.length - 2;
-      for (let i = from; i < to; i += 2) pushPoint(pts, src[i]!, src[i + 1]!, tol);
+      const skipFirst = cut[prevArc] === 0 && keyVertex[2 * a] === 0;
+      const skipLast = cut[a] === 0 && keyVertex[2 * a + 1] === 0;
+      // Arc 0 is the walk's last stretch (from tailAt) followed by its first (to firstEnd).
+      const from = a === 0 ? tailAt : outAt[2 * a]!;
+      const to = a === 0 ? outPts.length + firstEnd : outAt[2 * a + 1]!;
+      const wrap = outPts.length;
+      for (let i = skipFirst ? from + 2 : from, end = skipLast ? to - 2 : to; i < end; i += 2) {
+        const j = a === 0 && i >= wrap ? i - wrap : i;
+        pushPoint(pts, outPts[j]!, outPts[j + 1]!, tol);
+      }
       if (cut[a] === 0) {
         for (let i = inAt[2 * a]! + 2; i < inAt[2 * a + 1]! - 2; i += 2) pushPoint(pts, inPts[i]!, inPts[i + 1]!, tol);
         a = a + 1 === arcs ? 0 : a + 1;
@@ -284,7 +303,8 @@ export function subtractConvexRegion(
       pts.length -= 2;
     }
     if (pts.length < 6) return false;
-    const piece = Float64Array.from(pts);
+    const piece = new Float64Array(pts.length);
+    for (let i = 0; i < pts.length; i++) piece[i] = pts[i]!;
     if (!(ringArea(piece) > 0)) return false;
     pieces.push(piece);
   }

@@ -1,6 +1,7 @@
 import { exactClip } from "../geometry/exact-clip.js";
 import { splitByHalfPlane } from "../geometry/split-by-half-plane.js";
 import type { LotFrame } from "./lot-frame.js";
+import { subtractStrip } from "./subtract-strip.js";
 import { yardPieces } from "./yard-pieces.js";
 
 const yardScratch: Float64Array[] = [];
@@ -18,7 +19,7 @@ function yardIsWholeStrip(f: LotFrame, i: number, d: number): boolean {
  * piece wholly at least d behind a street line keeps that line's cut out of the work; a piece wholly
  * on the lot's side of the line and inside the strip's end bounds, when that yard is the whole common
  * part of the lot and the strip, is cut by the half-plane at depth d (splitByHalfPlane); anything else
- * goes through Clipper2 as base − yards.
+ * is base − yards (see fullCut).
  * @param f - the lot frame.
  * @param base - the base plate's pieces (counter-clockwise).
  * @param streets - indices of the street lot lines.
@@ -77,12 +78,21 @@ function behindEveryStreet(f: LotFrame, ring: Float64Array, streets: readonly nu
 }
 
 /**
- * base − street yards through Clipper2; base pieces wholly at least d behind every street line meet
- * no yard's inside (a yard lies within d of its line) and are kept as they are, out of Clipper's work.
+ * base − street yards: each yard subtracted in floating point (subtractStrip), or, when some
+ * crossings do not pair up cleanly, all of them through Clipper2, where base pieces wholly at least d
+ * behind every street line meet no yard's inside (a yard lies within d of its line) and are kept as
+ * they are, out of Clipper's work.
  */
 function fullCut(f: LotFrame, base: readonly Float64Array[], streets: readonly number[], d: number): Float64Array[] {
   const yards: Float64Array[] = [];
-  for (const i of streets) yardPieces(f, i, d, yards);
+  let exact: Float64Array[] | null = base.slice();
+  for (const i of streets) {
+    const before = yards.length;
+    const common = yardPieces(f, i, d, yards);
+    if (exact === null || common === 0) continue;
+    exact = subtractStrip(f, i, d, exact, common === yards.length - before ? undefined : yards.slice(before));
+  }
+  if (exact !== null) return exact;
   if (yards.length === 0) return base.slice();
   const kept: Float64Array[] = [];
   const cut: Float64Array[] = [];
