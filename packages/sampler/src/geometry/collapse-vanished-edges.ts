@@ -1,3 +1,5 @@
+import { ringArena } from "./ring-arena.js";
+
 /** Least sine of a corner's turn that counts as a turn (parallel moved lines have no crossing). */
 const MIN_TURN = 1e-9;
 
@@ -20,7 +22,7 @@ export function collapseVanishedEdges(planes: Float64Array, m: number): Float64A
   for (;;) {
     const k = idx.length;
     if (k < 3) return null;
-    const xs = new Float64Array(2 * k);
+    const xs = ringArena.take(2 * k);
     for (let j = 0; j < k; j++) {
       const p = idx[j === 0 ? k - 1 : j - 1]!;
       const q = idx[j]!;

@@ -2,6 +2,7 @@ import { clipHalfPlanes } from "./clip-half-planes.js";
 import { collapseVanishedEdges } from "./collapse-vanished-edges.js";
 import { edgeHalfPlanes } from "./edge-half-planes.js";
 import { exactClip } from "./exact-clip.js";
+import { ringArena } from "./ring-arena.js";
 import { simplePolygonProblem } from "./simple-polygon-problem.js";
 
 let planes = new Float64Array(96);
@@ -41,7 +42,11 @@ export function mitreInset(
   if (convex) {
     const k = edgeHalfPlanes(ring, m, delta, planes, 0);
     const count = clipHalfPlanes(ring, m, planes, k, out, scratch);
-    if (count >= 3) result.push(out.slice(0, 2 * count));
+    if (count >= 3) {
+      const piece = ringArena.take(2 * count);
+      piece.set(out.subarray(0, 2 * count));
+      result.push(piece);
+    }
     return;
   }
   // Moved lines: a·x + b·y = c + δ with (a, b) edge i's inward unit normal.
@@ -56,7 +61,7 @@ export function mitreInset(
     planes[3 * i + 1] = dx / l;
     planes[3 * i + 2] = (-dy * px + dx * py) / l + delta;
   }
-  const raw = new Float64Array(2 * m);
+  const raw = ringArena.take(2 * m);
   for (let j = 0; j < m; j++) {
     const i = j === 0 ? m - 1 : j - 1;
     const a1 = planes[3 * i]!;

@@ -1,3 +1,5 @@
+import { ringArena } from "./ring-arena.js";
+
 let ts = new Float64Array(32);
 let order: number[] = [];
 /** Arc coordinates, one arc after another (reused from call to call). */
@@ -84,7 +86,9 @@ export function splitByHalfPlane(ring: Float64Array, a: number, b: number, c: nu
   }
   if (k === 0) return true;
   if (k === 1) {
-    out.push(pts.slice(arcAt[0]!, arcAt[1]!));
+    const piece = ringArena.take(arcAt[1]! - arcAt[0]!);
+    piece.set(pts.subarray(arcAt[0]!, arcAt[1]!));
+    out.push(piece);
     return true;
   }
   // Positions along the line: entry of arc j at 2j, exit at 2j + 1.
@@ -117,7 +121,7 @@ export function splitByHalfPlane(ring: Float64Array, a: number, b: number, c: nu
       arc = next[arc]!;
     }
     if (arc !== j) return false;
-    const piece = new Float64Array(size);
+    const piece = ringArena.take(size);
     let o = 0;
     arc = j;
     do {

@@ -1,3 +1,4 @@
+import { ringArena } from "./ring-arena.js";
 import { ringArea } from "./ring-metrics.js";
 
 /** Crossings of the ring with the region's boundary: plane index (position along the chain) and place on its line. */
@@ -303,7 +304,7 @@ export function subtractConvexRegion(
       pts.length -= 2;
     }
     if (pts.length < 6) return false;
-    const piece = new Float64Array(pts.length);
+    const piece = ringArena.take(pts.length);
     for (let i = 0; i < pts.length; i++) piece[i] = pts[i]!;
     if (!(ringArea(piece) > 0)) return false;
     pieces.push(piece);

@@ -1,4 +1,5 @@
 import { exactClip } from "../geometry/exact-clip.js";
+import { ringArena } from "../geometry/ring-arena.js";
 import { splitByHalfPlane } from "../geometry/split-by-half-plane.js";
 import { hullWidth } from "../geometry/hull-width.js";
 import { polygonWidth } from "../geometry/polygon-width.js";
@@ -91,6 +92,8 @@ export function evaluateSimpleLot(
   oy: number,
 ): MassingResult {
   const { setbacks, floorHeight, maxHeight, skyPlane } = input;
+  // Every ring of this evaluation comes from the arena; the plates are copied out (toPoints).
+  ringArena.reset();
   const f = lotFrame(xy, n, input.parcel.lotLines, ccw);
   const lotArea = ringArea(f.xy);
   const areaTol = REL * lotArea;

@@ -1,3 +1,4 @@
+import { ringArena } from "../geometry/ring-arena.js";
 import type { LotLine } from "./massing-types.js";
 
 /**
@@ -72,7 +73,7 @@ function buffersFor(n: number): FrameBuffers {
  */
 export function lotFrame(xy: Float64Array, n: number, lotLines: readonly LotLine[], ccw: boolean): LotFrame {
   const b = buffersFor(n);
-  const v = new Float64Array(2 * n);
+  const v = ringArena.take(2 * n);
   const kinds: LotLine[] = new Array<LotLine>(n);
   for (let j = 0; j < n; j++) {
     const src = ccw ? j : n - 1 - j;

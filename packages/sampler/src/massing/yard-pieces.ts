@@ -1,6 +1,7 @@
 import { clipHalfPlaneArcs, clippedArcs } from "../geometry/clip-half-plane-arcs.js";
 import { clipHalfPlanes } from "../geometry/clip-half-planes.js";
 import { exactClip, exactClipGrid } from "../geometry/exact-clip.js";
+import { ringArena } from "../geometry/ring-arena.js";
 import { splitByHalfPlane } from "../geometry/split-by-half-plane.js";
 import type { LotFrame } from "./lot-frame.js";
 
@@ -41,6 +42,13 @@ function stripPlanes(f: LotFrame, i: number, s: number): number {
     k++;
   }
   return k;
+}
+
+/** The first `length` doubles of `src` as a ring of the arena. */
+function copyRing(src: Float64Array, length: number): Float64Array {
+  const ring = ringArena.take(length);
+  ring.set(src.subarray(0, length));
+  return ring;
 }
 
 /** Distance from (x, y) to the closed ring's boundary is at most tol. */
@@ -93,11 +101,11 @@ export function yardPieces(f: LotFrame, i: number, s: number, out: Float64Array[
     dst = dst === bufA ? bufB : bufA;
   }
   if (j === k) {
-    out.push(src.slice(0, 2 * m));
+    out.push(copyRing(src, 2 * m));
     return 1;
   }
   // Several arcs: split the pieces apart, plane by plane from plane j on.
-  let pieces: Float64Array[] = [src === f.xy ? f.xy : src.slice(0, 2 * m)];
+  let pieces: Float64Array[] = [src === f.xy ? f.xy : copyRing(src, 2 * m)];
   let clean = true;
   for (let p = j; p < k && clean; p++) {
     const next: Float64Array[] = [];
