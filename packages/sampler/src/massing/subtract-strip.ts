@@ -13,22 +13,17 @@ const chain = new Float64Array(12);
  * @returns the number of half-planes written to `out` (2 to 4; 4 when both ends are re-entrant).
  */
 function stripChain(f: LotFrame, i: number, s: number, out: Float64Array): number {
-  const nx = f.nx[i]!;
-  const ny = f.ny[i]!;
+  const t0 = f.ux[i]! * f.xy[2 * i]! + f.uy[i]! * f.xy[2 * i + 1]!;
   const c = f.c[i]!;
-  const ux = f.ux[i]!;
-  const uy = f.uy[i]!;
-  const t0 = ux * f.xy[2 * i]! + uy * f.xy[2 * i + 1]!;
-  const t1 = t0 + f.len[i]!;
   const start = f.reflexStart[i] === 1;
   const end = f.reflexEnd[i] === 1;
   // Line, end perpendicular, parallel, start perpendicular (cyclic), starting after a missing one.
-  const ring = [nx, ny, c, end ? -ux : NaN, -uy, -t1, -nx, -ny, -(c + s), start ? ux : NaN, uy, t0];
+  const ring = [f.nx[i]!, f.ny[i]!, c, -f.ux[i]!, -f.uy[i]!, -(t0 + f.len[i]!), -f.nx[i]!, -f.ny[i]!, -(c + s), f.ux[i]!, f.uy[i]!, t0];
   const first = end ? 0 : 2;
   let k = 0;
   for (let r = 0; r < 4; r++) {
     const j = (first + r) % 4;
-    if (Number.isNaN(ring[3 * j]!)) continue;
+    if ((j === 1 && !end) || (j === 3 && !start)) continue;
     out[3 * k] = ring[3 * j]!;
     out[3 * k + 1] = ring[3 * j + 1]!;
     out[3 * k + 2] = ring[3 * j + 2]!;
