@@ -37,6 +37,22 @@ function pushPoint(out: number[], x: number, y: number, tol: number): void {
   out.push(x, y);
 }
 
+/** Whether the corner of planes k − 1 and 0 lies inside the ring (crossing number). */
+function cornerInside(ring: Float64Array, planes: Float64Array, k: number): boolean {
+  const corner: number[] = [];
+  if (!pushCorner(planes, k - 1, 0, corner, 0)) return false;
+  const x = corner[0]!;
+  const y = corner[1]!;
+  const m = ring.length >> 1;
+  let inside = false;
+  for (let a = 0, b = m - 1; a < m; b = a++) {
+    const ay = ring[2 * b + 1]!;
+    const by = ring[2 * a + 1]!;
+    if (ay > y !== by > y && x < ring[2 * b]! + ((y - ay) * (ring[2 * a]! - ring[2 * b]!)) / (by - ay)) inside = !inside;
+  }
+  return inside;
+}
+
 /**
  * The part of a counter-clockwise simple ring outside a convex region S = {a_j·x + b_j·y ≥ c_j}, as
  * separate counter-clockwise pieces, without a polygon clipper; optionally only the parts of
@@ -60,8 +76,9 @@ function pushPoint(out: number[], x: number, y: number, tol: number): void {
  * @param out - receives the pieces.
  * @param removes - for a point where the ring enters or leaves S, whether the part of ring ∩ S there
  *   goes (null: cannot tell); every part goes when omitted.
- * @returns false when the crossings do not pair up cleanly (round-off, touching) or `removes` cannot
- *   tell: nothing is then written to `out` and the caller must use a polygon clipper.
+ * @returns false when the crossings do not pair up cleanly (round-off, touching), S lies inside the
+ *   ring (a hole), or `removes` cannot tell: nothing is then written to `out` and the caller must use
+ *   a polygon clipper.
  */
 export function subtractConvexRegion(
   ring: Float64Array,
@@ -151,7 +168,7 @@ export function subtractConvexRegion(
     // A stretch inside S shorter than eps between two outside ends (a graze) may pinch a piece; a
     // longer one along S's boundary with S outside the ring is a contact without area, which the walk
     // would turn into a slit. Both are left to the clipper.
-    if (!empty && jin >= 0 && jout >= 0 && (tout - tin) * len <= eps) return false;
+    if (!empty && jin >= 0 && jout >= 0 && tout >= tin && (tout - tin) * len <= eps) return false;
     if (along && !empty && (tout - tin) * len > eps) return false;
     if (empty || tin > tout) {
       if (!open) return false; // from inside S to outside without a crossing: round-off
@@ -203,7 +220,8 @@ export function subtractConvexRegion(
     touch = -1;
   }
   if (arcs === 0) {
-    if (!open) return false;
+    // No crossing: S is apart from the ring, or (bounded) inside it, which would leave a hole.
+    if (!open || (closed && cornerInside(ring, planes, k))) return false;
     out.push(ring);
     return true;
   }
