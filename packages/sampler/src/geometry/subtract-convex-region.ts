@@ -54,6 +54,38 @@ function cornerInside(ring: Float64Array, planes: Float64Array, k: number): bool
 }
 
 /**
+ * Whether the ring meets S shrunk by eps (every half-plane moved eps inward): some edge has a stretch
+ * longer than eps there (Cyrus–Beck), or, S bounded, a corner of it lies inside the ring.
+ */
+function meetsInterior(ring: Float64Array, planes: Float64Array, k: number, eps: number): boolean {
+  const m = ring.length >> 1;
+  for (let i = 0; i < m; i++) {
+    const j = i + 1 === m ? 0 : i + 1;
+    const px = ring[2 * i]!;
+    const py = ring[2 * i + 1]!;
+    const dx = ring[2 * j]! - px;
+    const dy = ring[2 * j + 1]! - py;
+    let tin = 0;
+    let tout = 1;
+    for (let h = 0; h < k && tin <= tout; h++) {
+      const dp = planes[3 * h]! * px + planes[3 * h + 1]! * py - planes[3 * h + 2]! - eps;
+      const dq = dp + planes[3 * h]! * dx + planes[3 * h + 1]! * dy;
+      if (dp < 0 && dq < 0) tout = -1;
+      else if (dp < 0) tin = Math.max(tin, dp / (dp - dq));
+      else if (dq < 0) tout = Math.min(tout, dp / (dp - dq));
+    }
+    if ((tout - tin) * Math.sqrt(dx * dx + dy * dy) > eps) return true;
+  }
+  return false;
+}
+
+/** Pushes the ring unchanged (S takes nothing from it). */
+function keep(ring: Float64Array, out: Float64Array[]): boolean {
+  out.push(ring);
+  return true;
+}
+
+/**
  * The part of a counter-clockwise simple ring outside a convex region S = {a_j·x + b_j·y ≥ c_j}, as
  * separate counter-clockwise pieces, without a polygon clipper; optionally only the parts of
  * ring ∩ S that `removes` picks are taken away. Each edge's stretch inside S comes from clipping its
@@ -165,11 +197,12 @@ export function subtractConvexRegion(
       }
     }
     const len = Math.sqrt(dx * dx + dy * dy);
-    // A stretch inside S shorter than eps between two outside ends (a graze) may pinch a piece; a
-    // longer one along S's boundary with S outside the ring is a contact without area, which the walk
-    // would turn into a slit. Both are left to the clipper.
+    // A stretch inside S shorter than eps between two outside ends (a graze) may pinch a piece: left to
+    // the clipper. A longer one along S's boundary with S outside the ring is a contact without area,
+    // which the walk would turn into a slit: the ring stays whole when no edge reaches into S (S then
+    // lies on the contact's outer side, so no part of it is inside the ring), else the clipper decides.
     if (!empty && jin >= 0 && jout >= 0 && tout >= tin && (tout - tin) * len <= eps) return false;
-    if (along && !empty && (tout - tin) * len > eps) return false;
+    if (along && !empty && (tout - tin) * len > eps) return meetsInterior(ring, planes, k, eps) ? false : keep(ring, out);
     if (empty || tin > tout) {
       if (!open) return false; // from inside S to outside without a crossing: round-off
       outPts.push(ring[2 * iq]!, ring[2 * iq + 1]!);
