@@ -1,4 +1,6 @@
+import { pointInRing } from "./point-in-ring.js";
 import { ringArena } from "./ring-arena.js";
+import { ringMeetsConvexRegion } from "./ring-meets-convex-region.js";
 import { ringArea } from "./ring-metrics.js";
 
 /** Crossings of the ring with the region's boundary: plane index (position along the chain) and place on its line. */
@@ -37,46 +39,10 @@ function pushPoint(out: number[], x: number, y: number, tol: number): void {
   out.push(x, y);
 }
 
-/** Whether the corner of planes k − 1 and 0 lies inside the ring (crossing number). */
+/** Whether the corner of planes k − 1 and 0 lies inside the ring. */
 function cornerInside(ring: Float64Array, planes: Float64Array, k: number): boolean {
   const corner: number[] = [];
-  if (!pushCorner(planes, k - 1, 0, corner, 0)) return false;
-  const x = corner[0]!;
-  const y = corner[1]!;
-  const m = ring.length >> 1;
-  let inside = false;
-  for (let a = 0, b = m - 1; a < m; b = a++) {
-    const ay = ring[2 * b + 1]!;
-    const by = ring[2 * a + 1]!;
-    if (ay > y !== by > y && x < ring[2 * b]! + ((y - ay) * (ring[2 * a]! - ring[2 * b]!)) / (by - ay)) inside = !inside;
-  }
-  return inside;
-}
-
-/**
- * Whether the ring meets S shrunk by eps (every half-plane moved eps inward): some edge has a stretch
- * longer than eps there (Cyrus–Beck), or, S bounded, a corner of it lies inside the ring.
- */
-function meetsInterior(ring: Float64Array, planes: Float64Array, k: number, eps: number): boolean {
-  const m = ring.length >> 1;
-  for (let i = 0; i < m; i++) {
-    const j = i + 1 === m ? 0 : i + 1;
-    const px = ring[2 * i]!;
-    const py = ring[2 * i + 1]!;
-    const dx = ring[2 * j]! - px;
-    const dy = ring[2 * j + 1]! - py;
-    let tin = 0;
-    let tout = 1;
-    for (let h = 0; h < k && tin <= tout; h++) {
-      const dp = planes[3 * h]! * px + planes[3 * h + 1]! * py - planes[3 * h + 2]! - eps;
-      const dq = dp + planes[3 * h]! * dx + planes[3 * h + 1]! * dy;
-      if (dp < 0 && dq < 0) tout = -1;
-      else if (dp < 0) tin = Math.max(tin, dp / (dp - dq));
-      else if (dq < 0) tout = Math.min(tout, dp / (dp - dq));
-    }
-    if ((tout - tin) * Math.sqrt(dx * dx + dy * dy) > eps) return true;
-  }
-  return false;
+  return pushCorner(planes, k - 1, 0, corner, 0) && pointInRing(ring, corner[0]!, corner[1]!);
 }
 
 /** Pushes the ring unchanged (S takes nothing from it). */
@@ -202,7 +168,7 @@ export function subtractConvexRegion(
     // which the walk would turn into a slit: the ring stays whole when no edge reaches into S (S then
     // lies on the contact's outer side, so no part of it is inside the ring), else the clipper decides.
     if (!empty && jin >= 0 && jout >= 0 && tout >= tin && (tout - tin) * len <= eps) return false;
-    if (along && !empty && (tout - tin) * len > eps) return meetsInterior(ring, planes, k, eps) ? false : keep(ring, out);
+    if (along && !empty && (tout - tin) * len > eps) return ringMeetsConvexRegion(ring, planes, k, eps) ? false : keep(ring, out);
     if (empty || tin > tout) {
       if (!open) return false; // from inside S to outside without a crossing: round-off
       outPts.push(ring[2 * iq]!, ring[2 * iq + 1]!);

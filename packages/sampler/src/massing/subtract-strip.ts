@@ -1,3 +1,4 @@
+import { pointInRing } from "../geometry/point-in-ring.js";
 import { subtractConvexRegion } from "../geometry/subtract-convex-region.js";
 import type { LotFrame } from "./lot-frame.js";
 
@@ -32,22 +33,23 @@ function stripChain(f: LotFrame, i: number, s: number, out: Float64Array): numbe
   return k;
 }
 
-/** Distance from (x, y) to a counter-clockwise ring's region (0 inside; crossing number, then the nearest edge). */
+/** Distance from (x, y) to a ring's region: 0 inside, else to the nearest edge. */
 function distanceToRing(ring: Float64Array, x: number, y: number): number {
+  if (pointInRing(ring, x, y)) return 0;
   const m = ring.length >> 1;
-  let inside = false;
   let best = Infinity;
   for (let a = 0, b = m - 1; a < m; b = a++) {
     const ax = ring[2 * b]!;
     const ay = ring[2 * b + 1]!;
     const dx = ring[2 * a]! - ax;
     const dy = ring[2 * a + 1]! - ay;
-    if (ay > y !== ring[2 * a + 1]! > y && x < ax + ((y - ay) * dx) / dy) inside = !inside;
     const l2 = dx * dx + dy * dy;
     const t = l2 > 0 ? Math.max(0, Math.min(1, ((x - ax) * dx + (y - ay) * dy) / l2)) : 0;
-    best = Math.min(best, Math.hypot(ax + t * dx - x, ay + t * dy - y));
+    const ex = ax + t * dx - x;
+    const ey = ay + t * dy - y;
+    best = Math.min(best, Math.sqrt(ex * ex + ey * ey));
   }
-  return inside ? 0 : best;
+  return best;
 }
 
 /**
