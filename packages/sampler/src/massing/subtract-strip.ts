@@ -1,4 +1,5 @@
 import { pointInRing } from "../geometry/point-in-ring.js";
+import { ringBoundaryDistance } from "../geometry/ring-boundary-distance.js";
 import { subtractConvexRegion } from "../geometry/subtract-convex-region.js";
 import type { LotFrame } from "./lot-frame.js";
 
@@ -33,25 +34,6 @@ function stripChain(f: LotFrame, i: number, s: number, out: Float64Array): numbe
   return k;
 }
 
-/** Distance from (x, y) to a ring's region: 0 inside, else to the nearest edge. */
-function distanceToRing(ring: Float64Array, x: number, y: number): number {
-  if (pointInRing(ring, x, y)) return 0;
-  const m = ring.length >> 1;
-  let best = Infinity;
-  for (let a = 0, b = m - 1; a < m; b = a++) {
-    const ax = ring[2 * b]!;
-    const ay = ring[2 * b + 1]!;
-    const dx = ring[2 * a]! - ax;
-    const dy = ring[2 * a + 1]! - ay;
-    const l2 = dx * dx + dy * dy;
-    const t = l2 > 0 ? Math.max(0, Math.min(1, ((x - ax) * dx + (y - ay) * dy) / l2)) : 0;
-    const ex = ax + t * dx - x;
-    const ey = ay + t * dy - y;
-    best = Math.min(best, Math.sqrt(ex * ex + ey * ey));
-  }
-  return best;
-}
-
 /**
  * Pieces less the yard of lot line i at depth s (the yard rule's strip, bounded by the
  * perpendicular(s) at its re-entrant end(s); see yardPieces), in floating point by
@@ -82,7 +64,7 @@ export function subtractStrip(
       ? undefined
       : (x: number, y: number): boolean | null => {
           let d = Infinity;
-          for (const r of yard) d = Math.min(d, distanceToRing(r, x, y));
+          for (const r of yard) d = Math.min(d, pointInRing(r, x, y) ? 0 : ringBoundaryDistance(r, x, y));
           return d <= 1e-6 * size ? true : d > 1e-3 * size ? false : null;
         };
   const out: Float64Array[] = [];

@@ -2,6 +2,7 @@ import { clipHalfPlaneArcs, clippedArcs } from "../geometry/clip-half-plane-arcs
 import { clipHalfPlanes } from "../geometry/clip-half-planes.js";
 import { exactClip, exactClipGrid } from "../geometry/exact-clip.js";
 import { ringArena } from "../geometry/ring-arena.js";
+import { ringBoundaryDistance } from "../geometry/ring-boundary-distance.js";
 import { splitByHalfPlane } from "../geometry/split-by-half-plane.js";
 import type { LotFrame } from "./lot-frame.js";
 
@@ -49,22 +50,6 @@ function copyRing(src: Float64Array, length: number): Float64Array {
   const ring = ringArena.take(length);
   ring.set(src.subarray(0, length));
   return ring;
-}
-
-/** Distance from (x, y) to the closed ring's boundary is at most tol. */
-function nearBoundary(ring: Float64Array, x: number, y: number, tol: number): boolean {
-  const m = ring.length >> 1;
-  for (let a = 0; a < m; a++) {
-    const b = a + 1 === m ? 0 : a + 1;
-    const ax = ring[2 * a]!;
-    const ay = ring[2 * a + 1]!;
-    const dx = ring[2 * b]! - ax;
-    const dy = ring[2 * b + 1]! - ay;
-    const l2 = dx * dx + dy * dy;
-    const t = l2 > 0 ? Math.max(0, Math.min(1, ((x - ax) * dx + (y - ay) * dy) / l2)) : 0;
-    if (Math.hypot(ax + t * dx - x, ay + t * dy - y) <= tol) return true;
-  }
-  return false;
 }
 
 /**
@@ -121,7 +106,7 @@ export function yardPieces(f: LotFrame, i: number, s: number, out: Float64Array[
   const mx = f.xy[2 * i]! + 0.5 * f.len[i]! * f.ux[i]!;
   const my = f.xy[2 * i + 1]! + 0.5 * f.len[i]! * f.uy[i]!;
   const tol = clean ? 1e3 * f.eps : 8 * exactClipGrid();
-  for (const p of pieces) if (nearBoundary(p, mx, my, tol)) out.push(p);
+  for (const p of pieces) if (ringBoundaryDistance(p, mx, my) <= tol) out.push(p);
   return pieces.length;
 }
 
