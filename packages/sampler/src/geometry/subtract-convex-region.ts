@@ -10,10 +10,10 @@ let keyT = new Float64Array(32);
 let keyVertex = new Uint8Array(32);
 /** Crossing 2a starts outside arc a (leaving S); crossing 2a + 1 ends it (entering S). */
 let order: number[] = [];
-let outPts: number[] = [];
+const outPts: number[] = [];
 let outAt = new Int32Array(32);
 /** Inside arc a runs from crossing 2a + 1 to crossing 2(a + 1) (arc 0's start after the last arc). */
-let inPts: number[] = [];
+const inPts: number[] = [];
 let inAt = new Int32Array(32);
 let cut = new Uint8Array(16);
 let next = new Int32Array(16);
@@ -115,8 +115,8 @@ export function subtractConvexRegion(
     outAt = new Int32Array(4 * m + 4);
     inAt = new Int32Array(4 * m + 4);
   }
-  outPts = [];
-  inPts = [];
+  outPts.length = 0;
+  inPts.length = 0;
   let arcs = 0;
   let firstEnd = -1; // length of outPts when the first arc (which began before `start`) entered S
   let open = true; // currently outside S, on an arc
