@@ -21,15 +21,11 @@ let used = new Uint8Array(16);
 
 /** Appends the corner where the lines of planes p and q meet; false when they are parallel. */
 function pushCorner(planes: Float64Array, p: number, q: number, out: number[], tol: number): boolean {
-  const a1 = planes[3 * p]!;
-  const b1 = planes[3 * p + 1]!;
-  const c1 = planes[3 * p + 2]!;
-  const a2 = planes[3 * q]!;
-  const b2 = planes[3 * q + 1]!;
-  const c2 = planes[3 * q + 2]!;
-  const det = a1 * b2 - b1 * a2;
+  const det = planes[3 * p]! * planes[3 * q + 1]! - planes[3 * p + 1]! * planes[3 * q]!;
   if (!(Math.abs(det) > 1e-12)) return false;
-  pushPoint(out, (c1 * b2 - b1 * c2) / det, (a1 * c2 - c1 * a2) / det, tol);
+  const c1 = planes[3 * p + 2]!;
+  const c2 = planes[3 * q + 2]!;
+  pushPoint(out, (c1 * planes[3 * q + 1]! - planes[3 * p + 1]! * c2) / det, (planes[3 * p]! * c2 - c1 * planes[3 * q]!) / det, tol);
   return true;
 }
 
@@ -43,12 +39,6 @@ function pushPoint(out: number[], x: number, y: number, tol: number): void {
 function cornerInside(ring: Float64Array, planes: Float64Array, k: number): boolean {
   const corner: number[] = [];
   return pushCorner(planes, k - 1, 0, corner, 0) && pointInRing(ring, corner[0]!, corner[1]!);
-}
-
-/** Pushes the ring unchanged (S takes nothing from it). */
-function keep(ring: Float64Array, out: Float64Array[]): boolean {
-  out.push(ring);
-  return true;
 }
 
 /**
@@ -101,12 +91,10 @@ export function subtractConvexRegion(
     }
   }
   if (start < 0) {
-    // The whole ring is in S.
-    if (removes === undefined) return true;
-    const keep = removes(ring[0]!, ring[1]!);
-    if (keep === null) return false;
-    if (!keep) out.push(ring);
-    return true;
+    // The whole ring is in S: it goes, unless `removes` keeps it.
+    const goes = removes === undefined ? true : removes(ring[0]!, ring[1]!);
+    if (goes === false) out.push(ring);
+    return goes !== null;
   }
   if (keyPlane.length < 2 * m + 2) {
     keyPlane = new Int32Array(4 * m + 4);
@@ -168,7 +156,11 @@ export function subtractConvexRegion(
     // which the walk would turn into a slit: the ring stays whole when no edge reaches into S (S then
     // lies on the contact's outer side, so no part of it is inside the ring), else the clipper decides.
     if (!empty && jin >= 0 && jout >= 0 && tout >= tin && (tout - tin) * len <= eps) return false;
-    if (along && !empty && (tout - tin) * len > eps) return ringMeetsConvexRegion(ring, planes, k, eps) ? false : keep(ring, out);
+    if (along && !empty && (tout - tin) * len > eps) {
+      if (ringMeetsConvexRegion(ring, planes, k, eps)) return false;
+      out.push(ring);
+      return true;
+    }
     if (empty || tin > tout) {
       if (!open) return false; // from inside S to outside without a crossing: round-off
       outPts.push(ring[2 * iq]!, ring[2 * iq + 1]!);
