@@ -120,3 +120,53 @@ describe.skipIf(!hasRef)("GP against scikit-learn, hyperparameters fitted", () =
     });
   });
 });
+
+// A stepped response (a capped sum with whole steps along x2, like FAR or whole-floor steps) whose third input a
+// 60-row maximin subset finds irrelevant: the subset's optimum and a 10-iteration polish stay in that basin, while
+// the all-row likelihood peaks at a short third lengthscale. The shorter-lengthscale probes must find scikit-learn's
+// all-row optimum (sklearn fits every start on all 300 rows). Data: seeded uniform rows (derived).
+const stepped = (r: readonly number[]): number => Math.min(2 + 2 * r[0]! + Math.sin(3 * r[2]!), (Math.floor(5 * r[1]!) / 5) * 4 + 0.5);
+const steppedRows = (n: number, seed: number): number[][] => {
+  // Park–Miller minimal standard generator (Park & Miller 1988), enough for test rows.
+  let s = seed;
+  const u = (): number => (s = (s * 48271) % 2147483647) / 2147483647;
+  return Array.from({ length: n }, () => [u(), u(), u()]);
+};
+
+describe.skipIf(!hasRef)("GP subset fit with shorter-lengthscale probes against scikit-learn on all rows", () => {
+  const seeds = [2, 14];
+  const runs = seeds.map((seed) => {
+    const x = steppedRows(300, seed);
+    return { seed, x, y: x.map((r) => [stepped(r)]) };
+  });
+  let refs: FitOut[] = [];
+  beforeAll(() => {
+    refs = runReference<FitOut[]>("gp_sklearn.py", {
+      batch: runs.map(({ x, y }) => ({
+        mode: "fit",
+        kernel: "matern52",
+        x,
+        y: y.map((r) => r[0]),
+        xTest: [],
+        start: { lengthscale: Math.sqrt(0.15), signalVariance: 1, noiseVariance: 1e-4 },
+        bounds: { lengthscale: [1e-2, 1e3], signalVariance: [1e-3, 1e6], noiseVariance: [1e-6, 1] },
+        restarts: 3,
+        seed: 5,
+      })),
+    });
+  });
+  runs.forEach(({ seed, x, y }, k) => {
+    it(`rows seeded ${seed}: with the probes our LML ≥ sklearn's − 1e-3·|LML|; without them it is lower`, () => {
+      const data = { inputs: ["x1", "x2", "x3"], targets: ["f"], x, y };
+      const options = { seed: 5, hyperparameterSubset: 60, inputBounds: { lower: [0, 0, 0], upper: [1, 1, 1] } };
+      const probed = fitGaussianProcess(data, options);
+      const plain = fitGaussianProcess(data, { ...options, probeLengthscales: false });
+      const sk = refs[k]!.lml;
+      expect(probed.diagnostics.targets[0]!.polishStart).toMatch(/^lengthscale\[x\d\]/);
+      expect(probed.logMarginalLikelihood()[0]!).toBeGreaterThanOrEqual(sk - 1e-3 * Math.abs(sk));
+      // The case is one where the probes matter: without them the polish ends well below the all-row optimum.
+      expect(plain.diagnostics.targets[0]!.polishStart).toBe("subset optimum");
+      expect(plain.logMarginalLikelihood()[0]!).toBeLessThan(sk - 0.05 * Math.abs(sk));
+    });
+  });
+});

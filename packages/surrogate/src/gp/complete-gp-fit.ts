@@ -11,6 +11,8 @@ import { hyperparametersFromTheta } from "./kernels/kernel-hyperparameters.js";
 export interface GpTargetSearchResult {
   readonly fit: HyperparameterFitResult;
   readonly polished: HyperparameterFitResult | undefined;
+  /** Label of the polish's start (see polishCandidates), when there was a polish. */
+  readonly polishStart?: string;
 }
 
 /**
@@ -29,12 +31,14 @@ export function completeGpFit(plan: GpFitPlan, searches: readonly (GpTargetSearc
     let h: KernelHyperparameters;
     let restarts: number[] = [];
     let onBounds: string[] = [];
+    let polishStart: string | undefined;
     const s = searches[j];
     if (o.fixed || s === undefined) {
       h = o.fixed![j]!;
     } else {
       restarts = s.fit.restarts.map((r) => r.logMarginalLikelihood);
       const fit = s.polished ?? s.fit;
+      polishStart = s.polished === undefined ? undefined : s.polishStart;
       h = hyperparametersFromTheta(plan.layout, fit.theta);
       onBounds = fit.onBound.flatMap((b, i) => (b ? [`${thetaName(plan.layout, plan.data.inputs, i)}=${b}`] : []));
     }
@@ -53,6 +57,7 @@ export function completeGpFit(plan: GpFitPlan, searches: readonly (GpTargetSearc
       onBounds,
       warnings,
       restartLogMarginalLikelihoods: restarts,
+      ...(polishStart === undefined ? {} : { polishStart }),
     });
   });
   return new GaussianProcess({

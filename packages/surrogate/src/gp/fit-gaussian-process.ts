@@ -1,6 +1,7 @@
 import type { TrainingData } from "../surrogate-types.js";
 import { completeGpFit } from "./complete-gp-fit.js";
-import { fitHyperparameters } from "./fit/fit-hyperparameters.js";
+import { fitHyperparameters, runProbe } from "./fit/fit-hyperparameters.js";
+import { choosePolishStart, polishCandidates } from "./fit/polish-start.js";
 import type { GaussianProcess } from "./gaussian-process.js";
 import type { GaussianProcessOptions } from "./gaussian-process-options.js";
 import { planGpFit } from "./gp-fit-plan.js";
@@ -10,7 +11,7 @@ import { polishSearch } from "./polish-search.js";
  * Fits a Gaussian-process surrogate: inputs to the unit cube, each target standardised, one independent GP per
  * target; hyperparameters by type-II maximum likelihood (analytic gradient, bounded projected L-BFGS, seeded
  * Latin-hypercube restarts), optionally on a greedy maximin subset of the rows (then polished by a few iterations
- * on all rows), then conditioned on all rows
+ * on all rows, from the best of the subset's optimum and its shorter-lengthscale probes), then conditioned on all rows
  * (Rasmussen & Williams 2006, Alg. 2.1 and §5.4.1). Everything runs on the calling thread, restarts one after
  * another; fitGaussianProcessParallel gives the same model with the restarts on worker threads.
  * @param data - training rows (finite numbers; at least one row).
@@ -22,10 +23,15 @@ export function fitGaussianProcess(data: TrainingData, options: GaussianProcessO
   const plan = planGpFit("fitGaussianProcess", data, options);
   const searches = plan.targets.map((target) => {
     if (target.search === undefined) return undefined;
-    const fit = fitHyperparameters(plan.xFit, target.yFit, target.search);
-    // Polish the subset's optimum on all rows: a few L-BFGS iterations from it (documented option).
-    const polished = plan.polish > 0 ? fitHyperparameters(plan.x, target.y, polishSearch(target.search, fit, plan.polish)) : undefined;
-    return { fit, polished };
+    const search = target.search;
+    const fit = fitHyperparameters(plan.xFit, target.yFit, search);
+    if (plan.polish === 0) return { fit, polished: undefined };
+    // Polish on all rows: a few L-BFGS iterations from the best of the subset's optimum and its probes.
+    const candidates = polishCandidates(search, fit, plan.probe, plan.data.inputs);
+    const outcomes = candidates.length > 1 ? candidates.map((c) => runProbe(plan.x, target.y, search, c.theta)) : [];
+    const start = choosePolishStart(candidates, outcomes);
+    const polished = fitHyperparameters(plan.x, target.y, polishSearch(search, start.theta, plan.polish));
+    return { fit, polished, polishStart: start.label };
   });
   return completeGpFit(plan, searches);
 }

@@ -42,6 +42,7 @@ export function gaussianProcessFromFile(file: GpModelFile, fileName = "model fil
       onBounds: Array.isArray(raw.onBounds) ? raw.onBounds.map(String) : [],
       warnings: Array.isArray(raw.warnings) ? raw.warnings.map(String) : [],
       restartLogMarginalLikelihoods: Array.isArray(raw.restartLogMarginalLikelihoods) ? raw.restartLogMarginalLikelihoods.map(Number) : [],
+      ...(typeof raw.polishStart === "string" ? { polishStart: raw.polishStart } : {}),
     };
   });
   return new GaussianProcess({

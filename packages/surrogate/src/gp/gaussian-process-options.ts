@@ -43,6 +43,12 @@ export interface GaussianProcessOptions {
    * [10 when n ≤ 2,000, else 0]; 0 turns the polish off.
    */
   readonly polishIterations?: number;
+  /**
+   * Before a polish, compare on all rows the subset's optimum with it after shortening each ARD lengthscale in turn
+   * by ¼ and 1/16, and polish from the best [true]. A subset cannot resolve structure finer than its spacing (such as
+   * FAR or whole-floor steps along one input); without the probes the polish stays in the basin the subset found.
+   */
+  readonly probeLengthscales?: boolean;
   /** Refuse (RangeError) fits estimated to need more bytes than this [2 GiB]. */
   readonly memoryBudgetBytes?: number;
 }

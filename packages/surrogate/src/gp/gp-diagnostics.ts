@@ -11,6 +11,11 @@ export interface GpTargetDiagnostics {
   readonly warnings: readonly string[];
   /** LML of each restart (standardised target), in start order; empty when hyperparameters were given. */
   readonly restartLogMarginalLikelihoods: readonly number[];
+  /**
+   * Where the polish on all rows started: "subset optimum" or the probe that beat it, e.g. "lengthscale[maxFar] × 1/4"
+   * (absent when there was no polish).
+   */
+  readonly polishStart?: string;
 }
 
 /** Fit summary of a Gaussian process. */

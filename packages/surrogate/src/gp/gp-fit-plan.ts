@@ -30,6 +30,8 @@ export interface GpFitPlan {
   readonly m: number;
   /** L-BFGS iterations on all rows after a subset fit (0 for none). */
   readonly polish: number;
+  /** Whether the polish compares the subset's optimum with its shorter-lengthscale probes on all rows first. */
+  readonly probe: boolean;
   readonly inputScaling: InputScaling;
   readonly outputScaling: OutputScaling;
   readonly layout: HyperparameterLayout;
@@ -78,7 +80,8 @@ export function planGpFit(fn: string, data: TrainingData, options: GaussianProce
       : { kernel: o.kernel, layout, ...o.search(layout), restarts: o.restarts, seed: o.seed + 7919 * j, maxIterations: o.maxIterations };
     targets.push({ y, yFit, search });
   }
-  return { data, options: o, started, n, d, m, polish, inputScaling, outputScaling, layout, x, xFit, targets };
+  const probe = polish > 0 && o.probeLengthscales && o.ard;
+  return { data, options: o, started, n, d, m, polish, probe, inputScaling, outputScaling, layout, x, xFit, targets };
 }
 
 function pick(x: Float64Array, d: number, rows: readonly number[]): Float64Array {

@@ -16,6 +16,7 @@ export interface ResolvedGpOptions {
   readonly maxIterations: number;
   readonly subset: number | false;
   readonly polishIterations: number | undefined;
+  readonly probeLengthscales: boolean;
   readonly memoryBudgetBytes: number;
   /** Log-space bounds and start box for a layout. */
   search(layout: HyperparameterLayout): { logLower: Float64Array; logUpper: Float64Array; startLower: Float64Array; startUpper: Float64Array };
@@ -91,6 +92,8 @@ export function resolveGpOptions(fn: string, o: GaussianProcessOptions, d: numbe
     });
   }
   const subset = o.hyperparameterSubset === false ? false : int("options.hyperparameterSubset", o.hyperparameterSubset, 600, 1);
+  const probeLengthscales = o.probeLengthscales ?? true;
+  if (typeof probeLengthscales !== "boolean") throw new TypeError(`${fn}: options.probeLengthscales must be a boolean, got ${typeof probeLengthscales}`);
   const seed = o.seed ?? 0;
   if (typeof seed !== "number" || !Number.isFinite(seed)) throw new RangeError(`${fn}: options.seed must be a finite number, got ${seed}`);
   return {
@@ -103,6 +106,7 @@ export function resolveGpOptions(fn: string, o: GaussianProcessOptions, d: numbe
     seed,
     maxIterations: int("options.maxIterations", o.maxIterations, 200, 1),
     subset,
+    probeLengthscales,
     polishIterations: o.polishIterations === undefined ? undefined : int("options.polishIterations", o.polishIterations, 0, 0),
     memoryBudgetBytes: positiveNumber(fn, "options.memoryBudgetBytes", o.memoryBudgetBytes ?? DEFAULT_GP_MEMORY_BUDGET),
     search(layout) {

@@ -38,7 +38,8 @@ export const gpFamily: ModelFamily = {
       ...(opts.threads === undefined ? {} : { workers: parseWhole("fit", "--threads", String(opts.threads), 1) }),
     });
     gp.diagnostics.targets.forEach((t, j) => {
-      say(`fit: ${t.target}: log marginal likelihood ${gp.logMarginalLikelihood()[j]!.toFixed(3)} (standardised target)`);
+      const polish = t.polishStart === undefined ? "" : `; polished on all rows from the ${t.polishStart}`;
+      say(`fit: ${t.target}: log marginal likelihood ${gp.logMarginalLikelihood()[j]!.toFixed(3)} (standardised target)${polish}`);
       for (const w of t.warnings) say(`fit: ${t.target}: warning: ${w}`);
     });
     return gp;

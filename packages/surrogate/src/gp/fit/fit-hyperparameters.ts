@@ -88,6 +88,29 @@ export function runRestart(x: Float64Array, y: Float64Array, search: Hyperparame
 }
 
 /**
+ * The log marginal likelihood at one θ without a search (one Cholesky factorisation, no gradient), as a restart
+ * outcome with zero iterations: used to compare candidate starts on all rows before a polish. A θ whose kernel
+ * matrix cannot be factorised counts as +∞.
+ * @param x - flat scaled inputs. @param y - standardised targets. @param search - kernel and layout.
+ * @param theta - the θ to evaluate (log space).
+ * @returns θ, its negative LML and a summary.
+ */
+export function runProbe(x: Float64Array, y: Float64Array, search: HyperparameterSearch, theta: Float64Array): RestartOutcome {
+  let value = Infinity;
+  try {
+    value = -logMarginalLikelihood(x, y, search.kernel, search.layout, theta, false).value;
+  } catch (error) {
+    if (!(error instanceof RangeError)) throw error;
+  }
+  if (Number.isNaN(value)) value = Infinity;
+  return {
+    theta,
+    value,
+    summary: { logMarginalLikelihood: -value, iterations: 0, evaluations: 1, converged: false, message: "probe" },
+  };
+}
+
+/**
  * Keeps the best of the restarts' outcomes, given in the order of their starts (the first of equal values wins), and
  * flags the θ entries that ended on a bound.
  * @param search - the search settings (bounds). @param outcomes - one per start, in start order.

@@ -1,12 +1,11 @@
-// Worker thread of fitGaussianProcessParallel: runs one hyperparameter restart per message (runRestart, the code the
-// serial fit runs) and posts its outcome back. Loaded by run-restarts-on-workers.ts; not part of the public API.
+// Worker thread of fitGaussianProcessParallel: runs one hyperparameter restart or probe per message (runRestartTask, the
+// code the serial fit runs) and posts its outcome back. Loaded by run-restarts-on-workers.ts; not part of the public API.
 import { parentPort } from "node:worker_threads";
-import { runRestart } from "./fit-hyperparameters.js";
-import type { RestartTask } from "./run-restarts-on-workers.js";
+import { runRestartTask, type RestartTask } from "./run-restarts-on-workers.js";
 
 parentPort?.on("message", (task: RestartTask) => {
   try {
-    const r = runRestart(task.x, task.y, task.search, task.start);
+    const r = runRestartTask(task);
     parentPort!.postMessage({ id: task.id, outcome: r });
   } catch (error) {
     parentPort!.postMessage({ id: task.id, error: error instanceof Error ? error.message : String(error) });

@@ -1,5 +1,5 @@
 import { Worker } from "node:worker_threads";
-import { runRestart, type HyperparameterSearch, type RestartOutcome } from "./fit-hyperparameters.js";
+import { runProbe, runRestart, type HyperparameterSearch, type RestartOutcome } from "./fit-hyperparameters.js";
 
 /** One hyperparameter restart to run: the rows, the search and the start. */
 export interface RestartTask {
@@ -8,12 +8,22 @@ export interface RestartTask {
   readonly y: Float64Array;
   readonly search: HyperparameterSearch;
   readonly start: Float64Array;
+  /** Evaluate the likelihood at `start` only (runProbe) instead of searching from it. */
+  readonly probe?: boolean;
+}
+
+/**
+ * Runs one task on the calling thread: runProbe when `task.probe` is set, else runRestart.
+ * @param task - the task. @returns its outcome.
+ */
+export function runRestartTask(task: Omit<RestartTask, "id">): RestartOutcome {
+  return task.probe === true ? runProbe(task.x, task.y, task.search, task.start) : runRestart(task.x, task.y, task.search, task.start);
 }
 
 type Reply = { id: number; outcome: RestartOutcome } | { id: number; error: string };
 
 /**
- * Runs restarts on up to `workers` worker threads (node:worker_threads), each thread taking the next task when it
+ * Runs restarts (and probes) on up to `workers` worker threads (node:worker_threads), each thread taking the next task when it
  * finishes one, and returns the outcomes in task order, so the result does not depend on which thread ran what. With
  * one worker or one task they run on the calling thread. The threads are stopped before the promise settles.
  * @param tasks - the restarts. @param workers - most threads at once (an integer ≥ 1).
@@ -22,7 +32,7 @@ type Reply = { id: number; outcome: RestartOutcome } | { id: number; error: stri
  */
 export async function runRestartsOnWorkers(tasks: readonly Omit<RestartTask, "id">[], workers: number): Promise<RestartOutcome[]> {
   const count = Math.min(workers, tasks.length);
-  if (count <= 1) return tasks.map((t) => runRestart(t.x, t.y, t.search, t.start));
+  if (count <= 1) return tasks.map(runRestartTask);
   const outcomes = new Array<RestartOutcome>(tasks.length);
   const threads: Worker[] = [];
   let next = 0;
