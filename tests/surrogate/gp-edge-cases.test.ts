@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { fitGaussianProcess, gpMemoryBytes } from "@floorcast/surrogate";
+import { fitGaussianProcess, gpMemoryBytes, loadSurrogate, type GaussianProcess } from "@floorcast/surrogate";
 
 const data = (x: number[][], y: number[][]) => ({ inputs: x[0] ? x[0].map((_, k) => `x${k}`) : ["x0"], targets: y[0] ? y[0].map((_, k) => `y${k}`) : ["y0"], x, y });
 
@@ -95,6 +95,15 @@ describe("fitGaussianProcess edge cases", () => {
     expect(unpolished.diagnostics.polishIterations).toBe(0);
     expect(gp.logMarginalLikelihood()[0]!).toBeGreaterThanOrEqual(unpolished.logMarginalLikelihood()[0]!);
     expect(gp.toJSON().payload.trainingInputs).toHaveLength(120);
+    // The polish start is named in the diagnostics and survives the model file; without a polish there is none.
+    const start = gp.diagnostics.targets[0]!.polishStart;
+    expect(start).toMatch(/^(subset optimum|lengthscale\[x\d\] (× 1\/(4|16)|= 1(\/4)?))/);
+    const loaded = loadSurrogate(JSON.stringify(gp.toJSON())) as GaussianProcess;
+    expect(loaded.diagnostics.targets[0]!.polishStart).toBe(start);
+    expect(unpolished.diagnostics.targets[0]!.polishStart).toBeUndefined();
+    expect(() => fitGaussianProcess(data(x, y), { probeLengthscales: "yes" as unknown as boolean })).toThrow(
+      /^fitGaussianProcess: options\.probeLengthscales must be a boolean/,
+    );
     const full = fitGaussianProcess(data(x, y), { hyperparameterSubset: false });
     expect(full.diagnostics.hyperparameterRows).toBe(120);
     // Both interpolate the training rows (noise ≥ 1e-6 floor): training-row error tiny relative to the range (derived).
