@@ -5,7 +5,7 @@ export { kendallTau } from "./kendall-tau.js";
 export { topKOverlap } from "./top-k-overlap.js";
 export { optimumGap } from "./optimum-gap.js";
 export { exactEvaluator } from "./exact-evaluator.js";
-export type { CountingEvaluator } from "./exact-evaluator.js";
+export type { CountingEvaluator } from "./counting-evaluator.js";
 export { surrogateEvaluator } from "./surrogate-evaluator.js";
 export type { BatchPredictor } from "./surrogate-evaluator.js";
 export { findExactOptimum } from "./find-exact-optimum.js";

@@ -1,6 +1,6 @@
 import { evaluateMassing, massingOutputs, type MassingInput } from "@floorcast/sampler";
 import type { Design, Outputs } from "../optimize/optimization-problem.js";
-import type { CountingEvaluator } from "../harness/exact-evaluator.js";
+import { countingEvaluator, type CountingEvaluator } from "../harness/counting-evaluator.js";
 import { parcelDesignInput } from "./parcel-design-variables.js";
 
 /**
@@ -12,7 +12,6 @@ import { parcelDesignInput } from "./parcel-design-variables.js";
  * @returns a counting evaluator.
  */
 export function parcelEvaluator(zone: MassingInput): CountingEvaluator {
-  let count = 0;
   const one = (d: Design): Outputs => {
     try {
       const out = massingOutputs(evaluateMassing(parcelDesignInput(zone, d)));
@@ -22,16 +21,5 @@ export function parcelEvaluator(zone: MassingInput): CountingEvaluator {
       throw error;
     }
   };
-  return {
-    name: "exact: parcel",
-    concurrency: 1,
-    close: async () => {},
-    get count() {
-      return count;
-    },
-    evaluate(batch: readonly Design[]): Promise<readonly Outputs[]> {
-      count += batch.length;
-      return Promise.resolve(batch.map(one));
-    },
-  };
+  return countingEvaluator("exact: parcel", (batch) => Promise.resolve(batch.map(one)));
 }
