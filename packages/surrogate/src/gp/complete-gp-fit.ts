@@ -38,7 +38,7 @@ export function completeGpFit(plan: GpFitPlan, searches: readonly (GpTargetSearc
     } else {
       restarts = s.fit.restarts.map((r) => r.logMarginalLikelihood);
       const fit = s.polished ?? s.fit;
-      polishStart = s.polished === undefined ? undefined : s.polishStart;
+      polishStart = s.polishStart;
       h = hyperparametersFromTheta(plan.layout, fit.theta);
       onBounds = fit.onBound.flatMap((b, i) => (b ? [`${thetaName(plan.layout, plan.data.inputs, i)}=${b}`] : []));
     }

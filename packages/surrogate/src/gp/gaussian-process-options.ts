@@ -45,7 +45,7 @@ export interface GaussianProcessOptions {
   readonly polishIterations?: number;
   /**
    * Before a polish, compare on all rows the subset's optimum with it after shortening each ARD lengthscale in turn
-   * by ¼ and 1/16, and polish from the best [true]. A subset cannot resolve structure finer than its spacing (such as
+   * (× 1/4 and × 1/16, and set to 1 and 1/4 of the unit cube when longer), and polish from the best [true]. A subset cannot resolve structure finer than its spacing (such as
    * FAR or whole-floor steps along one input); without the probes the polish stays in the basin the subset found.
    */
   readonly probeLengthscales?: boolean;

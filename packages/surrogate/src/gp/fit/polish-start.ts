@@ -6,8 +6,6 @@ export interface PolishCandidate {
   readonly theta: Float64Array;
   /** "subset optimum", or e.g. "lengthscale[maxFar] × 1/4" for a probe. */
   readonly label: string;
-  /** The lengthscale a probe shortens (undefined for the subset's optimum). */
-  readonly dim?: number;
 }
 
 /**
@@ -26,7 +24,7 @@ export function polishCandidates(
   const probes = probe ? shorterLengthscaleProbes(fit.theta, search.layout, search.logLower) : [];
   return [
     { theta: fit.theta, label: "subset optimum" },
-    ...probes.map((p) => ({ theta: p.theta, label: `lengthscale[${inputs[p.dim]}] ${p.change}`, dim: p.dim })),
+    ...probes.map((p) => ({ theta: p.theta, label: `lengthscale[${inputs[p.dim]}] ${p.change}` })),
   ];
 }
 

@@ -25,8 +25,8 @@ export interface LengthscaleProbe {
 /**
  * The probes of a subset optimum: θ with one ARD lengthscale at a time multiplied by each of
  * {@link PROBE_FACTORS}, then set to each of {@link PROBE_LENGTHSCALES} that is shorter, in log space, clamped to
- * the lower bound; a probe that would not shorten it, or within a factor of 2 of an earlier probe of the same
- * lengthscale, is left out. Nothing for a shared lengthscale (ARD off).
+ * the lower bound; a probe that would not shorten it by more than a factor of 2, or within a factor of 2 of an
+ * earlier probe of the same lengthscale, is left out. Nothing for a shared lengthscale (ARD off).
  * @param theta - the subset's optimum (log space). @param layout - θ layout. @param logLower - lower bounds.
  * @returns the probes, lengthscale by lengthscale.
  */
